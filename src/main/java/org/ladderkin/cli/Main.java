@@ -1,0 +1,45 @@
+package org.ladderkin.cli;
+
+import java.io.PrintWriter;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Spec;
+
+/** The {@code ladderkin} command: a top command whose subcommands do the work. */
+@Command(name = "ladderkin",
+        mixinStandardHelpOptions = true,
+        versionProvider = VersionProvider.class,
+        description = {
+            "Plan and analyse pump-probe and time-resolved PL campaigns on semiconductor nanocrystals:",
+            "multiexciton kinetics, fluence series, risks and global fits."},
+        subcommands = {PlanCommand.class, CommandLine.HelpCommand.class},
+        footer = {"", "Quantities take units as written in the lab: 50 ps, 1 kHz, 2.5 µJ (or uJ), 0.3 mJ/cm², 400 nm.",
+            "Exit codes: 0 ok, 2 bad command line, 3 bad input, 4 cannot write output, 1 internal error."})
+public final class Main implements Runnable {
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    /** A configured command line, used by {@link #main} and by tests with captured streams. */
+    public static CommandLine commandLine(PrintWriter out, PrintWriter err) {
+        CommandLine cmd = new CommandLine(new Main());
+        cmd.setOut(out);
+        cmd.setErr(err);
+        cmd.setExecutionExceptionHandler(new ErrorReporter());
+        cmd.setExitCodeExceptionMapper(ex -> ExitCodes.USAGE);
+        cmd.setCaseInsensitiveEnumValuesAllowed(true);
+        return cmd;
+    }
+
+    public static void main(String[] args) {
+        PrintWriter out = new PrintWriter(System.out, true);
+        PrintWriter err = new PrintWriter(System.err, true);
+        System.exit(commandLine(out, err).execute(args));
+    }
+}

@@ -1,0 +1,78 @@
+package org.ladderkin.io;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.io.OutputStreamWriter;
+import java.io.Writer;
+import java.nio.channels.Channels;
+import java.nio.channels.FileChannel;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+
+/**
+ * Every file ladderkin writes goes through here: the content is written to a temporary file in the same folder,
+ * flushed to disk, and then moved over the target in one step. A failure at any point leaves the old file as it was
+ * and removes the temporary file.
+ */
+public final class AtomicFiles {
+
+    /** Writes the content of a file; may throw, in which case nothing is replaced. */
+    @FunctionalInterface
+    public interface Content {
+        void writeTo(OutputStream out) throws IOException;
+    }
+
+    /** Writes text content; may throw, in which case nothing is replaced. */
+    @FunctionalInterface
+    public interface TextContent {
+        void writeTo(Writer out) throws IOException;
+    }
+
+    private AtomicFiles() {
+    }
+
+    /** Replaces {@code target} with the bytes {@code content} writes, or leaves it untouched on failure. */
+    public static void write(Path target, Content content) throws IOException {
+        Path absolute = target.toAbsolutePath();
+        Path dir = absolute.getParent();
+        Files.createDirectories(dir);
+        Path tmp = Files.createTempFile(dir, "." + absolute.getFileName() + ".", ".tmp");
+        boolean moved = false;
+        try {
+            try (FileChannel channel = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING);
+                 OutputStream out = Channels.newOutputStream(channel)) {
+                content.writeTo(out);
+                out.flush();
+                channel.force(true);
+            }
+            try {
+                Files.move(tmp, absolute, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(tmp, absolute, StandardCopyOption.REPLACE_EXISTING);
+            }
+            moved = true;
+        } finally {
+            if (!moved) {
+                Files.deleteIfExists(tmp);
+            }
+        }
+    }
+
+    /** Replaces {@code target} with UTF-8 text, or leaves it untouched on failure. */
+    public static void writeText(Path target, TextContent content) throws IOException {
+        write(target, out -> {
+            Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
+            content.writeTo(w);
+            w.flush();
+        });
+    }
+
+    /** Replaces {@code target} with the UTF-8 string {@code text}. */
+    public static void writeString(Path target, String text) throws IOException {
+        write(target, out -> out.write(text.getBytes(StandardCharsets.UTF_8)));
+    }
+}

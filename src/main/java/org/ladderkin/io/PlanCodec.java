@@ -1,0 +1,189 @@
+package org.ladderkin.io;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Set;
+import org.ladderkin.io.json.JsonTree;
+import org.ladderkin.io.json.Node;
+import org.ladderkin.plan.Goal;
+import org.ladderkin.plan.Instrument;
+import org.ladderkin.plan.LaserSetup;
+import org.ladderkin.plan.Limits;
+import org.ladderkin.plan.PlanInputs;
+import org.ladderkin.plan.SampleSection;
+import org.ladderkin.units.Dimension;
+import org.ladderkin.units.Photon;
+import org.ladderkin.units.Quantity;
+
+/** Reads campaign plan files, schema {@code ladderkin.plan/1}. */
+public final class PlanCodec {
+
+    /** Schema name of plan files. */
+    public static final String SCHEMA = "ladderkin.plan";
+    /** Newest plan schema version this build reads and writes. */
+    public static final int VERSION = 1;
+
+    private PlanCodec() {
+    }
+
+    /** Reads a plan file; every problem is an {@link InputException} with file, line, column and field. */
+    public static PlanInputs read(Path file) {
+        return read(JsonTree.read(file, file.toString()));
+    }
+
+    /** Reads a plan from parsed JSON. */
+    public static PlanInputs read(Node root) {
+        root.schema(SCHEMA, VERSION);
+        String title = root.field("title").string();
+        String lab = root.optional("lab").map(Node::string).orElse("");
+        SampleSection sample = sample(root.field("sample"));
+        LaserSetup laser = laser(root.field("laser"));
+        List<Instrument> instruments = root.field("instruments").items(1).stream().map(PlanCodec::instrument).toList();
+        Node goalsNode = root.field("goals");
+        Set<Goal> goals = EnumSet.noneOf(Goal.class);
+        for (Node g : goalsNode.field("measure").items(1)) {
+            Goal goal = Goal.byKey(g.string());
+            if (goal == null) {
+                throw g.error("unknown goal '" + g.string() + "' (allowed: " + Goal.keys() + ")");
+            }
+            if (!goals.add(goal)) {
+                throw g.error("goal '" + g.string() + "' is listed twice");
+            }
+        }
+        List<Double> cmEnergies = new ArrayList<>();
+        goalsNode.optional("multiplicationPhotonEnergies").ifPresent(n -> {
+            for (Node e : n.items(1)) {
+                cmEnergies.add(photonEnergyJ(e));
+            }
+        });
+        if (goals.contains(Goal.MULTIPLICATION_YIELD) && cmEnergies.isEmpty()) {
+            throw goalsNode.error("goal 'multiplication-yield' needs 'multiplicationPhotonEnergies' (e.g. [\"3.1 eV\"])");
+        }
+        goalsNode.finish();
+        Limits limits = limits(root.field("limits"));
+        root.finish();
+        return new PlanInputs(title, lab, sample, laser, instruments, goals, cmEnergies, limits);
+    }
+
+    private static SampleSection sample(Node n) {
+        String name = n.field("name").string();
+        String material = n.field("material").string();
+        String sizeBy = n.oneOf("diameter", "firstExcitonPeak");
+        double diameterM = Double.NaN;
+        double firstPeakM = Double.NaN;
+        if (sizeBy.equals("diameter")) {
+            diameterM = n.field("diameter").positive(Dimension.LENGTH, null);
+        } else {
+            firstPeakM = n.field("firstExcitonPeak").positive(Dimension.LENGTH, null);
+        }
+        double dispersion = n.optional("sizeDispersion").map(Node::probability).orElse(0.0);
+        double od = n.field("absorbanceAtPump").nonNegative(Dimension.ABSORBANCE, null);
+        double path = n.field("pathLength").positive(Dimension.LENGTH, null);
+        String matrix = n.field("matrix").string();
+        Node refreshNode = n.field("refresh");
+        SampleSection.Refresh refresh = switch (refreshNode.field("mode").choice("static", "stirred", "flowing")) {
+            case "static" -> SampleSection.Refresh.STATIC;
+            case "stirred" -> SampleSection.Refresh.STIRRED;
+            default -> SampleSection.Refresh.FLOWING;
+        };
+        double flow = 0;
+        if (refresh == SampleSection.Refresh.FLOWING) {
+            flow = refreshNode.field("flowRate").positive(Dimension.VOLUMETRIC_FLOW, null);
+        }
+        refreshNode.finish();
+        n.finish();
+        return new SampleSection(name, material, diameterM, firstPeakM, dispersion, od, path, matrix, refresh, flow);
+    }
+
+    private static LaserSetup laser(Node n) {
+        List<Double> wavelengths = n.field("pumpWavelengths").items(1).stream()
+                .map(w -> w.positive(Dimension.LENGTH, null)).toList();
+        double rep = n.field("repetitionRate").positive(Dimension.FREQUENCY, null);
+        List<Integer> divisions = n.optional("pulsePickerDivisions")
+                .map(d -> d.items(1).stream().map(i -> i.integer(1, 1_000_000_000)).toList())
+                .orElse(List.of(1));
+        double fwhm = n.field("pulseWidth").positive(Dimension.TIME, null);
+        Node range = n.field("pulseEnergyRange");
+        List<Node> ends = range.items(2);
+        if (ends.size() != 2) {
+            throw range.error("needs exactly two energies [lowest, highest], found " + ends.size());
+        }
+        double lo = ends.get(0).positive(Dimension.ENERGY, null);
+        double hi = ends.get(1).positive(Dimension.ENERGY, null);
+        if (lo > hi) {
+            throw range.error("lowest energy is above the highest (write [lowest, highest])");
+        }
+        double pump = n.field("pumpRadius").positive(Dimension.LENGTH, null);
+        double probe = n.field("probeRadius").positive(Dimension.LENGTH, null);
+        n.finish();
+        return new LaserSetup(wavelengths, rep, divisions, fwhm, lo, hi, pump, probe);
+    }
+
+    private static Instrument instrument(Node n) {
+        String kind = n.field("kind").choice(Instrument.Kind.TRANSIENT_ABSORPTION.key(), Instrument.Kind.TCSPC.key());
+        Instrument inst;
+        if (kind.equals(Instrument.Kind.TCSPC.key())) {
+            double bin = n.field("timeBin").positive(Dimension.TIME, null);
+            Node rangeNode = n.field("timeRange");
+            double range = rangeNode.positive(Dimension.TIME, null);
+            double irf = n.field("irfFwhm").positive(Dimension.TIME, null);
+            double countFraction = n.optional("maxCountFraction").map(Node::probability).orElse(0.05);
+            if (bin >= range) {
+                throw rangeNode.error("time range must exceed the time bin");
+            }
+            inst = new Instrument(Instrument.Kind.TCSPC, bin, range, 0, irf, countFraction);
+        } else {
+            Node range = n.field("delayRange");
+            List<Node> ends = range.items(2);
+            if (ends.size() != 2) {
+                throw range.error("needs exactly two delays [shortest, longest], found " + ends.size());
+            }
+            double lo = ends.get(0).positive(Dimension.TIME, null);
+            double hi = ends.get(1).positive(Dimension.TIME, null);
+            if (lo >= hi) {
+                throw range.error("shortest delay must be below the longest (write [shortest, longest])");
+            }
+            double noise = n.field("noiseFloor").positive(Dimension.ABSORBANCE, null);
+            double irf = n.field("irfFwhm").positive(Dimension.TIME, null);
+            inst = new Instrument(Instrument.Kind.TRANSIENT_ABSORPTION, lo, hi, noise, irf, 0);
+        }
+        n.finish();
+        return inst;
+    }
+
+    private static Limits limits(Node n) {
+        Node riseNode = n.field("maxTemperatureRise");
+        Quantity rise = riseNode.quantity(Dimension.TEMPERATURE, null);
+        if (rise.unit().offsetSi() != 0 || !(rise.si() > 0)) {
+            throw riseNode.error("a temperature rise must be > 0 and given in K (e.g. \"5 K\"), was " + rise.format());
+        }
+        double dT = rise.si();
+        double charged = n.field("maxChargedFraction").probability();
+        double residual = n.field("maxResidualExcitation").probability();
+        double beam = n.field("beamTime").positive(Dimension.TIME, null);
+        n.finish();
+        return new Limits(dT, charged, residual, beam);
+    }
+
+    /** A photon given as an energy ("3.1 eV") or a vacuum wavelength ("400 nm"), returned as energy (J). */
+    static double photonEnergyJ(Node n) {
+        String text = n.kind() == Node.Kind.STRING ? n.string() : null;
+        if (text != null) {
+            Quantity q;
+            try {
+                q = Quantity.parse(text);
+            } catch (IllegalArgumentException e) {
+                throw n.error(e.getMessage());
+            }
+            if (q.dimension() == Dimension.LENGTH && q.si() > 0) {
+                return Photon.energyJ(q.si());
+            }
+            if (q.dimension() == Dimension.ENERGY && q.si() > 0) {
+                return q.si();
+            }
+        }
+        throw n.error("expected a photon energy or wavelength such as \"3.1 eV\" or \"400 nm\"");
+    }
+}
