@@ -1,0 +1,146 @@
+package org.ladderkin.kinetics;
+
+import java.util.Arrays;
+import java.util.HashMap;
+import java.util.Map;
+import org.ladderkin.kinetics.propagate.ExactPropagator;
+import org.ladderkin.kinetics.rate.GeneratorBuilder;
+import org.ladderkin.kinetics.state.LadderSpace;
+import org.ladderkin.kinetics.train.PeriodicSteadyState;
+import org.ladderkin.kinetics.train.PulseExcitation;
+import org.ladderkin.kinetics.train.PulseMatrix;
+import org.ladderkin.kinetics.train.SteadyState;
+
+/**
+ * The engine facade for one model on one ladder: assembles the between-pulse generator once, decomposes it once
+ * ({@link ExactPropagator}), and answers traces, single pulses and pulse-train steady states from that. Caches the
+ * one-period propagator per period and the mode factors per delay grid, so a sweep over ⟨N⟩ pays for them once.
+ * Not thread-safe (the caches); use one instance per thread.
+ */
+public final class LadderKinetics {
+
+    private final KineticModel model;
+    private final LadderSpace space;
+    private final double[][] generator;
+    private final ExactPropagator propagator;
+    private final double[] bleach;
+    private final double[] photoluminescence;
+    private final Map<Double, double[][]> periodMaps = new HashMap<>();
+    private double[] gridTimes;
+    private ExactPropagator.Grid grid;
+
+    private LadderKinetics(KineticModel model, LadderSpace space) {
+        this.model = model;
+        this.space = space;
+        this.generator = GeneratorBuilder.build(space, model.processes());
+        this.propagator = ExactPropagator.of(generator);
+        this.bleach = Observables.bleach(space, model.degeneracy());
+        this.photoluminescence = Observables.photoluminescence(space, model);
+    }
+
+    /** The model on a given ladder. */
+    public static LadderKinetics on(KineticModel model, LadderSpace space) {
+        return new LadderKinetics(model, space);
+    }
+
+    /** The model with Nmax chosen so that the strongest of the given pulses leaves a tail below 1e-9. */
+    public static LadderKinetics forPulses(KineticModel model, PulseExcitation... pulses) {
+        int nMax = 1;
+        for (PulseExcitation p : pulses) {
+            nMax = Math.max(nMax, p.cutoff(KineticModel.TAIL));
+        }
+        return new LadderKinetics(model, model.space(nMax));
+    }
+
+    public KineticModel model() {
+        return model;
+    }
+
+    public LadderSpace space() {
+        return space;
+    }
+
+    /** The generator Q (a copy). */
+    public double[][] generator() {
+        double[][] c = new double[generator.length][];
+        for (int i = 0; i < c.length; i++) {
+            c[i] = generator[i].clone();
+        }
+        return c;
+    }
+
+    public ExactPropagator propagator() {
+        return propagator;
+    }
+
+    /** Bleach observable (see {@link Observables#bleach}). */
+    public double[] bleachObservable() {
+        return bleach.clone();
+    }
+
+    /** PL observable in photons/s per dot. */
+    public double[] photoluminescenceObservable() {
+        return photoluminescence.clone();
+    }
+
+    /** Populations at time tS after {@code start}, checked against the invariants. */
+    public Populations propagate(Populations start, double tS) {
+        double[] p = propagator.propagate(start.probabilities(), tS);
+        PopulationGuard.check(space, p, tS, "after the last pulse");
+        return new Populations(space, p);
+    }
+
+    /** The distribution right after one pulse hits {@code before}. */
+    public Populations applyPulse(Populations before, PulseExcitation pulse) {
+        double[][] e = PulseMatrix.of(space, pulse);
+        double[] b = before.probabilities();
+        double[] a = new double[b.length];
+        for (int i = 0; i < a.length; i++) {
+            double s = 0;
+            for (int j = 0; j < a.length; j++) {
+                s += e[i][j] * b[j];
+            }
+            a[i] = s;
+        }
+        PopulationGuard.check(space, a, 0, "just after the pulse");
+        return new Populations(space, a);
+    }
+
+    /** Bleach and PL at the given delays after the pulse that produced {@code afterPulse}. */
+    public Trace trace(Populations afterPulse, double[] delaysS) {
+        if (grid == null || !Arrays.equals(gridTimes, delaysS)) {
+            gridTimes = delaysS.clone();
+            grid = propagator.onGrid(delaysS);
+        }
+        double[][] signals = grid.observe(new double[][] {bleach, photoluminescence}, afterPulse.probabilities());
+        return new Trace(delaysS, signals[0], signals[1]);
+    }
+
+    /** One pulse on dots in the ground state, then the trace. */
+    public Trace singlePulse(PulseExcitation pulse, double[] delaysS) {
+        return trace(applyPulse(Populations.ground(space), pulse), delaysS);
+    }
+
+    /** The one-period solver for pulses every {@code periodS}. */
+    public PeriodicSteadyState pulseTrain(PulseExcitation pulse, double periodS) {
+        if (!(periodS > 0) || !Double.isFinite(periodS)) {
+            throw new IllegalArgumentException("pulse period must be finite and > 0, was " + periodS + " s");
+        }
+        double[][] phi = periodMaps.computeIfAbsent(periodS, propagator::matrix);
+        return new PeriodicSteadyState(space, phi, PulseMatrix.of(space, pulse));
+    }
+
+    /**
+     * The periodic steady state for pulses every {@code periodS}.
+     *
+     * @param withConvergence also compute |λ₂| and the pulses to reach 1 % (one dense eigen-decomposition)
+     */
+    public SteadyState steadyState(PulseExcitation pulse, double periodS, boolean withConvergence) {
+        PeriodicSteadyState train = pulseTrain(pulse, periodS);
+        Populations before = new Populations(space, train.fixedPoint());
+        Populations after = applyPulse(before, pulse);
+        double lambda2 = withConvergence ? train.secondEigenvalueModulus() : Double.NaN;
+        int pulses = withConvergence ? PeriodicSteadyState.pulsesToOnePercent(lambda2) : -1;
+        return new SteadyState(before, after, before.excitedFraction(), before.chargedFraction(), lambda2, pulses);
+    }
+}

@@ -1,0 +1,434 @@
+package org.ladderkin.kinetics.propagate;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+
+/**
+ * Exact propagation p(t) = exp(Q·t)·p(0) for a constant upper-triangular generator Q (the between-pulse generator in
+ * the order of {@link org.ladderkin.kinetics.state.LadderSpace}).
+ *
+ * <p>Method: a block Schur–Parlett decomposition in the spirit of Davies &amp; Higham, "A Schur–Parlett algorithm
+ * for computing matrix functions", SIAM J. Matrix Anal. Appl. 25, 464 (2003). The eigenvalues of a triangular Q are
+ * its diagonal. Diagonal entries closer than a relative gap δ are grouped into clusters; a unit upper-triangular V
+ * with Q = V·B·V⁻¹ is found by back-substitution in which B keeps only within-cluster couplings and every division
+ * is by a difference of eigenvalues from different clusters (never by a near-zero one). Then
+ * exp(Qt) = V·exp(Bt)·V⁻¹, where singleton clusters contribute e^{λt} and each larger cluster its small triangular
+ * block exponential e^{μt}·exp((B_c − μ)t) by {@link PadeExponential}. Exactly and nearly coincident rates are
+ * therefore handled without the breakdown of the Bateman closed form.
+ *
+ * <p>The conditioning of V grows as rates crowd together. If ‖V‖∞·‖V⁻¹‖∞ exceeds {@link #GROWTH_LIMIT}, δ is
+ * enlarged (more is clustered) and the decomposition redone; in the limit everything is one cluster, i.e. a plain
+ * Padé exponential per time.
+ *
+ * <p>Many delays are cheap: {@link #onGrid} precomputes the mode factors for a time grid once; each observable trace
+ * then costs O(delays × active modes), modes with λt &lt; −745 (underflow) being skipped.
+ */
+public final class ExactPropagator {
+
+    /** Largest accepted ‖V‖∞·‖V⁻¹‖∞ before clusters are widened. */
+    public static final double GROWTH_LIMIT = 1e8;
+    /** Successive relative gaps δ tried; the last one clusters everything. */
+    private static final double[] DELTAS = {1e-3, 1e-2, 5e-2, 0.2, 0.5, 1.0, Double.POSITIVE_INFINITY};
+    private static final double UNDERFLOW = -745;
+
+    private final int n;
+    private final double[][] v;
+    private final double[][] w;
+    private final double delta;
+    private final double growth;
+    /** Singleton modes sorted by decreasing eigenvalue (slowest first). */
+    private final int[] singleIndex;
+    private final double[] singleLambda;
+    private final List<Cluster> clusters;
+
+    /** A group of (nearly) coincident eigenvalues with its triangular block of B. */
+    private record Cluster(int[] members, double[][] block, double muPerS) {
+    }
+
+    private ExactPropagator(int n, double[][] v, double[][] w, double delta, double growth, int[] singleIndex,
+                            double[] singleLambda, List<Cluster> clusters) {
+        this.n = n;
+        this.v = v;
+        this.w = w;
+        this.delta = delta;
+        this.growth = growth;
+        this.singleIndex = singleIndex;
+        this.singleLambda = singleLambda;
+        this.clusters = clusters;
+    }
+
+    /** Decomposes an upper-triangular generator (rates in 1/s), starting from δ = 1e-3. */
+    public static ExactPropagator of(double[][] q) {
+        return of(q, DELTAS[0]);
+    }
+
+    /** Decomposes with a given starting relative gap δ (widened automatically if V is badly conditioned). */
+    public static ExactPropagator of(double[][] q, double startDelta) {
+        int n = q.length;
+        for (int i = 0; i < n; i++) {
+            if (q[i].length != n) {
+                throw new IllegalArgumentException("generator must be square, row " + i + " has " + q[i].length + " entries");
+            }
+            for (int j = 0; j < i; j++) {
+                if (q[i][j] != 0) {
+                    throw new IllegalArgumentException("generator is not upper triangular: Q[" + i + "][" + j + "] = " + q[i][j]);
+                }
+            }
+            for (int j = i; j < n; j++) {
+                if (!Double.isFinite(q[i][j])) {
+                    throw new IllegalArgumentException("generator entry Q[" + i + "][" + j + "] is not finite");
+                }
+            }
+        }
+        ExactPropagator best = null;
+        for (double d : DELTAS) {
+            if (d < startDelta) {
+                continue;
+            }
+            best = decompose(q, d);
+            if (best.growth <= GROWTH_LIMIT) {
+                return best;
+            }
+        }
+        return best;
+    }
+
+    private static ExactPropagator decompose(double[][] q, double delta) {
+        int n = q.length;
+        int[] cl = clusterLabels(q, delta);
+        double[][] v = new double[n][n];
+        double[][] b = new double[n][n];
+        for (int j = 0; j < n; j++) {
+            v[j][j] = 1;
+            b[j][j] = q[j][j];
+            for (int i = j - 1; i >= 0; i--) {
+                double rhs = 0;
+                for (int k = i + 1; k < j; k++) {
+                    rhs += v[i][k] * b[k][j];
+                }
+                for (int k = i + 1; k <= j; k++) {
+                    rhs -= q[i][k] * v[k][j];
+                }
+                if (cl[i] != cl[j]) {
+                    v[i][j] = rhs / (q[i][i] - q[j][j]);
+                } else {
+                    b[i][j] = -rhs;
+                }
+            }
+        }
+        double[][] w = new double[n][n];
+        for (int j = 0; j < n; j++) {
+            w[j][j] = 1;
+            for (int i = j - 1; i >= 0; i--) {
+                double s = 0;
+                for (int k = i + 1; k <= j; k++) {
+                    s -= v[i][k] * w[k][j];
+                }
+                w[i][j] = s;
+            }
+        }
+        double growth = normInf(v) * normInf(w);
+        int labels = Arrays.stream(cl).max().orElse(-1) + 1;
+        List<List<Integer>> members = new ArrayList<>();
+        for (int c = 0; c < labels; c++) {
+            members.add(new ArrayList<>());
+        }
+        for (int i = 0; i < n; i++) {
+            members.get(cl[i]).add(i);
+        }
+        List<Integer> singles = new ArrayList<>();
+        List<Cluster> clusters = new ArrayList<>();
+        for (List<Integer> m : members) {
+            if (m.size() == 1) {
+                singles.add(m.get(0));
+            } else if (m.size() > 1) {
+                int[] idx = m.stream().mapToInt(Integer::intValue).toArray();
+                double[][] block = new double[idx.length][idx.length];
+                double mu = Double.NEGATIVE_INFINITY;
+                for (int r = 0; r < idx.length; r++) {
+                    mu = Math.max(mu, q[idx[r]][idx[r]]);
+                    for (int c = 0; c < idx.length; c++) {
+                        block[r][c] = b[idx[r]][idx[c]];
+                    }
+                }
+                for (int r = 0; r < idx.length; r++) {
+                    block[r][r] -= mu;
+                }
+                clusters.add(new Cluster(idx, block, mu));
+            }
+        }
+        singles.sort((x, y) -> Double.compare(q[y][y], q[x][x]));
+        int[] singleIndex = singles.stream().mapToInt(Integer::intValue).toArray();
+        double[] singleLambda = new double[singleIndex.length];
+        for (int k = 0; k < singleIndex.length; k++) {
+            singleLambda[k] = q[singleIndex[k]][singleIndex[k]];
+        }
+        return new ExactPropagator(n, v, w, delta, growth, singleIndex, singleLambda, List.copyOf(clusters));
+    }
+
+    /** Cluster label of each diagonal entry: sorted eigenvalues are chained while neighbours are within δ. */
+    private static int[] clusterLabels(double[][] q, double delta) {
+        int n = q.length;
+        Integer[] order = new Integer[n];
+        for (int i = 0; i < n; i++) {
+            order[i] = i;
+        }
+        Arrays.sort(order, (x, y) -> Double.compare(q[x][x], q[y][y]));
+        int[] cl = new int[n];
+        int label = 0;
+        for (int k = 0; k < n; k++) {
+            if (k > 0) {
+                double a = q[order[k - 1]][order[k - 1]];
+                double c = q[order[k]][order[k]];
+                boolean close = Math.abs(c - a) <= delta * Math.max(Math.abs(a), Math.abs(c));
+                if (!close) {
+                    label++;
+                }
+            }
+            cl[order[k]] = label;
+        }
+        return cl;
+    }
+
+    private static double normInf(double[][] a) {
+        double max = 0;
+        for (double[] row : a) {
+            double s = 0;
+            for (double x : row) {
+                s += Math.abs(x);
+            }
+            max = Math.max(max, s);
+        }
+        return max;
+    }
+
+    /** Number of states. */
+    public int dimension() {
+        return n;
+    }
+
+    /** Relative gap δ finally used for clustering. */
+    public double delta() {
+        return delta;
+    }
+
+    /** ‖V‖∞·‖V⁻¹‖∞ of the block decomposition: rounding errors are about this times 1e-16. */
+    public double growth() {
+        return growth;
+    }
+
+    /** Number of states in clusters of two or more (handled by small dense exponentials). */
+    public int clusteredStates() {
+        return clusters.stream().mapToInt(c -> c.members.length).sum();
+    }
+
+    /** p(t) = exp(Qt)·p0, t ≥ 0 in seconds. Entries within their own rounding bound of zero are set to zero. */
+    public double[] propagate(double[] p0, double tS) {
+        requireTime(tS);
+        double[] y = modal(p0, tS, false);
+        double[] yAbs = modal(p0, tS, true);
+        double[] p = new double[n];
+        for (int i = 0; i < n; i++) {
+            double s = 0;
+            double bound = 0;
+            double[] vi = v[i];
+            for (int k = i; k < n; k++) {
+                s += vi[k] * y[k];
+                bound += Math.abs(vi[k]) * yAbs[k];
+            }
+            // a true population is ≥ 0; a negative value inside the rounding bound is rounding, not physics
+            p[i] = (s < 0 && -s <= 8 * n * Math.ulp(1.0) * bound) ? 0.0 : s;
+        }
+        return p;
+    }
+
+    /** exp(Bt)·W·p0 (or its entrywise-absolute bound). */
+    private double[] modal(double[] p0, double tS, boolean absolute) {
+        if (p0.length != n) {
+            throw new IllegalArgumentException("state vector has " + p0.length + " entries, generator " + n);
+        }
+        double[] wp = new double[n];
+        for (int i = 0; i < n; i++) {
+            double s = 0;
+            double[] wi = w[i];
+            for (int k = i; k < n; k++) {
+                s += absolute ? Math.abs(wi[k] * p0[k]) : wi[k] * p0[k];
+            }
+            wp[i] = s;
+        }
+        double[] y = new double[n];
+        for (int k = 0; k < singleIndex.length; k++) {
+            double x = singleLambda[k] * tS;
+            if (x >= UNDERFLOW) {
+                y[singleIndex[k]] = Math.exp(x) * wp[singleIndex[k]];
+            }
+        }
+        for (Cluster c : clusters) {
+            double[][] e = clusterExp(c, tS);
+            if (e == null) {
+                continue;
+            }
+            int m = c.members.length;
+            for (int r = 0; r < m; r++) {
+                double s = 0;
+                for (int col = 0; col < m; col++) {
+                    s += (absolute ? Math.abs(e[r][col]) : e[r][col]) * wp[c.members[col]];
+                }
+                y[c.members[r]] = s;
+            }
+        }
+        return y;
+    }
+
+    /** exp(B_c·t), or null when it underflows entirely. */
+    private static double[][] clusterExp(Cluster c, double tS) {
+        double x = c.muPerS * tS;
+        if (x < UNDERFLOW) {
+            return null;
+        }
+        double[][] e = PadeExponential.exp(c.block, tS);
+        double f = Math.exp(x);
+        for (double[] row : e) {
+            for (int j = 0; j < row.length; j++) {
+                row[j] *= f;
+            }
+        }
+        return e;
+    }
+
+    /** The full propagator matrix exp(Qt). */
+    public double[][] matrix(double tS) {
+        requireTime(tS);
+        double[][] out = new double[n][n];
+        double[] e = new double[n];
+        for (int col = 0; col < n; col++) {
+            Arrays.fill(e, 0);
+            e[col] = 1;
+            double[] y = modal(e, tS, false);
+            for (int i = 0; i < n; i++) {
+                double s = 0;
+                for (int k = i; k < n; k++) {
+                    s += v[i][k] * y[k];
+                }
+                out[i][col] = s;
+            }
+        }
+        return out;
+    }
+
+    /** Precomputes the mode factors at the given times (s, each ≥ 0) for cheap repeated traces. */
+    public Grid onGrid(double[] timesS) {
+        for (double t : timesS) {
+            requireTime(t);
+        }
+        return new Grid(timesS.clone());
+    }
+
+    private static void requireTime(double tS) {
+        if (!(tS >= 0) || !Double.isFinite(tS)) {
+            throw new IllegalArgumentException("propagation time must be finite and >= 0, was " + tS + " s");
+        }
+    }
+
+    /** Mode factors of this propagator on a fixed time grid. */
+    public final class Grid {
+
+        private final double[] timesS;
+        private final int[] active;
+        private final double[][] singleFactor;
+        private final double[][][][] clusterFactor;
+
+        private Grid(double[] timesS) {
+            this.timesS = timesS;
+            int nt = timesS.length;
+            active = new int[nt];
+            singleFactor = new double[nt][];
+            clusterFactor = new double[nt][clusters.size()][][];
+            for (int j = 0; j < nt; j++) {
+                double t = timesS[j];
+                int a = 0;
+                while (a < singleLambda.length && singleLambda[a] * t >= UNDERFLOW) {
+                    a++;
+                }
+                active[j] = a;
+                double[] f = new double[a];
+                for (int k = 0; k < a; k++) {
+                    f[k] = Math.exp(singleLambda[k] * t);
+                }
+                singleFactor[j] = f;
+                for (int c = 0; c < clusters.size(); c++) {
+                    clusterFactor[j][c] = clusterExp(clusters.get(c), t);
+                }
+            }
+        }
+
+        public double[] timesS() {
+            return timesS.clone();
+        }
+
+        /**
+         * The traces o_r·p(t_j) for each observable row o_r, starting from p0 at t = 0. Cost: O(n²) per observable
+         * for the mode amplitudes, then O(active modes) per time.
+         */
+        public double[][] observe(double[][] observables, double[] p0) {
+            int no = observables.length;
+            double[] wp = new double[n];
+            for (int i = 0; i < n; i++) {
+                double s = 0;
+                for (int k = i; k < n; k++) {
+                    s += w[i][k] * p0[k];
+                }
+                wp[i] = s;
+            }
+            double[][] u = new double[no][n];
+            for (int r = 0; r < no; r++) {
+                double[] o = observables[r];
+                if (o.length != n) {
+                    throw new IllegalArgumentException("observable has " + o.length + " entries, generator " + n);
+                }
+                for (int k = 0; k < n; k++) {
+                    double s = 0;
+                    for (int i = 0; i <= k; i++) {
+                        s += o[i] * v[i][k];
+                    }
+                    u[r][k] = s;
+                }
+            }
+            double[][] amp = new double[no][singleIndex.length];
+            for (int r = 0; r < no; r++) {
+                for (int k = 0; k < singleIndex.length; k++) {
+                    amp[r][k] = u[r][singleIndex[k]] * wp[singleIndex[k]];
+                }
+            }
+            double[][] out = new double[no][timesS.length];
+            for (int j = 0; j < timesS.length; j++) {
+                double[] f = singleFactor[j];
+                int a = active[j];
+                for (int r = 0; r < no; r++) {
+                    double[] ar = amp[r];
+                    double s = 0;
+                    for (int k = 0; k < a; k++) {
+                        s += ar[k] * f[k];
+                    }
+                    for (int c = 0; c < clusters.size(); c++) {
+                        double[][] e = clusterFactor[j][c];
+                        if (e == null) {
+                            continue;
+                        }
+                        int[] mem = clusters.get(c).members;
+                        for (int x = 0; x < mem.length; x++) {
+                            double y = 0;
+                            for (int z = 0; z < mem.length; z++) {
+                                y += e[x][z] * wp[mem[z]];
+                            }
+                            s += u[r][mem[x]] * y;
+                        }
+                    }
+                    out[r][j] = s;
+                }
+            }
+            return out;
+        }
+    }
+}

@@ -1,0 +1,122 @@
+package org.ladderkin.kinetics.train;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import org.hipparchus.complex.Complex;
+import org.hipparchus.linear.EigenDecompositionNonSymmetric;
+import org.hipparchus.linear.MatrixUtils;
+import org.ladderkin.kinetics.Populations;
+import org.ladderkin.kinetics.PopulationGuard;
+import org.ladderkin.kinetics.propagate.DenseLinear;
+import org.ladderkin.kinetics.propagate.PadeExponential;
+import org.ladderkin.kinetics.state.LadderSpace;
+
+/**
+ * The one-period map M = exp(Q·T)·E (pre-pulse distribution to the next pre-pulse distribution) and its fixed point,
+ * found directly: (M − I)·p = 0 with one equation replaced by Σp = 1, one dense solve. The approach to it is governed
+ * by the second-largest |eigenvalue| λ₂ of M: a transient shrinks by |λ₂| per pulse, so it takes
+ * ⌈ln 0.01 / ln|λ₂|⌉ pulses to fall to 1 %.
+ */
+public final class PeriodicSteadyState {
+
+    private final LadderSpace space;
+    private final double[][] map;
+
+    /**
+     * @param space ladder
+     * @param periodPropagator exp(Q·T) for the pulse period T
+     * @param pulse jump matrix E
+     */
+    public PeriodicSteadyState(LadderSpace space, double[][] periodPropagator, double[][] pulse) {
+        this.space = space;
+        this.map = PadeExponential.multiply(periodPropagator, pulse);
+    }
+
+    /** The one-period map M (a copy). */
+    public double[][] map() {
+        double[][] c = new double[map.length][];
+        for (int i = 0; i < map.length; i++) {
+            c[i] = map[i].clone();
+        }
+        return c;
+    }
+
+    /** The pre-pulse fixed point of M. */
+    public double[] fixedPoint() {
+        int n = map.length;
+        double[][] a = new double[n][n];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                a[i][j] = map[i][j] - (i == j ? 1 : 0);
+            }
+        }
+        // columns of M − I sum to zero, so one row is redundant: replace it by the normalisation
+        Arrays.fill(a[0], 1.0);
+        double[] b = new double[n];
+        b[0] = 1;
+        double[] p;
+        try {
+            p = DenseLinear.solve(a, b);
+        } catch (ArithmeticException e) {
+            throw new IllegalArgumentException("the pulse train has no unique steady state (some states never return to the"
+                    + " ground state: add neutralisation or sample refresh)", e);
+        }
+        for (int i = 0; i < n; i++) {
+            // a true probability is ≥ 0: clear negative rounding left by the solve
+            if (p[i] < 0 && p[i] > -PopulationGuard.NEGATIVE_TOLERANCE * 1e3) {
+                p[i] = 0;
+            }
+        }
+        PopulationGuard.check(space, p, 0, "(periodic steady state, just before a pulse)");
+        return p;
+    }
+
+    /** |λ₂| of M; 0 for a one-state ladder. Costs one dense nonsymmetric eigen-decomposition. */
+    public double secondEigenvalueModulus() {
+        Complex[] ev = new EigenDecompositionNonSymmetric(MatrixUtils.createRealMatrix(map)).getEigenvalues();
+        double[] mod = new double[ev.length];
+        for (int i = 0; i < ev.length; i++) {
+            mod[i] = ev[i].norm();
+        }
+        Arrays.sort(mod);
+        return mod.length < 2 ? 0 : mod[mod.length - 2];
+    }
+
+    /** Pulses for a transient to shrink to 1 % given |λ₂| (at least 1). */
+    public static int pulsesToOnePercent(double lambda2) {
+        if (!(lambda2 > 0)) {
+            return 1;
+        }
+        if (lambda2 >= 1) {
+            return Integer.MAX_VALUE;
+        }
+        return Math.max(1, (int) Math.ceil(Math.log(0.01) / Math.log(lambda2) - 1e-12));
+    }
+
+    /** Pre-pulse distributions before pulses 1..k, starting from dots in the ground state. */
+    public List<double[]> buildUp(int k) {
+        List<double[]> out = new ArrayList<>();
+        double[] p = Populations.ground(space).probabilities();
+        for (int i = 0; i < k; i++) {
+            out.add(p.clone());
+            p = apply(p);
+            PopulationGuard.check(space, p, 0, "(build-up, before pulse " + (i + 2) + ")");
+        }
+        return out;
+    }
+
+    /** M·p. */
+    public double[] apply(double[] p) {
+        int n = map.length;
+        double[] out = new double[n];
+        for (int i = 0; i < n; i++) {
+            double s = 0;
+            for (int j = 0; j < n; j++) {
+                s += map[i][j] * p[j];
+            }
+            out[i] = s;
+        }
+        return out;
+    }
+}
