@@ -58,9 +58,9 @@ public record Excitation(Sample sample, Pulse pulse, ExcitationGeometry geometry
         }
         if (absorbance >= Sample.THICK_OD) {
             advisories.add(new Advisory(Advisory.Kind.OPTICALLY_THICK, String.format(Locale.ROOT,
-                    "absorbance %.3g OD at the pump is ≥ %.0f: the pump hardly reaches the back of the sample, the probe "
+                    "absorbance %s OD at the pump is ≥ %.0f: the pump hardly reaches the back of the sample, the probe "
                             + "transmits almost nothing, and absorbance-based numbers are unreliable; dilute or shorten the path",
-                    absorbance, Sample.THICK_OD)));
+                    org.ladderkin.material.Numbers.sig(absorbance, 3), Sample.THICK_OD)));
         }
         if (sigma.approximate()) {
             advisories.add(new Advisory(Advisory.Kind.CROSS_SECTION_APPROXIMATE, "cross-section at the pump: " + sigma.basis()));

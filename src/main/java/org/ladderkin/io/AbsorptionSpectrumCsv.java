@@ -68,7 +68,7 @@ public final class AbsorptionSpectrumCsv {
             if (!(w > 0)) {
                 throw at(displayName, lineNo, "wavelength must be > 0 nm, was " + cells[0].strip());
             }
-            points.add(new double[] {w * 1e-9, a});
+            points.add(new double[] {w / 1e9, a});
             lineOf.add(lineNo);
         }
         if (!headerSeen) {
@@ -110,7 +110,7 @@ public final class AbsorptionSpectrumCsv {
     }
 
     private static String fmt(double m) {
-        return String.format(Locale.ROOT, "%.4g", m * 1e9);
+        return org.ladderkin.material.Numbers.sig(m * 1e9, 6);
     }
 
     private static InputException at(String file, int line, String problem) {

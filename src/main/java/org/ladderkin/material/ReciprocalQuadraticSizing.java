@@ -39,9 +39,8 @@ public record ReciprocalQuadraticSizing(double offsetEv, double aPerNm2, double 
     public double diameterM(double energyJ) {
         double eEv = energyJ / PhysicalConstants.ELECTRONVOLT_J;
         if (!(eEv > offsetEv)) {
-            throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
-                    "no dot size gives a first-exciton peak at %.4g eV: it lies at or below the large-size limit %.4g eV of %s",
-                    eEv, offsetEv, source));
+            throw new IllegalArgumentException("no dot size gives a first-exciton peak at " + Numbers.sig(eEv, 4)
+                    + " eV: it lies at or below the large-size limit " + Numbers.sig(offsetEv, 4) + " eV of " + source);
         }
         double q = c - 1.0 / (eEv - offsetEv);
         double d;
@@ -51,8 +50,8 @@ public record ReciprocalQuadraticSizing(double offsetEv, double aPerNm2, double 
             d = (-bPerNm + Math.sqrt(bPerNm * bPerNm - 4 * aPerNm2 * q)) / (2 * aPerNm2);
         }
         if (!(d > 0)) {
-            throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
-                    "no dot size gives a first-exciton peak at %.4g eV: the curve %s never reaches it", eEv, formula()));
+            throw new IllegalArgumentException("no dot size gives a first-exciton peak at " + Numbers.sig(eEv, 4)
+                    + " eV: the curve " + formula() + " never reaches it");
         }
         double diameterM = d * 1e-9;
         requireInRangeForPeak(diameterM, eEv);
@@ -62,9 +61,9 @@ public record ReciprocalQuadraticSizing(double offsetEv, double aPerNm2, double 
     private void requireInRangeForPeak(double diameterM, double eEv) {
         double tol = 1e-9 * maxDiameterM;
         if (diameterM < minDiameterM - tol || diameterM > maxDiameterM + tol) {
-            throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
-                    "a first-exciton peak at %.4g eV means a diameter of %.3g nm, outside the sizing curve's validity range "
-                            + "%.3g–%.3g nm (%s)", eEv, diameterM * 1e9, minDiameterM * 1e9, maxDiameterM * 1e9, source));
+            throw new IllegalArgumentException("a first-exciton peak at " + Numbers.sig(eEv, 4) + " eV means a diameter of "
+                    + Numbers.sig(diameterM * 1e9, 3) + " nm, outside the sizing curve's validity range "
+                    + Numbers.sig(minDiameterM * 1e9, 3) + "–" + Numbers.sig(maxDiameterM * 1e9, 3) + " nm (" + source + ")");
         }
     }
 

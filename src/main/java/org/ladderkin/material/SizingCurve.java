@@ -32,10 +32,9 @@ public sealed interface SizingCurve permits WavelengthPolynomialSizing, Reciproc
         }
         double tolerance = 1e-12 * maxDiameterM();
         if (diameterM < minDiameterM() - tolerance || diameterM > maxDiameterM() + tolerance) {
-            throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
-                    "diameter %.3g nm is outside the sizing curve's validity range %.3g–%.3g nm (%s); "
-                            + "give the first-exciton peak or a cross-section measured on your sample instead",
-                    diameterM * 1e9, minDiameterM() * 1e9, maxDiameterM() * 1e9, source()));
+            throw new IllegalArgumentException("diameter " + Numbers.sig(diameterM * 1e9, 3) + " nm is outside the sizing "
+                    + "curve's validity range " + Numbers.sig(minDiameterM() * 1e9, 3) + "–" + Numbers.sig(maxDiameterM() * 1e9, 3)
+                    + " nm (" + source() + "); check the size: the curve is not extrapolated");
         }
     }
 }

@@ -93,15 +93,15 @@ public record WavelengthPolynomialSizing(double[] coefficients, double minPeakM,
     public double diameterM(double energyJ) {
         double peakM = Photon.wavelengthM(energyJ);
         if (!(energyJ > bulkGapJ)) {
-            throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
-                    "no dot size gives a first-exciton peak at %.4g nm: it lies at or beyond the bulk band gap (%.4g nm); "
-                            + "confinement only moves the peak to shorter wavelengths", peakM * 1e9, Photon.wavelengthM(bulkGapJ) * 1e9));
+            throw new IllegalArgumentException("no dot size gives a first-exciton peak at " + Numbers.sig(peakM * 1e9, 4)
+                    + " nm: it lies at or beyond the bulk band gap (" + Numbers.sig(Photon.wavelengthM(bulkGapJ) * 1e9, 4)
+                    + " nm); confinement only moves the peak to shorter wavelengths");
         }
         double tol = 1e-9 * maxPeakM;
         if (peakM < minPeakM - tol || peakM > maxPeakM + tol) {
-            throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
-                    "first-exciton peak %.4g nm is outside the sizing curve's validity range %.4g–%.4g nm (%s)",
-                    peakM * 1e9, minPeakM * 1e9, maxPeakM * 1e9, source));
+            throw new IllegalArgumentException("first-exciton peak " + Numbers.sig(peakM * 1e9, 4)
+                    + " nm is outside the sizing curve's validity range " + Numbers.sig(minPeakM * 1e9, 4) + "–"
+                    + Numbers.sig(maxPeakM * 1e9, 4) + " nm (" + source + ")");
         }
         return diameterAtPeakM(peakM);
     }

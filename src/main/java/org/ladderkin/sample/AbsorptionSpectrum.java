@@ -44,7 +44,8 @@ public record AbsorptionSpectrum(double[] wavelengthsM, double[] absorbance, Str
 
     /** Whether {@code wavelengthM} lies within the measured range. */
     public boolean covers(double wavelengthM) {
-        return wavelengthM >= wavelengthsM[0] && wavelengthM <= wavelengthsM[wavelengthsM.length - 1];
+        // a relative slack of 1e-9 absorbs the last-bit differences between "400 nm" parsed two ways
+        return wavelengthM >= wavelengthsM[0] * (1 - 1e-9) && wavelengthM <= wavelengthsM[wavelengthsM.length - 1] * (1 + 1e-9);
     }
 
     /** Absorbance at {@code wavelengthM}, linearly interpolated; throws outside the measured range. */
@@ -54,13 +55,14 @@ public record AbsorptionSpectrum(double[] wavelengthsM, double[] absorbance, Str
                     "%s covers %.1f–%.1f nm, not %.1f nm", origin, wavelengthsM[0] * 1e9,
                     wavelengthsM[wavelengthsM.length - 1] * 1e9, wavelengthM * 1e9));
         }
-        int i = Arrays.binarySearch(wavelengthsM, wavelengthM);
+        double w = Math.min(Math.max(wavelengthM, wavelengthsM[0]), wavelengthsM[wavelengthsM.length - 1]);
+        int i = Arrays.binarySearch(wavelengthsM, w);
         if (i >= 0) {
             return absorbance[i];
         }
         int hi = -i - 1;
         int lo = hi - 1;
-        double t = (wavelengthM - wavelengthsM[lo]) / (wavelengthsM[hi] - wavelengthsM[lo]);
+        double t = (w - wavelengthsM[lo]) / (wavelengthsM[hi] - wavelengthsM[lo]);
         return absorbance[lo] + t * (absorbance[hi] - absorbance[lo]);
     }
 

@@ -109,8 +109,8 @@ public record Sample(SampleSpec spec, double sizeM, double firstExcitonEnergyJ, 
             concentration = numberPerM3 / PhysicalConstants.AVOGADRO_PER_MOL;
             if (a.od() >= THICK_OD) {
                 advisories.add(new Advisory(Advisory.Kind.OPTICALLY_THICK, String.format(Locale.ROOT,
-                        "measured absorbance %.3g OD is ≥ %.0f: spectrophotometer readings are unreliable there (stray light); "
-                                + "dilute or use a shorter path and measure again", a.od(), THICK_OD)));
+                        "measured absorbance %s OD is ≥ %.0f: spectrophotometer readings are unreliable there (stray light); "
+                                + "dilute or use a shorter path and measure again", org.ladderkin.material.Numbers.sig(a.od(), 3), THICK_OD)));
             }
         }
         return new Sample(spec, sizeM, firstJ, concentration, advisories);
