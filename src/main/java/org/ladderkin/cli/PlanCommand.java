@@ -11,7 +11,6 @@ import org.ladderkin.plan.Goal;
 import org.ladderkin.plan.Instrument;
 import org.ladderkin.plan.LaserSetup;
 import org.ladderkin.plan.PlanInputs;
-import org.ladderkin.plan.SampleSection;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Photon;
 import org.ladderkin.units.PhysicalConstants;
@@ -56,15 +55,9 @@ final class PlanCommand implements Callable<Integer> {
         if (!plan.lab().isEmpty()) {
             out.println("Lab:  " + plan.lab());
         }
-        SampleSection s = plan.sample();
         out.println();
-        out.println("Sample   " + s.name() + " — " + s.material() + ", "
-                + (Double.isNaN(s.diameterM()) ? "first-exciton peak " + fmt(s.firstPeakM(), Dimension.LENGTH)
-                : "diameter " + fmt(s.diameterM(), Dimension.LENGTH))
-                + ", size dispersion " + pct(s.sizeDispersion()));
-        out.println("         absorbance " + String.format(java.util.Locale.ROOT, "%.3g", s.absorbanceAtPump()) + " OD at the pump over "
-                + fmt(s.pathLengthM(), Dimension.LENGTH) + ", in " + s.matrix() + ", " + s.refresh().name().toLowerCase()
-                + (s.refresh() == SampleSection.Refresh.FLOWING ? " at " + fmt(s.flowRateM3PerS(), Dimension.VOLUMETRIC_FLOW) : ""));
+        SampleReport.print(plan.sample(), out);
+        SampleReport.printAdvisories(plan.sample().advisories(), out);
         LaserSetup l = plan.laser();
         out.println("Laser    pump at " + String.join(", ", l.pumpWavelengthsM().stream()
                         .map(w -> fmt(w, Dimension.LENGTH) + " (" + fmt(Photon.energyJ(w), Dimension.ENERGY) + ")").toList())
@@ -93,22 +86,9 @@ final class PlanCommand implements Callable<Integer> {
         root.put("schema", "ladderkin.plan-resolved/1");
         root.put("title", plan.title());
         root.put("lab", plan.lab());
-        SampleSection s = plan.sample();
         ObjectNode sample = root.putObject("sample");
-        sample.put("name", s.name());
-        sample.put("material", s.material());
-        if (!Double.isNaN(s.diameterM())) {
-            sample.put("diameterNm", s.diameterM() * 1e9);
-        }
-        if (!Double.isNaN(s.firstPeakM())) {
-            sample.put("firstExcitonPeakNm", s.firstPeakM() * 1e9);
-        }
-        sample.put("sizeDispersion", s.sizeDispersion());
-        sample.put("absorbanceAtPumpOd", s.absorbanceAtPump());
-        sample.put("pathLengthMm", s.pathLengthM() * 1e3);
-        sample.put("matrix", s.matrix());
-        sample.put("refresh", s.refresh().name().toLowerCase());
-        sample.put("flowRateMlPerMin", s.flowRateM3PerS() * 1e6 * 60);
+        SampleReport.json(plan.sample(), sample);
+        SampleReport.advisoriesJson(plan.sample().advisories(), sample.putArray("advisories"));
         LaserSetup l = plan.laser();
         ObjectNode laser = root.putObject("laser");
         ArrayNode wl = laser.putArray("pumpWavelengthsNm");

@@ -12,7 +12,7 @@ import org.ladderkin.plan.Instrument;
 import org.ladderkin.plan.LaserSetup;
 import org.ladderkin.plan.Limits;
 import org.ladderkin.plan.PlanInputs;
-import org.ladderkin.plan.SampleSection;
+import org.ladderkin.sample.Sample;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Photon;
 import org.ladderkin.units.Quantity;
@@ -33,12 +33,17 @@ public final class PlanCodec {
         return read(JsonTree.read(file, file.toString()));
     }
 
-    /** Reads a plan from parsed JSON. */
+    /** Reads a plan from parsed JSON with the material library under the ladderkin home. */
     public static PlanInputs read(Node root) {
+        return read(root, MaterialLibrary.fromHome());
+    }
+
+    /** Reads a plan from parsed JSON, resolving its sample with {@code library}. */
+    public static PlanInputs read(Node root, MaterialLibrary library) {
         root.schema(SCHEMA, VERSION);
         String title = root.field("title").string();
         String lab = root.optional("lab").map(Node::string).orElse("");
-        SampleSection sample = sample(root.field("sample"));
+        Sample sample = sample(root.field("sample"), library);
         LaserSetup laser = laser(root.field("laser"));
         List<Instrument> instruments = root.field("instruments").items(1).stream().map(PlanCodec::instrument).toList();
         Node goalsNode = root.field("goals");
@@ -67,34 +72,10 @@ public final class PlanCodec {
         return new PlanInputs(title, lab, sample, laser, instruments, goals, cmEnergies, limits);
     }
 
-    private static SampleSection sample(Node n) {
-        String name = n.field("name").string();
-        String material = n.field("material").string();
-        String sizeBy = n.oneOf("diameter", "firstExcitonPeak");
-        double diameterM = Double.NaN;
-        double firstPeakM = Double.NaN;
-        if (sizeBy.equals("diameter")) {
-            diameterM = n.field("diameter").positive(Dimension.LENGTH, null);
-        } else {
-            firstPeakM = n.field("firstExcitonPeak").positive(Dimension.LENGTH, null);
-        }
-        double dispersion = n.optional("sizeDispersion").map(Node::probability).orElse(0.0);
-        double od = n.field("absorbanceAtPump").nonNegative(Dimension.ABSORBANCE, null);
-        double path = n.field("pathLength").positive(Dimension.LENGTH, null);
-        String matrix = n.field("matrix").string();
-        Node refreshNode = n.field("refresh");
-        SampleSection.Refresh refresh = switch (refreshNode.field("mode").choice("static", "stirred", "flowing")) {
-            case "static" -> SampleSection.Refresh.STATIC;
-            case "stirred" -> SampleSection.Refresh.STIRRED;
-            default -> SampleSection.Refresh.FLOWING;
-        };
-        double flow = 0;
-        if (refresh == SampleSection.Refresh.FLOWING) {
-            flow = refreshNode.field("flowRate").positive(Dimension.VOLUMETRIC_FLOW, null);
-        }
-        refreshNode.finish();
-        n.finish();
-        return new SampleSection(name, material, diameterM, firstPeakM, dispersion, od, path, matrix, refresh, flow);
+    /** The plan's sample section: the same fields as a sample file ({@link SampleCodec}), without a schema. */
+    private static Sample sample(Node n, MaterialLibrary library) {
+        Path base = SampleCodec.baseDir(Path.of(n.location().file()));
+        return SampleCodec.section(n, library, base);
     }
 
     private static LaserSetup laser(Node n) {

@@ -53,7 +53,8 @@ class PlanCodecRejectionTest {
         PlanInputs p = read(demoText());
         assertThat(p.goals()).contains(Goal.BIEXCITON_AUGER, Goal.CROSS_SECTION);
         assertThat(p.laser().repetitionRateHz()).isEqualTo(1000.0);
-        assertThat(p.sample().firstPeakM()).isCloseTo(580e-9, org.assertj.core.data.Offset.offset(1e-18));
+        assertThat(p.sample().firstExcitonWavelengthM()).isCloseTo(580e-9, org.assertj.core.data.Offset.offset(1e-18));
+        assertThat(p.sample().material().key()).isEqualTo("CdSe");
         assertThat(p.instruments()).hasSize(2);
     }
 
@@ -75,7 +76,8 @@ class PlanCodecRejectionTest {
         String t = demoText().replace("\"pathLength\": \"1 mm\",", "\"pathLength\": \"1 mm\", \"colour\": \"red\",");
         assertThatThrownBy(() -> read(t))
                 .hasMessage(at(t, "\"red\"", 0) + ": field 'sample.colour': unknown field (allowed here: name, material, "
-                        + "diameter, firstExcitonPeak, sizeDispersion, absorbanceAtPump, pathLength, matrix, refresh)");
+                        + "diameter, firstExcitonPeak, sizeDispersion, concentration, absorbance, pathLength, matrix, refresh, "
+                        + "absorptionSpectrum, crossSection)");
     }
 
     @Test

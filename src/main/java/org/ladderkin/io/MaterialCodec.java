@@ -1,0 +1,189 @@
+package org.ladderkin.io;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import org.ladderkin.io.json.JsonTree;
+import org.ladderkin.io.json.Node;
+import org.ladderkin.material.AbsorptionLaw;
+import org.ladderkin.material.Material;
+import org.ladderkin.material.ReciprocalQuadraticSizing;
+import org.ladderkin.material.Shape;
+import org.ladderkin.material.SizingCurve;
+import org.ladderkin.material.Sourced;
+import org.ladderkin.material.WavelengthPolynomialSizing;
+import org.ladderkin.units.Dimension;
+import org.ladderkin.units.PhysicalConstants;
+import org.ladderkin.units.Unit;
+import org.ladderkin.units.Units;
+
+/**
+ * Reads material files, schema {@code ladderkin.material/1}. Every value is written
+ * {@code {"value": ..., "source": "..."}} so its source sits beside it; {@code "value": null} marks a value the library
+ * does not know. Laws are written in their published form (coefficient, which length, in which unit, exponent).
+ */
+public final class MaterialCodec {
+
+    /** Schema name of material files. */
+    public static final String SCHEMA = "ladderkin.material";
+    /** Newest version read. */
+    public static final int VERSION = 1;
+
+    private MaterialCodec() {
+    }
+
+    /** Reads one material file. */
+    public static Material read(Path file) {
+        return read(JsonTree.read(file, file.toString()));
+    }
+
+    /** Reads a material from parsed JSON. */
+    public static Material read(Node root) {
+        root.schema(SCHEMA, VERSION);
+        String key = root.field("key").string();
+        String name = root.field("name").string();
+        Shape shape = root.field("shape").choice("sphere", "cube").equals("sphere") ? Shape.SPHERE : Shape.CUBE;
+        Sourced gap = sourced(root.field("bulkGap"), Dimension.ENERGY, true);
+        Sourced molar = sourcedNumber(root.field("molarMassGPerMol"), 1e-3);
+        Sourced density = sourced(root.field("density"), Dimension.DENSITY, true);
+        Sourced heat = sourced(root.field("specificHeat"), Dimension.SPECIFIC_HEAT, true);
+        Sourced n = sourcedNumber(root.field("refractiveIndex"), 1);
+        Sourced ge = sourcedNumber(root.field("electronDegeneracy"), 1);
+        Sourced gh = sourcedNumber(root.field("holeDegeneracy"), 1);
+        Optional<SizingCurve> sizing = root.optional("sizing").map(s -> sizing(s, gap));
+        Optional<AbsorptionLaw> edge = root.optional("firstExcitonAbsorption").map(a -> law(a, false));
+        Optional<AbsorptionLaw> high = root.optional("highEnergyAbsorption").map(a -> law(a, true));
+        Sourced auger = sourcedNumber(root.field("augerVolumeConstantPsPerNm3"), 1e-12 / 1e-27);
+        Sourced tauX = sourced(root.field("singleExcitonLifetime"), Dimension.TIME, true);
+        Sourced tauT = sourced(root.field("trionLifetime"), Dimension.TIME, true);
+        String notes = root.optional("notes").map(Node::string).orElse("");
+        root.finish();
+        try {
+            return new Material(key, name, shape, gap, molar, density, heat, n, ge, gh, sizing, edge, high, auger, tauX, tauT, notes);
+        } catch (IllegalArgumentException e) {
+            throw root.error(e.getMessage());
+        }
+    }
+
+    /** {"value": "5.81 g/cm³", "source": "..."}; a null or absent value is unknown. */
+    static Sourced sourced(Node n, Dimension dimension, boolean positive) {
+        String source = n.field("source").string();
+        Optional<Node> v = n.optional("value");
+        n.finish();
+        if (v.isEmpty()) {
+            return Sourced.unknown(source);
+        }
+        double si = positive ? v.get().positive(dimension, null) : v.get().quantity(dimension, null).si();
+        return source(n, si, source);
+    }
+
+    /** {"value": 191.38, "source": "..."} with the value a bare number in the unit the field name documents. */
+    static Sourced sourcedNumber(Node n, double toSi) {
+        String source = n.field("source").string();
+        Optional<Node> v = n.optional("value");
+        n.finish();
+        if (v.isEmpty()) {
+            return Sourced.unknown(source);
+        }
+        double x = v.get().number();
+        if (!(x > 0)) {
+            throw v.get().error("must be > 0, was " + x);
+        }
+        return source(n, x * toSi, source);
+    }
+
+    private static Sourced source(Node n, double si, String source) {
+        try {
+            return new Sourced(si, source);
+        } catch (IllegalArgumentException e) {
+            throw n.error(e.getMessage());
+        }
+    }
+
+    private static SizingCurve sizing(Node n, Sourced gap) {
+        String form = n.field("form").choice("wavelength-polynomial", "reciprocal-quadratic");
+        String source = n.field("source").string();
+        SizingCurve curve;
+        try {
+            if (form.equals("wavelength-polynomial")) {
+                Node coeffNode = n.field("coefficientsNm");
+                List<Double> c = new ArrayList<>();
+                for (Node item : coeffNode.items(2)) {
+                    c.add(item.number());
+                }
+                double[] range = range(n.field("validFirstPeak"), Dimension.LENGTH);
+                if (!gap.known()) {
+                    throw n.error("a wavelength polynomial needs the bulk gap to recognise impossible peaks");
+                }
+                curve = new WavelengthPolynomialSizing(c.stream().mapToDouble(Double::doubleValue).toArray(),
+                        range[0], range[1], gap.value(), source);
+            } else {
+                double offsetEv = n.field("offset").positive(Dimension.ENERGY, null) / PhysicalConstants.ELECTRONVOLT_J;
+                double a = nonNegative(n.field("a"));
+                double b = nonNegative(n.field("b"));
+                double c = nonNegative(n.field("c"));
+                double[] range = range(n.field("validDiameter"), Dimension.LENGTH);
+                curve = new ReciprocalQuadraticSizing(offsetEv, a, b, c, range[0], range[1], source);
+            }
+        } catch (IllegalArgumentException e) {
+            throw n.error(e.getMessage());
+        }
+        n.finish();
+        return curve;
+    }
+
+    private static double nonNegative(Node n) {
+        double x = n.number();
+        if (x < 0) {
+            throw n.error("must be >= 0, was " + x);
+        }
+        return x;
+    }
+
+    private static double[] range(Node n, Dimension d) {
+        List<Node> ends = n.items(2);
+        if (ends.size() != 2) {
+            throw n.error("needs exactly two values [lowest, highest], found " + ends.size());
+        }
+        double lo = ends.get(0).positive(d, null);
+        double hi = ends.get(1).positive(d, null);
+        if (!(hi > lo)) {
+            throw n.error("lowest must be below highest (write [lowest, highest])");
+        }
+        return new double[] {lo, hi};
+    }
+
+    private static AbsorptionLaw law(Node n, boolean needsWavelength) {
+        double wavelength = Double.NaN;
+        if (needsWavelength) {
+            wavelength = n.field("wavelength").positive(Dimension.LENGTH, null);
+        }
+        String which = n.oneOf("extinction", "crossSection");
+        double coefficientM2;
+        boolean asExtinction = which.equals("extinction");
+        if (asExtinction) {
+            coefficientM2 = AbsorptionLaw.crossSectionM2(n.field("extinction").positive(Dimension.MOLAR_EXTINCTION, null));
+        } else {
+            coefficientM2 = n.field("crossSection").positive(Dimension.AREA, null);
+        }
+        AbsorptionLaw.Length per = switch (n.field("per").choice("diameter", "radius", "edge")) {
+            case "diameter" -> AbsorptionLaw.Length.DIAMETER;
+            case "radius" -> AbsorptionLaw.Length.RADIUS;
+            default -> AbsorptionLaw.Length.EDGE;
+        };
+        Node unitNode = n.field("lengthUnit");
+        Unit unit = Units.find(unitNode.string());
+        if (unit == null || unit.dimension() != Dimension.LENGTH) {
+            throw unitNode.error("expected a length unit (" + Units.accepted(Dimension.LENGTH) + ")");
+        }
+        double exponent = n.field("exponent").number();
+        String source = n.field("source").string();
+        n.finish();
+        try {
+            return new AbsorptionLaw(wavelength, coefficientM2, per, unit.toSi(1), exponent, asExtinction, source);
+        } catch (IllegalArgumentException e) {
+            throw n.error(e.getMessage());
+        }
+    }
+}

@@ -1,0 +1,224 @@
+package org.ladderkin.sample;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Objects;
+import java.util.Optional;
+import org.ladderkin.material.AbsorptionLaw;
+import org.ladderkin.material.Material;
+import org.ladderkin.material.SizingCurve;
+import org.ladderkin.units.Photon;
+import org.ladderkin.units.PhysicalConstants;
+
+/**
+ * One sample resolved to numbers: size and first-exciton energy through the sizing curve, concentration through
+ * Beer–Lambert, and the absorption cross-section at any wavelength the available information supports.
+ *
+ * @param spec                  the description it was resolved from
+ * @param sizeM                 dot size (diameter, or cube edge) (m)
+ * @param firstExcitonEnergyJ   first-exciton peak photon energy (J); NaN when neither measured nor derivable
+ * @param concentrationMolPerM3 molar concentration of dots (mol/m³)
+ * @param advisories            concerns found while resolving
+ */
+public record Sample(SampleSpec spec, double sizeM, double firstExcitonEnergyJ, double concentrationMolPerM3,
+                     List<Advisory> advisories) {
+
+    /** Pump and reference wavelengths closer than this are taken as the same (m). */
+    static final double SAME_WAVELENGTH_M = 0.5e-9;
+    /** A pump this close to the first-exciton peak uses the first-exciton law (m). */
+    static final double AT_FIRST_EXCITON_M = 2e-9;
+    /** Absorbance from which spectrophotometer readings and depth profiles become unreliable (OD). */
+    public static final double THICK_OD = 3.0;
+
+    public Sample {
+        Objects.requireNonNull(spec, "spec");
+        advisories = List.copyOf(advisories);
+        if (!(sizeM > 0)) {
+            throw new IllegalArgumentException("size must be > 0, was " + sizeM * 1e9 + " nm");
+        }
+        if (!(concentrationMolPerM3 > 0) || !Double.isFinite(concentrationMolPerM3)) {
+            throw new IllegalArgumentException("concentration must be > 0, was " + concentrationMolPerM3 * 1e3 + " µM");
+        }
+    }
+
+    /**
+     * Resolves a description: size from the sizing curve (or the reverse), then concentration from the absorbance.
+     *
+     * @throws SampleException naming the part of the description at fault
+     */
+    public static Sample resolve(SampleSpec spec) {
+        Material m = spec.material();
+        List<Advisory> advisories = new ArrayList<>();
+        double sizeM;
+        double firstJ;
+        Optional<SizingCurve> curve = m.sizing();
+        if (spec.size() instanceof SampleSpec.ByDiameter d) {
+            sizeM = d.sizeM();
+            if (curve.isPresent()) {
+                try {
+                    firstJ = curve.get().firstExcitonEnergyJ(sizeM);
+                } catch (IllegalArgumentException e) {
+                    throw new SampleException(SampleException.Part.SIZE, m.key() + ": " + e.getMessage(), e);
+                }
+            } else {
+                firstJ = Double.NaN;
+            }
+        } else {
+            SampleSpec.ByFirstPeak p = (SampleSpec.ByFirstPeak) spec.size();
+            firstJ = Photon.energyJ(p.wavelengthM());
+            if (curve.isEmpty()) {
+                throw new SampleException(SampleException.Part.SIZE, m.key() + " has no published sizing curve in the "
+                        + "library; give the diameter measured on your sample (e.g. by TEM) instead of the first-exciton peak");
+            }
+            try {
+                sizeM = curve.get().diameterM(firstJ);
+            } catch (IllegalArgumentException e) {
+                throw new SampleException(SampleException.Part.SIZE, m.key() + ": " + e.getMessage(), e);
+            }
+        }
+        Sample partial = new Sample(spec, sizeM, firstJ, 1.0, List.of());
+        double concentration;
+        if (spec.amount() instanceof SampleSpec.Concentration c) {
+            concentration = c.molPerM3();
+        } else {
+            SampleSpec.Absorbance a = (SampleSpec.Absorbance) spec.amount();
+            double at;
+            if (a.atFirstExciton()) {
+                if (Double.isNaN(firstJ)) {
+                    throw new SampleException(SampleException.Part.AMOUNT, "the absorbance is given at the first exciton, "
+                            + "but its position is unknown (no sizing curve for " + m.key() + "): give its wavelength");
+                }
+                at = Photon.wavelengthM(firstJ);
+            } else {
+                at = a.wavelengthM();
+            }
+            CrossSection sigma;
+            try {
+                sigma = partial.crossSectionAt(at);
+            } catch (SampleException e) {
+                throw new SampleException(SampleException.Part.AMOUNT, "cannot turn the absorbance into a concentration: "
+                        + e.getMessage(), e);
+            }
+            if (sigma.approximate()) {
+                advisories.add(new Advisory(Advisory.Kind.CROSS_SECTION_APPROXIMATE,
+                        "concentration rests on an approximate cross-section: " + sigma.basis()));
+            }
+            // Beer–Lambert: A = σ·n·L/ln10 with n the number density of dots.
+            double numberPerM3 = a.od() * Math.log(10) / (sigma.crossSectionM2() * spec.pathLengthM());
+            concentration = numberPerM3 / PhysicalConstants.AVOGADRO_PER_MOL;
+            if (a.od() >= THICK_OD) {
+                advisories.add(new Advisory(Advisory.Kind.OPTICALLY_THICK, String.format(Locale.ROOT,
+                        "measured absorbance %s OD is ≥ %.0f: spectrophotometer readings are unreliable there (stray light); "
+                                + "dilute or use a shorter path and measure again", org.ladderkin.material.Numbers.sig(a.od(), 3), THICK_OD)));
+            }
+        }
+        return new Sample(spec, sizeM, firstJ, concentration, advisories);
+    }
+
+    public Material material() {
+        return spec.material();
+    }
+
+    /** Number density of dots (1/m³). */
+    public double numberDensityPerM3() {
+        return concentrationMolPerM3 * PhysicalConstants.AVOGADRO_PER_MOL;
+    }
+
+    /** Volume of one dot (m³). */
+    public double dotVolumeM3() {
+        return material().volumeM3(sizeM);
+    }
+
+    /** First-exciton peak wavelength (m), NaN when unknown. */
+    public double firstExcitonWavelengthM() {
+        return Double.isNaN(firstExcitonEnergyJ) ? Double.NaN : Photon.wavelengthM(firstExcitonEnergyJ);
+    }
+
+    /** Decadic absorbance of the sample over its path at {@code wavelengthM} (OD), from the cross-section there. */
+    public double absorbanceAt(double wavelengthM) {
+        return crossSectionAt(wavelengthM).crossSectionM2() * numberDensityPerM3() * spec.pathLengthM() / Math.log(10);
+    }
+
+    /**
+     * The absorption cross-section of one dot at {@code wavelengthM}, from the best information available: the user's
+     * own value, scaled by the user's spectrum where needed; else a material law carried by the spectrum; else a law at
+     * its own wavelength; else the high-energy law used at another wavelength, flagged approximate.
+     *
+     * @throws SampleException when nothing supports a value at that wavelength
+     */
+    public CrossSection crossSectionAt(double wavelengthM) {
+        if (!(wavelengthM > 0)) {
+            throw new IllegalArgumentException("wavelength must be > 0, was " + wavelengthM * 1e9 + " nm");
+        }
+        Optional<AbsorptionSpectrum> spectrum = spec.spectrum();
+        if (spec.givenCrossSection().isPresent()) {
+            SampleSpec.GivenCrossSection g = spec.givenCrossSection().get();
+            if (Double.isNaN(g.wavelengthM()) || same(g.wavelengthM(), wavelengthM)) {
+                return new CrossSection(g.crossSectionM2(), wavelengthM, "given by the user", false);
+            }
+            if (spectrum.isPresent() && spectrum.get().covers(g.wavelengthM()) && spectrum.get().covers(wavelengthM)) {
+                return scaled(g.crossSectionM2(), g.wavelengthM(), wavelengthM, spectrum.get(), "the user's value at ");
+            }
+            return new CrossSection(g.crossSectionM2(), wavelengthM, String.format(Locale.ROOT,
+                    "the user's value at %.1f nm used at %.1f nm (load an absorption spectrum to scale it)",
+                    g.wavelengthM() * 1e9, wavelengthM * 1e9), true);
+        }
+        Material m = material();
+        Optional<AbsorptionLaw> high = m.highEnergyAbsorption();
+        Optional<AbsorptionLaw> edge = m.firstExcitonAbsorption();
+        double firstM = firstExcitonWavelengthM();
+        if (spectrum.isPresent()) {
+            AbsorptionSpectrum s = spectrum.get();
+            if (high.isPresent() && s.covers(high.get().wavelengthM()) && s.covers(wavelengthM)) {
+                return scaled(high.get().crossSectionM2At(sizeM), high.get().wavelengthM(), wavelengthM, s,
+                        m.key() + " high-energy law at ");
+            }
+            if (edge.isPresent() && !Double.isNaN(firstM) && s.covers(firstM) && s.covers(wavelengthM)) {
+                return scaled(edge.get().crossSectionM2At(sizeM), firstM, wavelengthM, s, m.key() + " first-exciton law at ");
+            }
+        }
+        if (edge.isPresent() && !Double.isNaN(firstM) && Math.abs(firstM - wavelengthM) <= AT_FIRST_EXCITON_M) {
+            return new CrossSection(edge.get().crossSectionM2At(sizeM), wavelengthM,
+                    m.key() + " first-exciton law (" + edge.get().source() + ")", false);
+        }
+        if (high.isPresent()) {
+            AbsorptionLaw h = high.get();
+            if (same(h.wavelengthM(), wavelengthM)) {
+                return new CrossSection(h.crossSectionM2At(sizeM), wavelengthM,
+                        m.key() + " law at " + nm(h.wavelengthM()) + " (" + h.source() + ")", false);
+            }
+            if (!Double.isNaN(firstM) && wavelengthM > firstM + AT_FIRST_EXCITON_M) {
+                throw new SampleException(SampleException.Part.CROSS_SECTION, String.format(Locale.ROOT,
+                        "%s lies on the red side of the first-exciton peak (%s), where no law applies: give a measured "
+                                + "cross-section or load an absorption spectrum", nm(wavelengthM), nm(firstM)));
+            }
+            return new CrossSection(h.crossSectionM2At(sizeM), wavelengthM, String.format(Locale.ROOT,
+                    "%s law at %s used at %s without a spectrum (load your absorption spectrum, or give a measured "
+                            + "cross-section, for a better value)", m.key(), nm(h.wavelengthM()), nm(wavelengthM)), true);
+        }
+        String what = edge.isPresent()
+                ? m.key() + " has only a first-exciton absorption law (" + (Double.isNaN(firstM) ? "peak unknown" : "peak at " + nm(firstM))
+                + "); for " + nm(wavelengthM) + " load an absorption spectrum or give a measured cross-section"
+                : m.key() + " has no absorption law in the library; give a measured cross-section (e.g. --cross-section 2e-15cm2)";
+        throw new SampleException(SampleException.Part.CROSS_SECTION, "no cross-section at " + nm(wavelengthM) + ": " + what);
+    }
+
+    private static CrossSection scaled(double sigmaFromM2, double fromM, double toM, AbsorptionSpectrum s, String label) {
+        double ratio = s.ratio(toM, fromM);
+        if (!(ratio > 0)) {
+            throw new SampleException(SampleException.Part.CROSS_SECTION, String.format(Locale.ROOT,
+                    "%s shows no absorbance at %s: the sample does not absorb there", s.origin(), nm(toM)));
+        }
+        return new CrossSection(sigmaFromM2 * ratio, toM, String.format(Locale.ROOT, "%s%s scaled by the measured spectrum "
+                + "%s (A(%s)/A(%s) = %.4g)", label, nm(fromM), s.origin(), nm(toM), nm(fromM), ratio), false);
+    }
+
+    private static boolean same(double aM, double bM) {
+        return Math.abs(aM - bM) <= SAME_WAVELENGTH_M;
+    }
+
+    static String nm(double m) {
+        return String.format(Locale.ROOT, "%.1f nm", m * 1e9);
+    }
+}

@@ -1,0 +1,78 @@
+package org.ladderkin.material;
+
+import org.junit.jupiter.api.Test;
+import org.ladderkin.io.MaterialLibrary;
+import org.ladderkin.units.Photon;
+import org.ladderkin.units.PhysicalConstants;
+import org.ladderkin.validation.CheckedAgainst;
+import org.ladderkin.validation.Reference;
+
+/**
+ * The sizing curves shipped in models/materials, evaluated through the library, against the published formulas typed
+ * here independently. The formulas are recalled (quoted by secondary sources), hence FROM_MEMORY.
+ */
+class SizingCurveValidationTest {
+
+    private static final double EV = PhysicalConstants.ELECTRONVOLT_J;
+
+    private static SizingCurve curve(String key) {
+        return MaterialLibrary.fromHome().material(key).sizing().orElseThrow();
+    }
+
+    /** Yu 2003 CdSe: D(nm) = 1.6122e-9 λ⁴ − 2.6575e-6 λ³ + 1.6242e-3 λ² − 0.4277 λ + 41.57, λ in nm. */
+    private static double yuCdSeNm(double lambdaNm) {
+        double l = lambdaNm;
+        return 1.6122e-9 * l * l * l * l - 2.6575e-6 * l * l * l + 1.6242e-3 * l * l - 0.4277 * l + 41.57;
+    }
+
+    @Test
+    @CheckedAgainst(source = "Yu, Qu, Guo, Peng, Chem. Mater. 15, 2854 (2003): CdSe D = 1.6122e-9 λ⁴ − 2.6575e-6 λ³ "
+            + "+ 1.6242e-3 λ² − 0.4277 λ + 41.57 (from memory)", kind = CheckedAgainst.Kind.FROM_MEMORY)
+    void cdseYuCurveAtThreeSizes() {
+        SizingCurve c = curve("CdSe");
+        for (double lambdaNm : new double[] {500, 550, 620}) {
+            double dNm = c.diameterM(Photon.energyJ(lambdaNm * 1e-9)) * 1e9;
+            Reference.checkRelative("CdSe diameter for a first-exciton peak at " + (int) lambdaNm + " nm (nm)", dNm,
+                    yuCdSeNm(lambdaNm), 1e-9);
+        }
+        // and the reverse direction, as a user giving a diameter uses it
+        Reference.checkRelative("CdSe first-exciton peak of a 3.819 nm dot (nm)",
+                Photon.wavelengthM(c.firstExcitonEnergyJ(yuCdSeNm(580) * 1e-9)) * 1e9, 580, 1e-9);
+    }
+
+    @Test
+    @CheckedAgainst(source = "Moreels et al., ACS Nano 3, 3023 (2009): PbS E₀ = 0.41 + 1/(0.0252 d² + 0.283 d) eV "
+            + "(quoted by secondary sources; from memory)", kind = CheckedAgainst.Kind.FROM_MEMORY)
+    void pbsMoreelsCurveAtThreeSizes() {
+        SizingCurve c = curve("PbS");
+        for (double d : new double[] {3.5, 5, 8}) {
+            double ref = 0.41 + 1 / (0.0252 * d * d + 0.283 * d);
+            Reference.checkRelative("PbS first-exciton energy of a " + d + " nm dot (eV)", c.firstExcitonEnergyJ(d * 1e-9) / EV, ref, 1e-12);
+            Reference.checkRelative("PbS diameter back from " + ref + " eV (nm)", c.diameterM(ref * EV) * 1e9, d, 1e-9);
+        }
+    }
+
+    @Test
+    @CheckedAgainst(source = "Moreels et al., Chem. Mater. 19, 6101 (2007): PbSe E₀ = 0.278 + 1/(0.016 d² + 0.209 d + 0.45) eV "
+            + "(quoted by secondary sources; from memory)", kind = CheckedAgainst.Kind.FROM_MEMORY)
+    void pbseMoreelsCurveAtThreeSizes() {
+        SizingCurve c = curve("PbSe");
+        for (double d : new double[] {3.5, 5, 8}) {
+            double ref = 0.278 + 1 / (0.016 * d * d + 0.209 * d + 0.45);
+            Reference.checkRelative("PbSe first-exciton energy of a " + d + " nm dot (eV)", c.firstExcitonEnergyJ(d * 1e-9) / EV, ref, 1e-12);
+            Reference.checkRelative("PbSe diameter back from " + ref + " eV (nm)", c.diameterM(ref * EV) * 1e9, d, 1e-9);
+        }
+    }
+
+    @Test
+    @CheckedAgainst(source = "derived: Yu 2003 CdTe and CdS polynomials (from memory) evaluated by hand at one size each",
+            kind = CheckedAgainst.Kind.FROM_MEMORY)
+    void cdteAndCdsCurves() {
+        double l = 600;
+        Reference.checkRelative("CdTe diameter at a 600 nm peak (nm)", curve("CdTe").diameterM(Photon.energyJ(l * 1e-9)) * 1e9,
+                9.8127e-7 * l * l * l - 1.7147e-3 * l * l + 1.0064 * l - 194.84, 1e-9);
+        l = 400;
+        Reference.checkRelative("CdS diameter at a 400 nm peak (nm)", curve("CdS").diameterM(Photon.energyJ(l * 1e-9)) * 1e9,
+                -6.6521e-8 * l * l * l + 1.9557e-4 * l * l - 9.2352e-2 * l + 13.29, 1e-9);
+    }
+}
