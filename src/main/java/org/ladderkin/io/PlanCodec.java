@@ -11,6 +11,9 @@ import org.ladderkin.plan.Goal;
 import org.ladderkin.plan.Instrument;
 import org.ladderkin.plan.LaserSetup;
 import org.ladderkin.plan.Limits;
+import org.ladderkin.plan.ModelAssumptions;
+import org.ladderkin.kinetics.rate.AugerScaling;
+import org.ladderkin.kinetics.rate.RadiativeScaling;
 import org.ladderkin.plan.PlanInputs;
 import org.ladderkin.sample.Sample;
 import org.ladderkin.units.Dimension;
@@ -68,8 +71,9 @@ public final class PlanCodec {
         }
         goalsNode.finish();
         Limits limits = limits(root.field("limits"));
+        ModelAssumptions.Overrides overrides = root.optional("model").map(PlanCodec::model).orElse(ModelAssumptions.Overrides.NONE);
         root.finish();
-        return new PlanInputs(title, lab, sample, laser, instruments, goals, cmEnergies, limits);
+        return new PlanInputs(title, lab, sample, laser, instruments, goals, cmEnergies, limits, overrides);
     }
 
     /** The plan's sample section: the same fields as a sample file ({@link SampleCodec}), without a schema. */
@@ -146,6 +150,45 @@ public final class PlanCodec {
         double beam = n.field("beamTime").positive(Dimension.TIME, null);
         n.finish();
         return new Limits(dT, charged, residual, beam);
+    }
+
+    /** The optional "model" section: values that replace the ones derived from the material. */
+    private static ModelAssumptions.Overrides model(Node n) {
+        double tau1 = optionalTime(n, "singleExcitonLifetime");
+        double qy = n.optional("plQuantumYield").map(Node::probability).orElse(Double.NaN);
+        if (qy == 0) {
+            throw n.field("plQuantumYield").error("must be > 0 (a dot that never emits has no radiative rate to plan with)");
+        }
+        double tau2 = optionalTime(n, "biexcitonLifetime");
+        AugerScaling auger = n.optional("augerScaling").map(a -> {
+            String k = a.choice("statistical", "pairs", "quadratic");
+            for (AugerScaling s : AugerScaling.values()) {
+                if (s.key().equals(k)) {
+                    return s;
+                }
+            }
+            throw a.error("unknown Auger scaling");
+        }).orElse(null);
+        RadiativeScaling rad = n.optional("radiativeScaling").map(a -> {
+            String k = a.choice("linear", "statistical");
+            for (RadiativeScaling s : RadiativeScaling.values()) {
+                if (s.key().equals(k)) {
+                    return s;
+                }
+            }
+            throw a.error("unknown radiative scaling");
+        }).orElse(null);
+        double trionNeg = optionalTime(n, "negativeTrionLifetime");
+        double trionPos = optionalTime(n, "positiveTrionLifetime");
+        double ion = n.optional("ionisationProbability").map(Node::probability).orElse(Double.NaN);
+        double neut = optionalTime(n, "photochargeLifetime");
+        double cooling = optionalTime(n, "coolingTime");
+        n.finish();
+        return new ModelAssumptions.Overrides(tau1, qy, tau2, auger, rad, trionNeg, trionPos, ion, neut, cooling);
+    }
+
+    private static double optionalTime(Node n, String field) {
+        return n.optional(field).map(t -> t.positive(Dimension.TIME, null)).orElse(Double.NaN);
     }
 
     /** A photon given as an energy ("3.1 eV") or a vacuum wavelength ("400 nm"), returned as energy (J). */

@@ -110,12 +110,20 @@ public final class Heating {
      * rise: FAIL above the limit or within 10 K of boiling, WARN above half the limit.
      */
     public static Risk risk(String name, double riseK, double ambientK, double limitRiseK, ThermalMedium medium) {
+        return risk(name, riseK, ambientK, limitRiseK, medium.boilingPointK());
+    }
+
+    /** As {@link #risk(String, double, double, double, ThermalMedium)} with the boiling point given (K, +∞ for films). */
+    public static Risk risk(String name, double riseK, double ambientK, double limitRiseK, double boilingPointK) {
+        if (Double.isNaN(riseK)) {
+            return new Risk(name, Verdict.WARN, riseK, limitRiseK, "K", "heating unknown: give the sample's matrix (solvent or film)");
+        }
         double peakK = ambientK + riseK;
         Verdict v = Verdict.against(riseK, limitRiseK, 0.5);
         String why = String.format(java.util.Locale.ROOT,
                 "predicted rise %.3g K (limit %.3g K); sample at %.1f K, boiling point %.1f K", riseK, limitRiseK, peakK,
-                medium.boilingPointK());
-        if (peakK > medium.boilingPointK() - 10) {
+                boilingPointK);
+        if (peakK > boilingPointK - 10) {
             v = Verdict.FAIL;
             why += "; within 10 K of boiling: flammable solvent vapour and bubbles — lower the power or flow the sample";
         }

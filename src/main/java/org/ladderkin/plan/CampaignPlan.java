@@ -1,0 +1,42 @@
+package org.ladderkin.plan;
+
+import java.util.List;
+import org.ladderkin.observe.Risk;
+
+/**
+ * A campaign plan: the settings to dial in, the evidence behind them and the risks.
+ *
+ * @param inputs        what the plan file said
+ * @param model         the kinetic model the predictions assume
+ * @param wavelengths   every pump wavelength, judged (best first)
+ * @param rates         every repetition rate the picker offers, judged at the highest fluence
+ * @param chosenRate    the fastest rate within the limits (or the slowest available when none is)
+ * @param fluences      the fluence series at the chosen wavelength
+ * @param heat          heating at the highest fluence and the chosen rate
+ * @param design        optimal-design search, or null when no TA goal parameter applies
+ * @param delayPlans    per instrument
+ * @param predictions   predicted signals
+ * @param risks         risk table
+ * @param advisories    concerns about the inputs (probe larger than pump, approximate cross-section ...)
+ * @param cautions      safety cautions
+ */
+public record CampaignPlan(PlanInputs inputs, ModelAssumptions model, List<WavelengthOption> wavelengths,
+                           List<RateOption> rates, RateOption chosenRate, List<FluencePoint> fluences, HeatBudget heat,
+                           DesignSearch.Result design, List<DelayPlan> delayPlans, Predictions predictions,
+                           List<Risk> risks, List<String> advisories, List<String> cautions) {
+
+    public CampaignPlan {
+        wavelengths = List.copyOf(wavelengths);
+        rates = List.copyOf(rates);
+        fluences = List.copyOf(fluences);
+        delayPlans = List.copyOf(delayPlans);
+        risks = List.copyOf(risks);
+        advisories = List.copyOf(advisories);
+        cautions = List.copyOf(cautions);
+    }
+
+    /** The chosen pump wavelength (the best-ranked). */
+    public WavelengthOption chosenWavelength() {
+        return wavelengths.get(0);
+    }
+}

@@ -1,0 +1,168 @@
+package org.ladderkin.plan;
+
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Set;
+import org.ladderkin.kinetics.KineticModel;
+import org.ladderkin.kinetics.rate.AugerIonisation;
+import org.ladderkin.kinetics.rate.AugerRecombination;
+import org.ladderkin.kinetics.rate.AugerScaling;
+import org.ladderkin.kinetics.rate.Neutralisation;
+import org.ladderkin.kinetics.rate.RadiativeDecay;
+import org.ladderkin.kinetics.rate.RadiativeScaling;
+import org.ladderkin.kinetics.rate.RateLaw;
+import org.ladderkin.kinetics.rate.SampleRefresh;
+import org.ladderkin.kinetics.rate.Trapping;
+import org.ladderkin.kinetics.state.Charge;
+import org.ladderkin.sample.Refresh;
+import org.ladderkin.sample.Sample;
+
+/**
+ * The kinetic model a plan predicts with, built from the sample's material and size unless the plan overrides a value.
+ * Every number carries the basis it rests on, so the report can say what the predictions assume.
+ *
+ * @param tauSingleExcitonS      single-exciton lifetime τ₁ (s)
+ * @param plQuantumYield         single-exciton PL quantum yield; k_rad = QY/τ₁, the rest is trapping
+ * @param tauBiexcitonS          biexciton Auger lifetime τ₂ (s)
+ * @param augerScaling           Auger N-scaling law
+ * @param radiativeScaling       radiative N-scaling law
+ * @param tauTrionNegativeS      negative-trion Auger lifetime (s)
+ * @param tauTrionPositiveS      positive-trion Auger lifetime (s)
+ * @param ionisationProbability  probability that an Auger event ejects a carrier
+ * @param neutralisationS        lifetime of the photocharge (s)
+ * @param refreshS               time in which stirring or flow replaces the excited volume (s), +∞ for a static sample
+ * @param coolingS               intraband cooling time (s), used for delay windows
+ * @param bases                  one line per value saying where it comes from
+ */
+public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, double tauBiexcitonS,
+                               AugerScaling augerScaling, RadiativeScaling radiativeScaling, double tauTrionNegativeS,
+                               double tauTrionPositiveS, double ionisationProbability, double neutralisationS,
+                               double refreshS, double coolingS, List<String> bases) {
+
+    /** Default PL quantum yield of the single exciton (from memory: typical of good colloidal dots). */
+    public static final double DEFAULT_QUANTUM_YIELD = 0.5;
+    /** Default probability that an Auger event ejects a carrier (order of magnitude, from memory). */
+    public static final double DEFAULT_IONISATION = 1e-4;
+    /** Default photocharge lifetime in a static solution (order of magnitude, from memory). */
+    public static final double DEFAULT_NEUTRALISATION_S = 10;
+    /** Default time for a magnetic stirrer to renew the excited volume (common practice, no source). */
+    public static final double DEFAULT_STIRRED_REFRESH_S = 0.1;
+    /** Default intraband cooling time: sub-picosecond (Klimov & McBranch, Phys. Rev. Lett. 80, 4028 (1998)). */
+    public static final double DEFAULT_COOLING_S = 0.5e-12;
+
+    public ModelAssumptions {
+        bases = List.copyOf(bases);
+        for (double t : new double[] {tauSingleExcitonS, tauBiexcitonS, tauTrionNegativeS, tauTrionPositiveS,
+            neutralisationS, coolingS}) {
+            if (!(t > 0)) {
+                throw new IllegalArgumentException("model lifetimes must be > 0, got " + t + " s");
+            }
+        }
+        if (!(plQuantumYield > 0 && plQuantumYield <= 1) || !(ionisationProbability >= 0 && ionisationProbability <= 1)) {
+            throw new IllegalArgumentException("quantum yield must be in (0, 1] and ionisation probability in [0, 1]");
+        }
+        if (!(refreshS > 0)) {
+            throw new IllegalArgumentException("refresh time must be > 0 (use +∞ for a static sample), was " + refreshS + " s");
+        }
+    }
+
+    /**
+     * Values overridden by the plan; NaN or null means "derive from the material".
+     */
+    public record Overrides(double tauSingleExcitonS, double plQuantumYield, double tauBiexcitonS, AugerScaling augerScaling,
+                            RadiativeScaling radiativeScaling, double tauTrionNegativeS, double tauTrionPositiveS,
+                            double ionisationProbability, double neutralisationS, double coolingS) {
+        /** Nothing overridden. */
+        public static final Overrides NONE = new Overrides(Double.NaN, Double.NaN, Double.NaN, null, null, Double.NaN,
+                Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+    }
+
+    /** The model for a sample: material values scaled to its size, then the plan's overrides. */
+    public static ModelAssumptions forSample(Sample sample, Overrides o) {
+        List<String> bases = new ArrayList<>();
+        var m = sample.material();
+        double tau1 = pick(o.tauSingleExcitonS(), m.singleExcitonLifetimeS().value(), "τ₁", "plan",
+                "material library: " + m.singleExcitonLifetimeS().source(), bases);
+        double qy = pick(o.plQuantumYield(), DEFAULT_QUANTUM_YIELD, "PL quantum yield", "plan", "default (from memory)", bases);
+        double tau2 = pick(o.tauBiexcitonS(), m.biexcitonAugerLifetimeS(sample.sizeM()), "τ₂", "plan",
+                "Auger volume scaling τ₂ = C·V with C from " + m.augerVolumeConstantSPerM3().source(), bases);
+        AugerScaling auger = o.augerScaling() != null ? o.augerScaling() : AugerScaling.STATISTICAL;
+        bases.add("Auger scaling " + auger.key() + (o.augerScaling() != null ? ": plan"
+                : ": default, carrier-triplet counting (Klimov, McGuire, Schaller, Rupasov, Phys. Rev. B 77, 195324 (2008))"));
+        RadiativeScaling rad = o.radiativeScaling() != null ? o.radiativeScaling() : RadiativeScaling.STATISTICAL;
+        bases.add("radiative scaling " + rad.key() + (o.radiativeScaling() != null ? ": plan"
+                : ": default, N² (Rajadell, Climente, Planelles, Bertoni, J. Phys. Chem. C 113, 11268 (2009))"));
+        double trionNeg = pick(o.tauTrionNegativeS(), m.trionLifetimeS().value(), "negative-trion lifetime", "plan",
+                "material library: " + m.trionLifetimeS().source(), bases);
+        // 1/τ_XX = 2/τ_X− + 2/τ_X+ (Park, Bae, Padilha, Pietryga, Klimov, Phys. Rev. Lett. 2014, from memory)
+        double posRate = (1 / tau2 - 2 / trionNeg) / 2;
+        double trionPosDerived = posRate > 0 ? 1 / posRate : trionNeg;
+        double trionPos = pick(o.tauTrionPositiveS(), trionPosDerived, "positive-trion lifetime", "plan",
+                posRate > 0 ? "from 1/τ₂ = 2/τ_X− + 2/τ_X+ (Park et al., Phys. Rev. Lett. 2014, from memory)"
+                        : "taken equal to the negative trion (the trion relation gave no positive rate)", bases);
+        double pIon = pick(o.ionisationProbability(), DEFAULT_IONISATION, "Auger ionisation probability", "plan",
+                "default order of magnitude (from memory)", bases);
+        double neut = pick(o.neutralisationS(), DEFAULT_NEUTRALISATION_S, "photocharge lifetime", "plan",
+                "default order of magnitude for solutions (from memory)", bases);
+        double cooling = pick(o.coolingS(), DEFAULT_COOLING_S, "cooling time", "plan",
+                "default, sub-picosecond (Klimov & McBranch, Phys. Rev. Lett. 80, 4028 (1998))", bases);
+        Refresh refresh = sample.spec().refresh();
+        double refreshS = switch (refresh.mode()) {
+            case STATIC -> Double.POSITIVE_INFINITY;
+            case STIRRED -> DEFAULT_STIRRED_REFRESH_S;
+            case FLOWING -> refresh.exchangeTimeS();
+        };
+        bases.add("refresh: " + switch (refresh.mode()) {
+            case STATIC -> "static sample, no exchange";
+            case STIRRED -> "stirred, excited volume renewed in ~0.1 s (common practice, no source)";
+            case FLOWING -> "flowing, cell volume / flow rate";
+        });
+        return new ModelAssumptions(tau1, qy, tau2, auger, rad, trionNeg, trionPos, pIon, neut, refreshS, cooling, bases);
+    }
+
+    /** The ladder model: neutral and negative dots, no hot-exciton resolution (instantaneous cooling). */
+    public KineticModel kineticModel(int degeneracy) {
+        List<RateLaw> laws = new ArrayList<>();
+        laws.add(new RadiativeDecay(plQuantumYield / tauSingleExcitonS, radiativeScaling, RadiativeDecay.DEFAULT_CHARGED_FACTOR));
+        if (plQuantumYield < 1) {
+            laws.add(new Trapping((1 - plQuantumYield) / tauSingleExcitonS));
+        }
+        laws.add(new AugerRecombination(1 / tauBiexcitonS, augerScaling, 1 / tauTrionNegativeS, 1 / tauTrionPositiveS,
+                new AugerIonisation(ionisationProbability, Charge.NEGATIVE)));
+        laws.add(new Neutralisation(1 / neutralisationS));
+        if (Double.isFinite(refreshS)) {
+            laws.add(new SampleRefresh(1 / refreshS));
+        }
+        Set<Charge> charges = ionisationProbability > 0 ? EnumSet.of(Charge.NEUTRAL, Charge.NEGATIVE) : EnumSet.of(Charge.NEUTRAL);
+        return new KineticModel(laws, charges, false, degeneracy, 0);
+    }
+
+    /** A copy with the biexciton lifetime changed (the instance is not changed). */
+    public ModelAssumptions withTauBiexcitonS(double tau) {
+        return new ModelAssumptions(tauSingleExcitonS, plQuantumYield, tau, augerScaling, radiativeScaling, tauTrionNegativeS,
+                tauTrionPositiveS, ionisationProbability, neutralisationS, refreshS, coolingS, bases);
+    }
+
+    /** A copy with the single-exciton lifetime changed (the instance is not changed). */
+    public ModelAssumptions withTauSingleExcitonS(double tau) {
+        return new ModelAssumptions(tau, plQuantumYield, tauBiexcitonS, augerScaling, radiativeScaling, tauTrionNegativeS,
+                tauTrionPositiveS, ionisationProbability, neutralisationS, refreshS, coolingS, bases);
+    }
+
+    /** A copy with a different refresh time (the instance is not changed). */
+    public ModelAssumptions withRefreshS(double refresh) {
+        return new ModelAssumptions(tauSingleExcitonS, plQuantumYield, tauBiexcitonS, augerScaling, radiativeScaling,
+                tauTrionNegativeS, tauTrionPositiveS, ionisationProbability, neutralisationS, refresh, coolingS, bases);
+    }
+
+    private static double pick(double override, double derived, String what, String overrideBasis, String derivedBasis,
+                               List<String> bases) {
+        if (!Double.isNaN(override)) {
+            bases.add(what + ": " + overrideBasis);
+            return override;
+        }
+        bases.add(what + ": " + derivedBasis);
+        return derived;
+    }
+}

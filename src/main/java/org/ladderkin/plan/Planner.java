@@ -1,0 +1,296 @@
+package org.ladderkin.plan;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.stream.IntStream;
+import org.ladderkin.excite.BeamProfile;
+import org.ladderkin.excite.Excitation;
+import org.ladderkin.excite.GaussianBeam;
+import org.ladderkin.excite.Pulse;
+import org.ladderkin.kinetics.KineticModel;
+import org.ladderkin.kinetics.LadderKinetics;
+import org.ladderkin.kinetics.train.PeriodicSteadyState;
+import org.ladderkin.kinetics.train.PulseExcitation;
+import org.ladderkin.kinetics.train.SteadyState;
+import org.ladderkin.observe.EarlyLate;
+import org.ladderkin.observe.Heating;
+import org.ladderkin.observe.Photoluminescence;
+import org.ladderkin.observe.PulseTrainRisks;
+import org.ladderkin.observe.Risk;
+import org.ladderkin.observe.TimeWindows;
+import org.ladderkin.observe.Verdict;
+import org.ladderkin.report.Cautions;
+import org.ladderkin.sample.Advisory;
+import org.ladderkin.sample.Sample;
+
+/**
+ * Turns a sample and a laser into a campaign plan: pump wavelength, repetition rate, an optimal fluence series and
+ * delay grid, predicted signals and a risk table. Pure computation: no files, no printing.
+ */
+public final class Planner {
+
+    /** Share of the beam time that goes into recording data (the rest is alignment and checks): common practice. */
+    public static final double DATA_SHARE_OF_BEAM_TIME = 0.5;
+    /** Above this ⟨N⟩ the ladder, Poisson statistics and the Auger scaling laws are extrapolations. */
+    public static final double MODEL_VALIDITY_N = 10;
+    /** Assumed PL collection × detection efficiency for the TCSPC pile-up estimate (common practice, no source). */
+    public static final double TCSPC_COLLECTION_EFFICIENCY = 1e-4;
+
+    /** Progress of a long computation. */
+    @FunctionalInterface
+    public interface Progress {
+        void step(int done, int total, String what);
+
+        /** Ignores progress. */
+        Progress NONE = (d, t, w) -> { };
+    }
+
+    private Planner() {
+    }
+
+    /** Plans the campaign the inputs describe. */
+    public static CampaignPlan plan(PlanInputs in, Progress progress) {
+        int totalSteps = 6;
+        Sample sample = in.sample();
+        LaserSetup laser = in.laser();
+        int g = (int) Math.round(sample.material().electronDegeneracy().value());
+        ModelAssumptions model = ModelAssumptions.forSample(sample, in.modelOverrides());
+        KineticModel km = model.kineticModel(g);
+        BeamProfile pump = new GaussianBeam(laser.pumpRadiusM());
+        BeamProfile probe = new GaussianBeam(laser.probeRadiusM());
+
+        progress.step(0, totalSteps, "ranking pump wavelengths");
+        List<WavelengthOption> wavelengths = WavelengthRanking.rank(sample, laser.pumpWavelengthsM(),
+                laser.maxPulseEnergyJ(), laser.repetitionRateHz(), pump, probe, in.goals());
+        WavelengthOption chosen = wavelengths.get(0);
+        Excitation atMax = Excitation.of(sample, new Pulse(laser.maxPulseEnergyJ(), chosen.wavelengthM(),
+                laser.repetitionRateHz()), pump, probe, true);
+        double nReach = Math.min(atMax.nAvgProbeWeighted(), MODEL_VALIDITY_N);
+        double nTop = Math.min(5, nReach);
+
+        progress.step(1, totalSteps, "judging repetition rates");
+        List<RateOption> rates = rates(in, km, model, atMax, nTop);
+        RateOption chosenRate = rates.stream().filter(r -> r.verdict() != Verdict.FAIL)
+                .max(java.util.Comparator.comparingDouble(RateOption::repetitionRateHz))
+                .orElse(rates.stream().min(java.util.Comparator.comparingDouble(RateOption::repetitionRateHz)).orElseThrow());
+        double period = 1 / chosenRate.repetitionRateHz();
+
+        progress.step(2, totalSteps, "searching the fluence and delay design");
+        Instrument ta = in.instruments().stream().filter(i -> i.kind() == Instrument.Kind.TRANSIENT_ABSORPTION)
+                .findFirst().orElse(null);
+        double bandEdgeOd = Double.isNaN(sample.firstExcitonEnergyJ()) ? Double.NaN
+                : sample.absorbanceAt(sample.firstExcitonWavelengthM());
+        var goalParams = DesignSearch.parametersFor(in.goals());
+        DesignSearch.Result design = null;
+        double firstDelay = ta == null ? 1e-12 : Math.max(ta.minDelayS(), 5 * model.coolingS());
+        double lastDelay = ta == null ? 3e-9 : ta.maxDelayS();
+        if (ta != null && !goalParams.isEmpty() && !Double.isNaN(bandEdgeOd) && nReach > 0.2) {
+            double budget = in.limits().beamTimeS() * DATA_SHARE_OF_BEAM_TIME;
+            design = DesignSearch.search(new DesignSearch.Context(model, g, period, bandEdgeOd, ta.noiseFloor(), budget,
+                    firstDelay, lastDelay, nReach, goalParams));
+        }
+        double[] nSeries = design != null ? design.best().nValues()
+                : TimeWindows.logSpaced(0.05, Math.max(0.1, Math.min(3, nReach)), 8);
+
+        progress.step(3, totalSteps, "converting the series to pulse energies");
+        Excitation atChosenRate = Excitation.of(sample, new Pulse(laser.maxPulseEnergyJ(), chosen.wavelengthM(),
+                chosenRate.repetitionRateHz()), pump, probe, true);
+        List<FluencePoint> fluences = new ArrayList<>();
+        for (double n : nSeries) {
+            double e = atChosenRate.pulseEnergyForTargetJ(n, Excitation.TargetMode.PROBE_AVERAGED);
+            Excitation ex = atChosenRate.withEnergyJ(e);
+            boolean reachable = e <= laser.maxPulseEnergyJ() * (1 + 1e-9) && e >= laser.minPulseEnergyJ() * (1 - 1e-9);
+            fluences.add(new FluencePoint(n, ex.nAvgPeak(), e, Math.log10(laser.maxPulseEnergyJ() / e),
+                    ex.photonFluencePeakPerM2(), reachable));
+        }
+
+        progress.step(4, totalSteps, "predicting traces");
+        double[] taDelays = design != null ? design.best().delaysS() : TimeWindows.logSpaced(firstDelay, lastDelay, 60);
+        Predictions predictions = predict(km, nSeries, period, taDelays, bandEdgeOd, model);
+        Excitation top = atChosenRate.withEnergyJ(fluences.get(fluences.size() - 1).pulseEnergyJ());
+        HeatBudget heat = heatAt(km, top, nSeries[nSeries.length - 1], period);
+
+        progress.step(5, totalSteps, "delay plans and risks");
+        List<DelayPlan> delayPlans = new ArrayList<>();
+        for (Instrument inst : in.instruments()) {
+            delayPlans.add(delayPlan(inst, model, design, nSeries.length, km, nSeries[nSeries.length - 1], period, top, in));
+        }
+        List<Risk> risks = new ArrayList<>();
+        risks.add(Heating.risk("steady-state heating", heat.steadyRiseK(), 295, in.limits().maxTemperatureRiseK(),
+                heat.boilingPointK()));
+        risks.add(PulseTrainRisks.chargingRisk(chosenRate.charged(), in.limits().maxChargedFraction()));
+        risks.add(PulseTrainRisks.residualRisk(chosenRate.residual(), in.limits().maxResidualExcitation()));
+        for (DelayPlan d : delayPlans) {
+            risks.addAll(d.risks());
+        }
+        risks.add(thickness(chosen));
+        risks.add(new Risk("fluence within the model's range", nSeries[nSeries.length - 1] > MODEL_VALIDITY_N ? Verdict.WARN
+                : Verdict.PASS, nSeries[nSeries.length - 1], MODEL_VALIDITY_N, "⟨N⟩", String.format(Locale.ROOT,
+                "highest ⟨N⟩ %.3g; above %.0f the ladder, Poisson statistics and the Auger scaling laws are extrapolated",
+                nSeries[nSeries.length - 1], MODEL_VALIDITY_N)));
+        if (!in.goals().contains(Goal.MULTIPLICATION_YIELD) && chosen.energyOverGap() >= 2) {
+            risks.add(new Risk("carrier-multiplication confound", Verdict.WARN, chosen.energyOverGap(), 2, "E₁S",
+                    "the chosen pump can create two excitons per photon; no lower-energy pump was acceptable"));
+        }
+        long unreachable = fluences.stream().filter(f -> !f.reachable()).count();
+        if (unreachable > 0) {
+            risks.add(new Risk("fluence series within the laser's range", Verdict.FAIL, unreachable, 0, "points",
+                    unreachable + " point(s) of the series need pulse energies outside the laser's range"));
+        }
+        List<String> advisories = atChosenRate.advisories().stream().map(Advisory::message).distinct().toList();
+        String matrixKey = sample.spec().matrix().map(m -> m.key()).orElse("unknown matrix");
+        List<String> cautions = Cautions.forCampaign(sample.material().key(), matrixKey, heat.steadyRiseK(),
+                heat.boilingPointK());
+        progress.step(6, totalSteps, "done");
+        return new CampaignPlan(in, model, wavelengths, rates, chosenRate, fluences, heat, design, delayPlans, predictions,
+                risks, advisories, cautions);
+    }
+
+    private static List<RateOption> rates(PlanInputs in, KineticModel km, ModelAssumptions model, Excitation atMax,
+                                          double nTop) {
+        LaserSetup laser = in.laser();
+        PulseExcitation pulse = new PulseExcitation.Poisson(nTop);
+        double energyTop = atMax.pulseEnergyForTargetJ(nTop, Excitation.TargetMode.PROBE_AVERAGED);
+        List<Integer> divisions = laser.pulsePickerDivisions().stream().sorted().toList();
+        RateOption[] out = new RateOption[divisions.size()];
+        IntStream.range(0, divisions.size()).parallel().forEach(i -> {
+            int d = divisions.get(i);
+            double rate = laser.repetitionRateHz() / d;
+            LadderKinetics kin = LadderKinetics.forPulses(km, pulse);
+            SteadyState ss = kin.steadyState(pulse, 1 / rate, false);
+            double residual = PulseTrainRisks.residualBeforePulse(kin, pulse, 1 / rate);
+            Excitation ex = Excitation.of(atMax.sample(), new Pulse(energyTop, atMax.pulse().wavelengthM(), rate),
+                    atMax.geometry().pump(), atMax.geometry().probe(), true);
+            HeatBudget heat = heatAt(km, ex, nTop, 1 / rate);
+            Limits lim = in.limits();
+            Verdict v = Verdict.against(residual, lim.maxResidualExcitation(), 1)
+                    .worst(Verdict.against(ss.chargedFraction(), lim.maxChargedFraction(), 1))
+                    .worst(Double.isNaN(heat.steadyRiseK()) ? Verdict.WARN
+                            : Verdict.against(heat.steadyRiseK(), lim.maxTemperatureRiseK(), 1));
+            out[i] = new RateOption(d, rate, residual, ss.chargedFraction(), heat.steadyRiseK(), v);
+        });
+        return List.of(out);
+    }
+
+    private static HeatBudget heatAt(KineticModel km, Excitation ex, double n, double period) {
+        PulseExcitation pulse = new PulseExcitation.Poisson(n);
+        LadderKinetics kin = LadderKinetics.forPulses(km, pulse);
+        SteadyState ss = kin.steadyState(pulse, period, false);
+        double emitted = Photoluminescence.emittedPerPulse(kin, ss.afterPulse(), period);
+        return HeatBudget.of(ex, n > 0 ? emitted / n : 0, n);
+    }
+
+    private static Predictions predict(KineticModel km, double[] nSeries, double period, double[] taDelays,
+                                       double bandEdgeOd, ModelAssumptions model) {
+        PulseExcitation strongest = new PulseExcitation.Poisson(nSeries[nSeries.length - 1]);
+        double[] plDelays = TimeWindows.logSpaced(1e-12, Math.min(period, 20 * model.tauSingleExcitonS()), 120);
+        TimeWindows.EarlyLate windows = TimeWindows.earlyLate(model.coolingS(), model.tauBiexcitonS(), model.tauSingleExcitonS());
+        int k = nSeries.length;
+        double[][] dA = new double[k][];
+        double[][] pl = new double[k][];
+        double[][] occupancy = new double[k][];
+        EarlyLate.Point[] el = new EarlyLate.Point[k];
+        IntStream.range(0, k).parallel().forEach(i -> {
+            LadderKinetics kin = LadderKinetics.forPulses(km, strongest);
+            PulseExcitation pulse = new PulseExcitation.Poisson(nSeries[i]);
+            SteadyState ss = kin.steadyState(pulse, period, false);
+            double[] bleach = kin.trace(ss.afterPulse(), taDelays).bleach();
+            dA[i] = new double[bleach.length];
+            for (int m = 0; m < bleach.length; m++) {
+                dA[i][m] = -bandEdgeOd * bleach[m];
+            }
+            pl[i] = kin.trace(ss.afterPulse(), plDelays).photoluminescencePerS();
+            occupancy[i] = ss.afterPulse().excitonDistribution();
+            double[] two = kin.trace(ss.afterPulse(), new double[] {windows.earlyS(), windows.lateS()}).bleach();
+            el[i] = new EarlyLate.Point(nSeries[i], two[0], two[1]);
+        });
+        LadderKinetics kin = LadderKinetics.forPulses(km, strongest);
+        PeriodicSteadyState train = kin.pulseTrain(strongest, period);
+        int pulses = PeriodicSteadyState.pulsesToOnePercent(train.secondEigenvalueModulus());
+        int shown = Math.max(10, Math.min(200, pulses * 2));
+        double[] excitedOrCharged = new double[shown];
+        double[] charged = PulseTrainRisks.chargedBuildUp(kin, strongest, period, shown);
+        List<double[]> states = train.buildUp(shown);
+        var space = kin.space();
+        for (int p = 0; p < shown; p++) {
+            double s = 0;
+            for (int st = 0; st < space.size(); st++) {
+                if (space.excitons(st) > 0 || space.charge(st).charged()) {
+                    s += states.get(p)[st];
+                }
+            }
+            excitedOrCharged[p] = s;
+        }
+        return new Predictions(taDelays, List.of(dA), plDelays, List.of(pl), List.of(el), List.of(occupancy),
+                excitedOrCharged, charged, pulses);
+    }
+
+    private static DelayPlan delayPlan(Instrument inst, ModelAssumptions model, DesignSearch.Result design, int fluenceCount,
+                                       KineticModel km, double nTop, double period, Excitation top, PlanInputs in) {
+        TimeWindows.EarlyLate windows = TimeWindows.earlyLate(model.coolingS(), model.tauBiexcitonS(), model.tauSingleExcitonS());
+        List<Risk> risks = new ArrayList<>();
+        double budget = in.limits().beamTimeS() * DATA_SHARE_OF_BEAM_TIME;
+        if (inst.kind() == Instrument.Kind.TRANSIENT_ABSORPTION) {
+            double[] grid;
+            double perPoint;
+            if (design != null) {
+                double irfStep = Math.max(inst.irfFwhmS() / 2, 20e-15);
+                double linearEnd = Math.max(2e-12, 10 * inst.irfFwhmS());
+                double[] logPart = design.best().delaysS();
+                java.util.TreeSet<Double> all = new java.util.TreeSet<>();
+                for (double t = -2 * inst.irfFwhmS(); t < linearEnd; t += irfStep) {
+                    all.add(Math.round(t / 1e-16) * 1e-16);
+                }
+                for (double t : logPart) {
+                    if (t >= linearEnd) {
+                        all.add(t);
+                    }
+                }
+                grid = all.stream().mapToDouble(Double::doubleValue).toArray();
+                perPoint = budget / (fluenceCount * grid.length);
+            } else {
+                grid = TimeWindows.grid(-2 * inst.irfFwhmS(), Math.max(inst.irfFwhmS() / 2, 20e-15),
+                        Math.max(2e-12, 10 * inst.irfFwhmS()), inst.maxDelayS(), 10);
+                perPoint = budget / (fluenceCount * grid.length);
+            }
+            if (!windows.separated()) {
+                risks.add(new Risk("early/late windows", Verdict.WARN, windows.lateS(), windows.earlyS(), "s",
+                        "cooling, Auger and radiative time scales are too close for a clean early/late analysis"));
+            }
+            if (inst.maxDelayS() < 5 * model.tauBiexcitonS()) {
+                risks.add(new Risk("TA delay range", Verdict.WARN, inst.maxDelayS() / model.tauBiexcitonS(), 5, "τ₂",
+                        "the delay stage does not reach 5 τ₂: the Auger decay will not be complete"));
+            }
+            return new DelayPlan(inst, grid, TimeWindows.stageTravelM(inst.maxDelayS()), windows, perPoint,
+                    perPoint * grid.length, risks);
+        }
+        // TCSPC: bins over the range; decay coverage, period coverage and pile-up
+        int bins = (int) Math.ceil(inst.maxDelayS() / inst.minDelayS());
+        double[] grid = new double[Math.min(bins, 100_000)];
+        for (int i = 0; i < grid.length; i++) {
+            grid[i] = (i + 0.5) * inst.minDelayS();
+        }
+        risks.add(TimeWindows.decayCovered("TCSPC range vs τ₁", inst.maxDelayS(), model.tauSingleExcitonS()));
+        risks.add(TimeWindows.decayCovered("pulse period vs τ₁", period, model.tauSingleExcitonS()));
+        PulseExcitation pulse = new PulseExcitation.Poisson(nTop);
+        LadderKinetics kin = LadderKinetics.forPulses(km, pulse);
+        SteadyState ss = kin.steadyState(pulse, period, false);
+        double emittedPerDot = Photoluminescence.emittedPerPulse(kin, ss.afterPulse(), period);
+        double detectedPerPulse = emittedPerDot * top.dotsInExcitedVolume() * TCSPC_COLLECTION_EFFICIENCY;
+        Risk pile = TimeWindows.pileUp(detectedPerPulse / period, 1 / period, inst.maxCountFraction());
+        risks.add(new Risk(pile.name(), pile.verdict(), pile.value(), pile.limit(), pile.unit(), pile.why()
+                + String.format(Locale.ROOT, " (assumes %.0e collection × detection efficiency; attenuate the emission by "
+                + "%.2g× if needed)", TCSPC_COLLECTION_EFFICIENCY, Math.max(1, pile.value() / inst.maxCountFraction()))));
+        double perPoint = budget / fluenceCount;
+        return new DelayPlan(inst, grid, 0, windows, perPoint, perPoint, risks);
+    }
+
+    private static Risk thickness(WavelengthOption chosen) {
+        double od = chosen.absorbanceOd();
+        Verdict v = od >= 3 ? Verdict.FAIL : od > 1 ? Verdict.WARN : Verdict.PASS;
+        return new Risk("optically thick sample", v, od, 1, "OD", String.format(Locale.ROOT,
+                "absorbance %.3g OD at the pump; above 1 OD the fluence falls through the depth and the fluence "
+                        + "dependence bends (depth averaging is applied), at 3 OD absorbance readings are unreliable", od));
+    }
+}
