@@ -38,10 +38,10 @@ import picocli.CommandLine.Spec;
  * {@code ladderkin excite}: from pulse energy to ⟨N⟩ on the axis and as the probe sees it, and back.
  */
 @Command(name = "excite", mixinStandardHelpOptions = true,
-        description = {"Photon fluence, ⟨N⟩ = σ·j on the pump axis and averaged over the probe spot and the sample depth,",
-            "absorbed fraction and power; with --target-n, the pulse energy that gives a target ⟨N⟩.",
-            "The sample comes from SAMPLE.json (schema ladderkin.sample/1) or from flags (--material, --diameter or",
-            "--first-peak, --od or --concentration, --path). Radii are 1/e² intensity radii unless --pump-fwhm/--probe-fwhm."},
+        description = {"Photon fluence, ⟨N⟩ = σ·j on the pump axis and as the probe sees it (averaged over its spot and",
+            "the sample depth), absorbed fraction and power. With --target-n: the pulse energy giving that ⟨N⟩.",
+            "The sample comes from SAMPLE.json (schema ladderkin.sample/1) or from flags: --material, --diameter",
+            "or --first-peak, --od or --concentration, --path. Radii are 1/e² intensity radii (or use --*-fwhm)."},
         footer = {"", "Example: ladderkin excite --material PbSe --diameter 5nm --od 0.3 --path 1mm --pump 800nm \\",
             "           --energy 50nJ --rep-rate 1kHz --pump-radius 100um --probe-radius 40um --target-n 1.5"})
 final class ExciteCommand implements Callable<Integer> {
@@ -113,7 +113,7 @@ final class ExciteCommand implements Callable<Integer> {
     @Option(names = "--first-peak", paramLabel = "WAVELENGTH", description = "measured first-exciton absorption peak")
     String firstPeak;
 
-    @Option(names = "--dispersion", paramLabel = "FRACTION", description = "relative size dispersion, e.g. 8%")
+    @Option(names = "--dispersion", paramLabel = "FRACTION", description = "relative size dispersion, e.g. 8%%")
     String dispersion;
 
     @Option(names = "--od", paramLabel = "A", description = "measured absorbance over the path (at --od-at, default the pump)")

@@ -120,7 +120,8 @@ final class MaterialsCommand implements Callable<Integer> {
     }
 
     private static void row(PrintWriter out, String label, Sourced s, java.util.function.DoubleFunction<String> f) {
-        out.println(String.format(Locale.ROOT, "  %-26s %s", label, s.known() ? f.apply(s.value()) : "unknown"));
+        String mark = s.known() && s.unconfirmed() ? "   [unconfirmed: replace with your own value]" : "";
+        out.println(String.format(Locale.ROOT, "  %-26s %s%s", label, s.known() ? f.apply(s.value()) : "unknown", mark));
         out.println("  " + " ".repeat(27) + "source: " + s.source());
     }
 }

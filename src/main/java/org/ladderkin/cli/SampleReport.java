@@ -38,7 +38,7 @@ final class SampleReport {
                 + spec.matrix().map(m -> ", in " + m.name()).orElse("") + ", " + spec.refresh().key()
                 + (spec.refresh().mode() == org.ladderkin.sample.Refresh.Mode.FLOWING
                 ? " at " + fmt(spec.refresh().flowRateM3PerS(), Dimension.VOLUMETRIC_FLOW) + " through "
-                + fmt(spec.refresh().cellVolumeM3(), Dimension.VOLUME) : ""));
+                + org.ladderkin.material.Numbers.sig(spec.refresh().cellVolumeM3() * 1e6, 4) + " mL" : ""));
         spec.spectrum().ifPresent(sp -> out.println("         absorption spectrum " + sp.origin()));
         if (!spec.material().notes().isEmpty()) {
             out.println("         " + spec.material().notes());
@@ -114,6 +114,6 @@ final class SampleReport {
     }
 
     static String pct(double fraction) {
-        return String.format(Locale.ROOT, "%.3g %%", fraction * 100);
+        return org.ladderkin.material.Numbers.sig(fraction * 100, 3) + " %";
     }
 }

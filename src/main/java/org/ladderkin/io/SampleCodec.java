@@ -101,6 +101,9 @@ public final class SampleCodec {
         Refresh refresh = refresh(n.field("refresh"));
         Optional<AbsorptionSpectrum> spectrum = n.optional("absorptionSpectrum").map(s -> {
             Path p = baseDir.resolve(s.string());
+            if (!java.nio.file.Files.isRegularFile(p)) {
+                throw s.error("spectrum file not found: " + p + " (relative paths start at the sample file's folder)");
+            }
             return AbsorptionSpectrumCsv.read(p, s.string());
         });
         Node csNode = n.optional("crossSection").orElse(null);

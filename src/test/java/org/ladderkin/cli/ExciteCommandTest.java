@@ -115,6 +115,24 @@ class ExciteCommandTest {
     }
 
     @Test
+    void helpListsTheNewCommands() {
+        MainTest.Run r = MainTest.run("--help");
+        assertThat(r.out()).contains("excite").contains("materials");
+    }
+
+    @Test
+    void exampleSampleFileRuns() throws Exception {
+        MainTest.Run r = MainTest.run("excite", MainTest.HOME.resolve("experiments-plan/fh-pbse-17.sample.json").toString(),
+                "--pump", "400nm", "--energy", "50nJ", "--rep-rate", "1kHz", "--pump-radius", "100um", "--probe-radius", "40um",
+                "--target-n", "1.5", "--format", "json");
+        assertThat(r.err()).isEmpty();
+        JsonNode j = new ObjectMapper().readTree(r.out());
+        assertThat(j.get("sample").get("refresh").asText()).isEqualTo("flowing");
+        assertThat(j.get("absorbanceAtPumpOd").asDouble()).isCloseTo(0.3, org.assertj.core.data.Offset.offset(1e-12));
+        assertThat(j.get("nAvgProbeWeighted").asDouble()).isLessThan(j.get("nAvgPeak").asDouble());
+    }
+
+    @Test
     void materialsListAndOne() {
         MainTest.Run list = MainTest.run("materials");
         assertThat(list.exit()).isZero();

@@ -79,6 +79,16 @@ class ExcitationTest {
     }
 
     @Test
+    void frontFaceOnlyWhenDepthAveragingIsOff() {
+        Excitation x = Excitation.of(pbse(1.0), new Pulse(50e-9, 400e-9, 1e3), new GaussianBeam(1e-4), new GaussianBeam(4e-5), false);
+        assertThat(x.nAvgProbeWeighted()).isEqualTo(x.nAvgProbeWeightedFrontFace());
+        assertThat(x.nAvgOnAxisDepthAveraged()).isEqualTo(x.nAvgPeak());
+        Excitation thick = x.withEnergyJ(50e-9);
+        assertThat(Excitation.of(pbse(1.0), thick.pulse(), new GaussianBeam(1e-4), new GaussianBeam(4e-5), true).nAvgProbeWeighted())
+                .isLessThan(x.nAvgProbeWeighted());
+    }
+
+    @Test
     void averagePowerGivesThePulseEnergy() {
         Pulse p = Pulse.fromAveragePower(50e-6, 400e-9, 1e3);
         assertThat(p.energyJ()).isCloseTo(50e-9, org.assertj.core.data.Offset.offset(1e-20));

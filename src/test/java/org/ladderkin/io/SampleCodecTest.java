@@ -105,6 +105,15 @@ public class SampleCodecTest {
     }
 
     @Test
+    void missingSpectrumFileIsReportedAtTheField(@TempDir Path dir) {
+        String t = FILE.replace("\"pathLength\"", "\"absorptionSpectrum\": \"none.csv\", \"pathLength\"");
+        Node root = JsonTree.parse(t, "s.json");
+        assertThatThrownBy(() -> SampleCodec.section(root, MaterialLibrary.fromHome(), dir))
+                .hasMessage("s.json:8:25: field 'absorptionSpectrum': spectrum file not found: " + dir.resolve("none.csv")
+                        + " (relative paths start at the sample file's folder)");
+    }
+
+    @Test
     void wrongSchemaIsRefused() {
         assertThatThrownBy(() -> read(FILE.replace("ladderkin.sample/1", "ladderkin.plan/1")))
                 .hasMessage("s.json:2:13: field 'schema': expected schema 'ladderkin.sample/1', found 'ladderkin.plan/1'");

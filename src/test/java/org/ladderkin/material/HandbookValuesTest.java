@@ -39,6 +39,16 @@ class HandbookValuesTest {
     }
 
     @Test
+    @CheckedAgainst(source = "Moreels et al., ACS Nano 3, 3023 (2009), abstract: PbS and PbSe exciton lifetimes between 1 and 3 µs",
+            kind = CheckedAgainst.Kind.PUBLISHED)
+    void leadChalcogenideExcitonLifetimesLieInThePublishedRange() {
+        for (String key : new String[] {"PbS", "PbSe"}) {
+            Reference.check(key + " single-exciton lifetime in the library (µs), 1–3 µs published",
+                    LIB.material(key).singleExcitonLifetimeS().value() * 1e6, 2.0, 1.0);
+        }
+    }
+
+    @Test
     @CheckedAgainst(source = "NIST Chemistry WebBook liquid heat capacities as listed in the project physics notes: toluene "
             + "157.1 J/(mol·K), chloroform 114.25 J/(mol·K); boiling points toluene 110.6 °C, chloroform 61.2 °C, n-hexane "
             + "68.7 °C, tetrachloroethylene 121.1 °C, n-octane 125.6 °C (not re-read; from memory)",
