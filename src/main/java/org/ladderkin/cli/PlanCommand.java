@@ -5,7 +5,12 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
+import org.ladderkin.io.AtomicFiles;
 import org.ladderkin.io.PlanCodec;
+import org.ladderkin.io.PlanOutputs;
+import org.ladderkin.plan.CampaignPlan;
+import org.ladderkin.plan.Planner;
+import org.ladderkin.report.PlanReport;
 import org.ladderkin.io.ResolvedJson;
 import org.ladderkin.plan.Goal;
 import org.ladderkin.plan.Instrument;
@@ -21,10 +26,10 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
-/** {@code ladderkin plan PLAN.json --out DIR}: reads a campaign plan and writes what it resolved. */
+/** {@code ladderkin plan PLAN.json --out DIR}: plans a campaign and writes the report. */
 @Command(name = "plan", mixinStandardHelpOptions = true,
-        description = {"Read a campaign plan (schema ladderkin.plan/1), check every input, and write the resolved plan.",
-            "Writes DIR/plan-resolved.json (every input in SI and trade units)."})
+        description = {"Turn a campaign plan (schema ladderkin.plan/1) into settings, predicted signals and a risk table.",
+            "Writes DIR/report.html, DIR/plan-resolved.json (every input and derived number with its unit) and DIR/traces.csv."})
 final class PlanCommand implements Callable<Integer> {
 
     @Spec
@@ -36,18 +41,48 @@ final class PlanCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "output folder (created if missing)")
     Path outDir;
 
+    @Option(names = "--quiet", description = "no progress bar")
+    boolean quiet;
+
     @Override
     public Integer call() throws Exception {
-        PlanInputs plan = PlanCodec.read(planFile);
+        PlanInputs inputs = PlanCodec.read(planFile);
         PrintWriter out = spec.commandLine().getOut();
-        printSummary(plan, out);
+        printSummary(inputs, out);
+        CampaignPlan plan = Planner.plan(inputs, quiet ? Planner.Progress.NONE : new ProgressBar(spec.commandLine().getErr()));
+        printSettings(plan, out);
         if (outDir != null) {
-            Path resolved = outDir.resolve("plan-resolved.json");
-            ResolvedJson.write(resolved, resolvedJson(plan));
-            out.println("wrote " + resolved);
+            AtomicFiles.writeString(outDir.resolve("report.html"), PlanReport.html(plan));
+            PlanOutputs.write(plan, outDir);
+            out.println("wrote " + outDir.resolve("report.html") + ", plan-resolved.json, traces.csv");
         }
         out.flush();
         return ExitCodes.OK;
+    }
+
+    private static void printSettings(CampaignPlan plan, PrintWriter out) {
+        out.println();
+        out.println("Settings to dial in");
+        var w = plan.chosenWavelength();
+        out.println("  pump        " + fmt(w.wavelengthM(), Dimension.LENGTH) + "  (" + String.join("; ", w.reasons()) + ")");
+        var r = plan.chosenRate();
+        out.println("  rate        " + fmt(r.repetitionRateHz(), Dimension.FREQUENCY) + "  (picker ÷" + r.division() + ")");
+        out.println("  series      ⟨N⟩ probe-averaged → pulse energy (attenuation)");
+        for (var f : plan.fluences()) {
+            out.println(String.format(java.util.Locale.ROOT, "              %7.3g → %-10s (%.2f OD)%s", f.nProbeAveraged(),
+                    fmt(f.pulseEnergyJ(), Dimension.ENERGY), f.attenuatorOd(), f.reachable() ? "" : "  OUT OF RANGE"));
+        }
+        if (plan.design() != null) {
+            var d = plan.design();
+            for (var p : d.goals()) {
+                out.println(String.format(java.util.Locale.ROOT, "  expected    %s ± %.3g %% (naive series: ± %.3g %%)",
+                        p.label(), 100 * d.best().error(p), 100 * d.naive().error(p)));
+            }
+        }
+        out.println("Risks");
+        for (var risk : plan.risks()) {
+            out.println(String.format(java.util.Locale.ROOT, "  %-5s %s: %s", risk.verdict(), risk.name(), risk.why()));
+        }
     }
 
     private static void printSummary(PlanInputs plan, PrintWriter out) {
@@ -79,56 +114,6 @@ final class PlanCommand implements Callable<Integer> {
                 + ", beam time " + fmt(plan.limits().beamTimeS(), Dimension.TIME));
         out.println();
         out.println("Safety   Class 4 pulsed lasers can blind and burn: follow your institution's laser safety officer and local rules.");
-    }
-
-    static ObjectNode resolvedJson(PlanInputs plan) {
-        ObjectNode root = ResolvedJson.object();
-        root.put("schema", "ladderkin.plan-resolved/1");
-        root.put("title", plan.title());
-        root.put("lab", plan.lab());
-        ObjectNode sample = root.putObject("sample");
-        SampleReport.json(plan.sample(), sample);
-        SampleReport.advisoriesJson(plan.sample().advisories(), sample.putArray("advisories"));
-        LaserSetup l = plan.laser();
-        ObjectNode laser = root.putObject("laser");
-        ArrayNode wl = laser.putArray("pumpWavelengthsNm");
-        ArrayNode ev = laser.putArray("pumpPhotonEnergiesEv");
-        for (double w : l.pumpWavelengthsM()) {
-            wl.add(w * 1e9);
-            ev.add(Photon.energyJ(w) / PhysicalConstants.ELECTRONVOLT_J);
-        }
-        laser.put("repetitionRateHz", l.repetitionRateHz());
-        ArrayNode div = laser.putArray("pulsePickerDivisions");
-        l.pulsePickerDivisions().forEach(div::add);
-        laser.put("pulseFwhmFs", l.pulseFwhmS() * 1e15);
-        laser.put("minPulseEnergyNj", l.minPulseEnergyJ() * 1e9);
-        laser.put("maxPulseEnergyNj", l.maxPulseEnergyJ() * 1e9);
-        laser.put("pumpRadiusUm", l.pumpRadiusM() * 1e6);
-        laser.put("probeRadiusUm", l.probeRadiusM() * 1e6);
-        ArrayNode inst = root.putArray("instruments");
-        for (Instrument i : plan.instruments()) {
-            ObjectNode o = inst.addObject();
-            o.put("kind", i.kind().key());
-            o.put("minDelayPs", i.minDelayS() * 1e12);
-            o.put("maxDelayPs", i.maxDelayS() * 1e12);
-            o.put("irfFwhmPs", i.irfFwhmS() * 1e12);
-            if (i.kind() == Instrument.Kind.TRANSIENT_ABSORPTION) {
-                o.put("noiseFloorOd", i.noiseFloor());
-            } else {
-                o.put("maxCountFraction", i.maxCountFraction());
-            }
-        }
-        ObjectNode goals = root.putObject("goals");
-        ArrayNode measure = goals.putArray("measure");
-        plan.goals().stream().sorted().forEach(g -> measure.add(g.key()));
-        ArrayNode cm = goals.putArray("multiplicationPhotonEnergiesEv");
-        plan.multiplicationPhotonEnergiesJ().forEach(e -> cm.add(e / PhysicalConstants.ELECTRONVOLT_J));
-        ObjectNode limits = root.putObject("limits");
-        limits.put("maxTemperatureRiseK", plan.limits().maxTemperatureRiseK());
-        limits.put("maxChargedFraction", plan.limits().maxChargedFraction());
-        limits.put("maxResidualExcitation", plan.limits().maxResidualExcitation());
-        limits.put("beamTimeH", plan.limits().beamTimeS() / 3600);
-        return root;
     }
 
     private static String fmt(double si, Dimension d) {

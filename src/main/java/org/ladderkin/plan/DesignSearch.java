@@ -199,38 +199,42 @@ public final class DesignSearch {
         int np = Parameter.values().length;
         double h = 1e-3;
         ModelAssumptions base = ctx.model();
-        double[][] y0 = traces(base, 1.0);
-        double[][] nPlus = traces(base, 1 + h);
-        double[][] nMinus = traces(base, 1 - h);
-        double[][] t2Plus = traces(base.withTauBiexcitonS(base.tauBiexcitonS() * Math.exp(h)), 1.0);
-        double[][] t2Minus = traces(base.withTauBiexcitonS(base.tauBiexcitonS() * Math.exp(-h)), 1.0);
-        double[][] t1Plus = traces(base.withTauSingleExcitonS(base.tauSingleExcitonS() * Math.exp(h)), 1.0);
-        double[][] t1Minus = traces(base.withTauSingleExcitonS(base.tauSingleExcitonS() * Math.exp(-h)), 1.0);
+        // seven independent model evaluations: base, ⟨N⟩ ± h, τ₂ ± h, τ₁ ± h (log steps), run in parallel
+        ModelAssumptions[] models = {base, base, base,
+            base.withTauBiexcitonS(base.tauBiexcitonS() * Math.exp(h)), base.withTauBiexcitonS(base.tauBiexcitonS() * Math.exp(-h)),
+            base.withTauSingleExcitonS(base.tauSingleExcitonS() * Math.exp(h)),
+            base.withTauSingleExcitonS(base.tauSingleExcitonS() * Math.exp(-h))};
+        double[] nFactors = {1, 1 + h, 1 - h, 1, 1, 1, 1};
+        double[][][] y = new double[models.length][][];
+        IntStream.range(0, models.length).parallel().forEach(k -> y[k] = traces(models[k], nFactors[k]));
         double a = ctx.bandEdgeAbsorbanceOd();
         double[][][] s = new double[candidateN.length][delays.length][np];
         for (int i = 0; i < candidateN.length; i++) {
             for (int m = 0; m < delays.length; m++) {
                 // ΔA = −A·b; d/dlogσ acts through n: n·∂b/∂n = ∂b/∂log n ≈ (b(n(1+h)) − b(n(1−h)))/(2h)
-                s[i][m][Parameter.AMPLITUDE.ordinal()] = -a * y0[i][m];
-                s[i][m][Parameter.CROSS_SECTION.ordinal()] = -a * (nPlus[i][m] - nMinus[i][m]) / (2 * h);
-                s[i][m][Parameter.TAU_BIEXCITON.ordinal()] = -a * (t2Plus[i][m] - t2Minus[i][m]) / (2 * h);
-                s[i][m][Parameter.TAU_SINGLE.ordinal()] = -a * (t1Plus[i][m] - t1Minus[i][m]) / (2 * h);
+                s[i][m][Parameter.AMPLITUDE.ordinal()] = -a * y[0][i][m];
+                s[i][m][Parameter.CROSS_SECTION.ordinal()] = -a * (y[1][i][m] - y[2][i][m]) / (2 * h);
+                s[i][m][Parameter.TAU_BIEXCITON.ordinal()] = -a * (y[3][i][m] - y[4][i][m]) / (2 * h);
+                s[i][m][Parameter.TAU_SINGLE.ordinal()] = -a * (y[5][i][m] - y[6][i][m]) / (2 * h);
             }
         }
         return s;
     }
 
-    /** Steady-state bleach traces for every candidate ⟨N⟩ (scaled by {@code nFactor}), in parallel. */
+    /**
+     * Steady-state bleach traces for every candidate ⟨N⟩ (scaled by {@code nFactor}). One ladder for all of them, so
+     * the generator is decomposed and the period map and delay grid are computed once.
+     */
     private double[][] traces(ModelAssumptions model, double nFactor) {
         KineticModel km = model.kineticModel(ctx.degeneracy());
         PulseExcitation strongest = new PulseExcitation.Poisson(candidateN[candidateN.length - 1] * nFactor);
+        LadderKinetics kin = LadderKinetics.forPulses(km, strongest);
         double[][] out = new double[candidateN.length][];
-        IntStream.range(0, candidateN.length).parallel().forEach(i -> {
-            LadderKinetics kin = LadderKinetics.forPulses(km, strongest);
+        for (int i = 0; i < candidateN.length; i++) {
             PulseExcitation pulse = new PulseExcitation.Poisson(candidateN[i] * nFactor);
             SteadyState ss = kin.steadyState(pulse, ctx.periodS(), false);
             out[i] = kin.trace(ss.afterPulse(), delays).bleach();
-        });
+        }
         return out;
     }
 

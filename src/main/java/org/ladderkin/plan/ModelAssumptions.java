@@ -82,6 +82,14 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
     public static ModelAssumptions forSample(Sample sample, Overrides o) {
         List<String> bases = new ArrayList<>();
         var m = sample.material();
+        if (Double.isNaN(o.tauSingleExcitonS()) && !m.singleExcitonLifetimeS().known()) {
+            throw new IllegalArgumentException(m.key() + " has no single-exciton lifetime in the library: give "
+                    + "\"singleExcitonLifetime\" in the plan's \"model\" section");
+        }
+        if (Double.isNaN(o.tauBiexcitonS()) && !m.augerVolumeConstantSPerM3().known()) {
+            throw new IllegalArgumentException(m.key() + " has no Auger volume constant in the library: give "
+                    + "\"biexcitonLifetime\" in the plan's \"model\" section");
+        }
         double tau1 = pick(o.tauSingleExcitonS(), m.singleExcitonLifetimeS().value(), "τ₁", "plan",
                 "material library: " + m.singleExcitonLifetimeS().source(), bases);
         double qy = pick(o.plQuantumYield(), DEFAULT_QUANTUM_YIELD, "PL quantum yield", "plan", "default (from memory)", bases);
@@ -93,8 +101,12 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
         RadiativeScaling rad = o.radiativeScaling() != null ? o.radiativeScaling() : RadiativeScaling.STATISTICAL;
         bases.add("radiative scaling " + rad.key() + (o.radiativeScaling() != null ? ": plan"
                 : ": default, N² (Rajadell, Climente, Planelles, Bertoni, J. Phys. Chem. C 113, 11268 (2009))"));
-        double trionNeg = pick(o.tauTrionNegativeS(), m.trionLifetimeS().value(), "negative-trion lifetime", "plan",
-                "material library: " + m.trionLifetimeS().source(), bases);
+        // with equal trion rates 1/τ₂ = 2/τ_X− + 2/τ_X+ gives τ_X = 4τ₂ (Park et al., Phys. Rev. Lett. 2014, from memory)
+        boolean trionKnown = m.trionLifetimeS().known();
+        double trionNeg = pick(o.tauTrionNegativeS(), trionKnown ? m.trionLifetimeS().value() : 4 * tau2,
+                "negative-trion lifetime", "plan", trionKnown ? "material library: " + m.trionLifetimeS().source()
+                        : "4·τ₂, equal trion rates in 1/τ₂ = 2/τ_X− + 2/τ_X+ (Park et al., Phys. Rev. Lett. 2014, from memory)",
+                bases);
         // 1/τ_XX = 2/τ_X− + 2/τ_X+ (Park, Bae, Padilha, Pietryga, Klimov, Phys. Rev. Lett. 2014, from memory)
         double posRate = (1 / tau2 - 2 / trionNeg) / 2;
         double trionPosDerived = posRate > 0 ? 1 / posRate : trionNeg;

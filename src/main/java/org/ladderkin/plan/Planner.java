@@ -191,21 +191,27 @@ public final class Planner {
         double[][] pl = new double[k][];
         double[][] occupancy = new double[k][];
         EarlyLate.Point[] el = new EarlyLate.Point[k];
-        IntStream.range(0, k).parallel().forEach(i -> {
-            LadderKinetics kin = LadderKinetics.forPulses(km, strongest);
+        LadderKinetics kin = LadderKinetics.forPulses(km, strongest);
+        // one ladder and one factorised grid per delay set, reused for every fluence
+        var taGrid = kin.propagator().onGrid(taDelays);
+        var plGrid = kin.propagator().onGrid(plDelays);
+        var elGrid = kin.propagator().onGrid(new double[] {windows.earlyS(), windows.lateS()});
+        double[][] bleachRow = {kin.bleachObservable()};
+        double[][] plRow = {kin.photoluminescenceObservable()};
+        for (int i = 0; i < k; i++) {
             PulseExcitation pulse = new PulseExcitation.Poisson(nSeries[i]);
             SteadyState ss = kin.steadyState(pulse, period, false);
-            double[] bleach = kin.trace(ss.afterPulse(), taDelays).bleach();
+            double[] after = ss.afterPulse().probabilities();
+            double[] bleach = taGrid.observe(bleachRow, after)[0];
             dA[i] = new double[bleach.length];
             for (int m = 0; m < bleach.length; m++) {
                 dA[i][m] = -bandEdgeOd * bleach[m];
             }
-            pl[i] = kin.trace(ss.afterPulse(), plDelays).photoluminescencePerS();
+            pl[i] = plGrid.observe(plRow, after)[0];
             occupancy[i] = ss.afterPulse().excitonDistribution();
-            double[] two = kin.trace(ss.afterPulse(), new double[] {windows.earlyS(), windows.lateS()}).bleach();
+            double[] two = elGrid.observe(bleachRow, after)[0];
             el[i] = new EarlyLate.Point(nSeries[i], two[0], two[1]);
-        });
-        LadderKinetics kin = LadderKinetics.forPulses(km, strongest);
+        }
         PeriodicSteadyState train = kin.pulseTrain(strongest, period);
         int pulses = PeriodicSteadyState.pulsesToOnePercent(train.secondEigenvalueModulus());
         int shown = Math.max(10, Math.min(200, pulses * 2));

@@ -132,7 +132,8 @@ public record Quantity(double value, Unit unit) {
         Unit chosen = null;
         double mag = Math.abs(valueSi);
         for (Unit u : Units.of(dimension)) {
-            if (u.offsetSi() != 0) {
+            // per-m² units read badly next to the per-cm² ones the trade uses; temperatures in °C have an offset
+            if (u.offsetSi() != 0 || (u.symbol().endsWith("/m²") && dimension != Dimension.MOLAR_EXTINCTION)) {
                 continue;
             }
             if (chosen == null) {

@@ -1,0 +1,215 @@
+package org.ladderkin.io;
+
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.Locale;
+import org.ladderkin.observe.Risk;
+import org.ladderkin.plan.CampaignPlan;
+import org.ladderkin.plan.DelayPlan;
+import org.ladderkin.plan.DesignSearch;
+import org.ladderkin.plan.FluencePoint;
+import org.ladderkin.plan.Instrument;
+import org.ladderkin.plan.LaserSetup;
+import org.ladderkin.plan.Predictions;
+import org.ladderkin.plan.RateOption;
+import org.ladderkin.plan.WavelengthOption;
+import org.ladderkin.sample.Sample;
+import org.ladderkin.units.PhysicalConstants;
+
+/**
+ * Machine-readable outputs of a plan: {@code plan-resolved.json} (every input with its unit in the key and every
+ * derived number) and {@code traces.csv} (the predicted traces). Both written atomically.
+ */
+public final class PlanOutputs {
+
+    private PlanOutputs() {
+    }
+
+    /** Writes plan-resolved.json and traces.csv into {@code dir}. */
+    public static void write(CampaignPlan plan, Path dir) throws IOException {
+        ResolvedJson.write(dir.resolve("plan-resolved.json"), resolved(plan));
+        AtomicFiles.writeString(dir.resolve("traces.csv"), tracesCsv(plan));
+    }
+
+    /** The resolved plan as a JSON tree. */
+    public static ObjectNode resolved(CampaignPlan plan) {
+        ObjectNode root = ResolvedJson.object();
+        root.put("schema", "ladderkin.plan-resolved/1");
+        root.put("title", plan.inputs().title());
+        root.put("lab", plan.inputs().lab());
+        Sample s = plan.inputs().sample();
+        ObjectNode sample = root.putObject("sample");
+        sample.put("name", s.spec().name());
+        sample.put("material", s.material().key());
+        sample.put("sizeNm", s.sizeM() * 1e9);
+        sample.put("firstExcitonEv", s.firstExcitonEnergyJ() / PhysicalConstants.ELECTRONVOLT_J);
+        sample.put("concentrationUm", s.concentrationMolPerM3() * 1e3);
+        sample.put("pathLengthMm", s.spec().pathLengthM() * 1e3);
+        sample.put("matrix", s.spec().matrix().map(m -> m.key()).orElse(null));
+        sample.put("refresh", s.spec().refresh().mode().name().toLowerCase(Locale.ROOT));
+        LaserSetup l = plan.inputs().laser();
+        ObjectNode laser = root.putObject("laser");
+        ArrayNode wl = laser.putArray("pumpWavelengthsNm");
+        l.pumpWavelengthsM().forEach(w -> wl.add(w * 1e9));
+        laser.put("repetitionRateHz", l.repetitionRateHz());
+        ArrayNode div = laser.putArray("pulsePickerDivisions");
+        l.pulsePickerDivisions().forEach(div::add);
+        laser.put("pulseFwhmFs", l.pulseFwhmS() * 1e15);
+        laser.put("minPulseEnergyNj", l.minPulseEnergyJ() * 1e9);
+        laser.put("maxPulseEnergyNj", l.maxPulseEnergyJ() * 1e9);
+        laser.put("pumpRadiusUm", l.pumpRadiusM() * 1e6);
+        laser.put("probeRadiusUm", l.probeRadiusM() * 1e6);
+        ObjectNode model = root.putObject("model");
+        var m = plan.model();
+        model.put("tauSingleExcitonNs", m.tauSingleExcitonS() * 1e9);
+        model.put("plQuantumYield", m.plQuantumYield());
+        model.put("tauBiexcitonPs", m.tauBiexcitonS() * 1e12);
+        model.put("augerScaling", m.augerScaling().key());
+        model.put("radiativeScaling", m.radiativeScaling().key());
+        model.put("tauTrionNegativePs", m.tauTrionNegativeS() * 1e12);
+        model.put("tauTrionPositivePs", m.tauTrionPositiveS() * 1e12);
+        model.put("ionisationProbability", m.ionisationProbability());
+        model.put("photochargeLifetimeS", m.neutralisationS());
+        model.put("refreshTimeS", Double.isFinite(m.refreshS()) ? m.refreshS() : null);
+        model.put("coolingPs", m.coolingS() * 1e12);
+        ArrayNode bases = model.putArray("bases");
+        m.bases().forEach(bases::add);
+        ArrayNode wls = root.putArray("wavelengthRanking");
+        for (WavelengthOption w : plan.wavelengths()) {
+            ObjectNode o = wls.addObject();
+            o.put("wavelengthNm", w.wavelengthM() * 1e9);
+            o.put("photonEnergyEv", w.photonEnergyJ() / PhysicalConstants.ELECTRONVOLT_J);
+            o.put("crossSectionCm2", w.crossSectionM2() * 1e4);
+            o.put("absorbanceOd", w.absorbanceOd());
+            o.put("energyOverFirstExciton", w.energyOverGap());
+            o.put("maxNProbeAveraged", w.maxProbeAveragedN());
+            o.put("score", w.score());
+            ArrayNode r = o.putArray("reasons");
+            w.reasons().forEach(r::add);
+        }
+        ObjectNode chosen = root.putObject("settings");
+        chosen.put("pumpWavelengthNm", plan.chosenWavelength().wavelengthM() * 1e9);
+        chosen.put("repetitionRateHz", plan.chosenRate().repetitionRateHz());
+        chosen.put("pulsePickerDivision", plan.chosenRate().division());
+        ArrayNode series = chosen.putArray("fluenceSeries");
+        for (FluencePoint f : plan.fluences()) {
+            ObjectNode o = series.addObject();
+            o.put("nAvgProbeWeighted", f.nProbeAveraged());
+            o.put("nAvgPeak", f.nPeak());
+            o.put("pulseEnergyNj", f.pulseEnergyJ() * 1e9);
+            o.put("attenuatorOd", f.attenuatorOd());
+            o.put("photonFluencePeakPerCm2", f.photonFluencePeakPerM2() * 1e-4);
+            o.put("reachable", f.reachable());
+        }
+        ArrayNode rates = root.putArray("repetitionRates");
+        for (RateOption r : plan.rates()) {
+            ObjectNode o = rates.addObject();
+            o.put("division", r.division());
+            o.put("repetitionRateHz", r.repetitionRateHz());
+            o.put("residualExcitation", r.residual());
+            o.put("chargedFraction", r.charged());
+            o.put("steadyRiseK", Double.isFinite(r.steadyRiseK()) ? r.steadyRiseK() : null);
+            o.put("verdict", r.verdict().name());
+        }
+        ObjectNode heat = root.putObject("heatingAtHighestFluence");
+        heat.put("heatFraction", plan.heat().heatFraction());
+        heat.put("heatPowerW", plan.heat().heatPowerW());
+        heat.put("steadyRiseK", Double.isFinite(plan.heat().steadyRiseK()) ? plan.heat().steadyRiseK() : null);
+        heat.put("perPulseRiseK", Double.isFinite(plan.heat().perPulseRiseK()) ? plan.heat().perPulseRiseK() : null);
+        heat.put("dotJumpK", plan.heat().dotJumpK());
+        heat.put("model", plan.heat().model());
+        if (plan.design() != null) {
+            ObjectNode d = root.putObject("design");
+            d.put("candidatesScored", plan.design().evaluated());
+            designNode(d.putObject("chosen"), plan.design().best());
+            designNode(d.putObject("naive"), plan.design().naive());
+        }
+        ArrayNode delays = root.putArray("delayPlans");
+        for (DelayPlan dp : plan.delayPlans()) {
+            ObjectNode o = delays.addObject();
+            o.put("instrument", dp.instrument().kind().key());
+            if (dp.instrument().kind() == Instrument.Kind.TRANSIENT_ABSORPTION) {
+                ArrayNode g = o.putArray("delaysPs");
+                for (double t : dp.delaysS()) {
+                    g.add(t * 1e12);
+                }
+                o.put("stageTravelMm", dp.stageTravelM() * 1e3);
+            }
+            o.put("earlyDelayPs", dp.windows().earlyS() * 1e12);
+            o.put("lateDelayPs", dp.windows().lateS() * 1e12);
+            o.put("timePerPointS", dp.timePerPointS());
+            o.put("timePerFluenceS", dp.timePerFluenceS());
+        }
+        ArrayNode risks = root.putArray("risks");
+        for (Risk r : plan.risks()) {
+            ObjectNode o = risks.addObject();
+            o.put("name", r.name());
+            o.put("verdict", r.verdict().name());
+            o.put("value", Double.isFinite(r.value()) ? r.value() : null);
+            o.put("limit", Double.isFinite(r.limit()) ? r.limit() : null);
+            o.put("unit", r.unit());
+            o.put("why", r.why());
+        }
+        ArrayNode adv = root.putArray("advisories");
+        plan.advisories().forEach(adv::add);
+        ArrayNode cautions = root.putArray("cautions");
+        plan.cautions().forEach(cautions::add);
+        return root;
+    }
+
+    private static void designNode(ObjectNode o, DesignSearch.Design d) {
+        ArrayNode n = o.putArray("nAvgProbeWeighted");
+        for (double v : d.nValues()) {
+            n.add(v);
+        }
+        o.put("pointsPerDecade", d.pointsPerDecade());
+        o.put("timePerPointS", d.timePerPointS());
+        ObjectNode e = o.putObject("relativeStandardErrors");
+        for (DesignSearch.Parameter p : DesignSearch.Parameter.values()) {
+            double v = d.error(p);
+            e.put(p.name().toLowerCase(Locale.ROOT), Double.isFinite(v) ? v : null);
+        }
+    }
+
+    /**
+     * Predicted traces as CSV: {@code delay_ps}, then {@code deltaA_od@N=<⟨N⟩>} per fluence; then a blank line and
+     * {@code delay_ns}, {@code pl_per_dot_per_s@N=<⟨N⟩>}. Numbers with 12 significant digits.
+     */
+    public static String tracesCsv(CampaignPlan plan) {
+        Predictions p = plan.predictions();
+        StringBuilder b = new StringBuilder();
+        b.append("delay_ps");
+        for (FluencePoint f : plan.fluences()) {
+            b.append(",deltaA_od@N=").append(String.format(Locale.ROOT, "%.4g", f.nProbeAveraged()));
+        }
+        b.append('\n');
+        double[] t = p.delaysS();
+        for (int m = 0; m < t.length; m++) {
+            b.append(fmt(t[m] * 1e12));
+            for (int i = 0; i < plan.fluences().size(); i++) {
+                b.append(',').append(fmt(p.deltaAOd().get(i)[m]));
+            }
+            b.append('\n');
+        }
+        b.append('\n').append("delay_ns");
+        for (FluencePoint f : plan.fluences()) {
+            b.append(",pl_per_dot_per_s@N=").append(String.format(Locale.ROOT, "%.4g", f.nProbeAveraged()));
+        }
+        b.append('\n');
+        double[] tp = p.plDelaysS();
+        for (int m = 0; m < tp.length; m++) {
+            b.append(fmt(tp[m] * 1e9));
+            for (int i = 0; i < plan.fluences().size(); i++) {
+                b.append(',').append(fmt(p.plPerDot().get(i)[m]));
+            }
+            b.append('\n');
+        }
+        return b.toString();
+    }
+
+    private static String fmt(double v) {
+        return String.format(Locale.ROOT, "%.12g", v);
+    }
+}

@@ -1,0 +1,240 @@
+package org.ladderkin.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.ladderkin.observe.EarlyLate;
+import org.ladderkin.observe.Risk;
+import org.ladderkin.observe.Verdict;
+import org.ladderkin.plan.CampaignPlan;
+import org.ladderkin.plan.DelayPlan;
+import org.ladderkin.plan.DesignSearch;
+import org.ladderkin.plan.FluencePoint;
+import org.ladderkin.plan.Instrument;
+import org.ladderkin.plan.Predictions;
+import org.ladderkin.plan.RateOption;
+import org.ladderkin.plan.WavelengthOption;
+import org.ladderkin.units.Dimension;
+import org.ladderkin.units.PhysicalConstants;
+import org.ladderkin.units.Quantity;
+
+/**
+ * The campaign report: a summary a lab member can act on (the settings to dial in), then the evidence (risks,
+ * predicted signals, the design search, the alternatives), then the model and its assumptions, then the safety
+ * cautions. One self-contained HTML page.
+ */
+public final class PlanReport {
+
+    private PlanReport() {
+    }
+
+    /** The charts of a plan, shared by the report, CSV export and the desktop planner. */
+    public static List<ChartSpec> charts(CampaignPlan plan) {
+        Predictions p = plan.predictions();
+        List<ChartSpec> charts = new ArrayList<>();
+        double[] ps = scale(p.delaysS(), 1e12);
+        List<ChartSpec.Series> ta = new ArrayList<>();
+        List<ChartSpec.Series> pl = new ArrayList<>();
+        double[] plNs = scale(p.plDelaysS(), 1e9);
+        for (int i = 0; i < plan.fluences().size(); i++) {
+            String name = String.format(Locale.ROOT, "⟨N⟩ = %.3g", plan.fluences().get(i).nProbeAveraged());
+            double[] mdA = scale(p.deltaAOd().get(i), -1e3);
+            ta.add(ChartSpec.Series.line(name, ps, mdA));
+            pl.add(ChartSpec.Series.line(name, plNs, p.plPerDot().get(i)));
+        }
+        charts.add(new ChartSpec("Band-edge bleach (steady state)", "delay (ps)", "−ΔA (mOD)", true, false, ta));
+        charts.add(new ChartSpec("Photoluminescence per dot", "delay (ns)", "PL rate (photons/s per dot)", true, true, pl));
+        double[] n = plan.predictions().earlyLate().stream().mapToDouble(EarlyLate.Point::meanExcitons).toArray();
+        double[] early = p.earlyLate().stream().mapToDouble(EarlyLate.Point::early).toArray();
+        double[] late = p.earlyLate().stream().mapToDouble(EarlyLate.Point::late).toArray();
+        double[] ratio = p.earlyLate().stream().mapToDouble(EarlyLate.Point::ratio).toArray();
+        charts.add(new ChartSpec("Early/late analysis", "⟨N⟩ (probe-averaged)", "bleach (filled levels) and A/B", true, false,
+                List.of(ChartSpec.Series.line("early A", n, early), ChartSpec.Series.line("late B", n, late),
+                        ChartSpec.Series.line("A/B", n, ratio))));
+        List<ChartSpec.Series> occ = new ArrayList<>();
+        int[] picks = {0, plan.fluences().size() / 2, plan.fluences().size() - 1};
+        for (int i : picks) {
+            double[] d = p.occupancy().get(i);
+            double[] x = new double[d.length];
+            for (int k = 0; k < d.length; k++) {
+                x[k] = k;
+            }
+            occ.add(new ChartSpec.Series(String.format(Locale.ROOT, "⟨N⟩ = %.3g", plan.fluences().get(i).nProbeAveraged()),
+                    x, d, true));
+        }
+        charts.add(new ChartSpec("Excitons per dot after a pulse", "N", "probability", false, false, occ));
+        double[] pulse = new double[p.buildUpResidual().length];
+        for (int k = 0; k < pulse.length; k++) {
+            pulse[k] = k + 1;
+        }
+        charts.add(new ChartSpec("Pulse-train build-up (highest fluence)", "pulse number", "fraction of dots", false, false,
+                List.of(ChartSpec.Series.line("excited or charged before the pulse", pulse, p.buildUpResidual()),
+                        ChartSpec.Series.line("charged before the pulse", pulse, p.buildUpCharged()))));
+        return List.copyOf(charts);
+    }
+
+    /** The complete HTML page. */
+    public static String html(CampaignPlan plan) {
+        HtmlPage page = new HtmlPage("Campaign plan — " + plan.inputs().title());
+        if (!plan.inputs().lab().isEmpty()) {
+            page.block("note", plan.inputs().lab());
+        }
+        summary(page, plan);
+        page.heading(2, "Risks");
+        page.table(List.of("risk", "value", "limit", "unit", "what it means", "verdict"),
+                plan.risks().stream().map(r -> List.of(r.name(), num(r.value()), num(r.limit()), r.unit(), r.why(),
+                        r.verdict().name())).toList());
+        if (!plan.advisories().isEmpty()) {
+            page.heading(3, "Advisories on the inputs");
+            page.bullets(plan.advisories());
+        }
+        page.heading(2, "Predicted signals");
+        page.paragraph("Periodic steady state of the pulse train at the chosen repetition rate, for every fluence of the "
+                + "series; residual excitation from earlier pulses included.");
+        page.charts(charts(plan), 520, 340);
+        designSection(page, plan);
+        page.heading(2, "Pump wavelengths compared");
+        page.table(List.of("wavelength", "photon energy", "σ (cm²)", "absorbance (OD)", "ħω/E₁S", "max ⟨N⟩", "score", "reasons"),
+                plan.wavelengths().stream().map(w -> List.of(q(w.wavelengthM(), Dimension.LENGTH),
+                        String.format(Locale.ROOT, "%.3f eV", w.photonEnergyJ() / PhysicalConstants.ELECTRONVOLT_J),
+                        num(w.crossSectionM2() * 1e4), num(w.absorbanceOd()), num(w.energyOverGap()),
+                        num(w.maxProbeAveragedN()), String.format(Locale.ROOT, "%.2f", w.score()),
+                        String.join("; ", w.reasons()))).toList());
+        page.heading(2, "Repetition rates compared (at the highest fluence)");
+        page.table(List.of("division", "rate", "residual at next pulse", "charged", "steady rise (K)", "verdict"),
+                plan.rates().stream().map(r -> List.of("÷" + r.division(), q(r.repetitionRateHz(), Dimension.FREQUENCY),
+                        num(r.residual()), num(r.charged()), num(r.steadyRiseK()), r.verdict().name())).toList());
+        page.heading(2, "Heating at the highest fluence");
+        var h = plan.heat();
+        page.table(List.of("quantity", "value"), List.of(
+                List.of("share of absorbed energy left as heat", num(h.heatFraction())),
+                List.of("heating power in the excited volume (W)", num(h.heatPowerW())),
+                List.of("steady-state rise on the beam axis (K)", num(h.steadyRiseK())),
+                List.of("rise of the excited volume per pulse (K)", num(h.perPulseRiseK())),
+                List.of("lattice temperature jump of one dot (K)", num(h.dotJumpK())),
+                List.of("conduction model", h.model())));
+        page.heading(2, "Model and assumptions");
+        var m = plan.model();
+        page.table(List.of("parameter", "value"), List.of(
+                List.of("single-exciton lifetime τ₁", q(m.tauSingleExcitonS(), Dimension.TIME)),
+                List.of("PL quantum yield", num(m.plQuantumYield())),
+                List.of("biexciton Auger lifetime τ₂", q(m.tauBiexcitonS(), Dimension.TIME)),
+                List.of("Auger scaling", m.augerScaling().key()),
+                List.of("radiative scaling", m.radiativeScaling().key()),
+                List.of("negative / positive trion lifetime", q(m.tauTrionNegativeS(), Dimension.TIME) + " / "
+                        + q(m.tauTrionPositiveS(), Dimension.TIME)),
+                List.of("Auger ionisation probability", num(m.ionisationProbability())),
+                List.of("photocharge lifetime", q(m.neutralisationS(), Dimension.TIME)),
+                List.of("excited-volume refresh time", Double.isFinite(m.refreshS()) ? q(m.refreshS(), Dimension.TIME) : "none (static)"),
+                List.of("cooling time", q(m.coolingS(), Dimension.TIME))));
+        page.bullets(m.bases());
+        page.paragraph("Each dot is independent; between pulses its state (charge, exciton number) follows a linear master "
+                + "equation solved exactly; pulses add Poisson-distributed excitons (instantaneous, no saturation); the "
+                + "steady state of the pulse train is the fixed point of the one-period map. Cooling is treated as "
+                + "instantaneous here. Beyond ⟨N⟩ ≈ 10, for band-edge pumping and for dense films these assumptions weaken: "
+                + "see docs/physics.md.");
+        page.heading(2, "Safety");
+        page.cautions(plan.cautions());
+        page.block("note", "ladderkin plan report. Numbers are planning estimates from the model above; they do not "
+                + "replace measurements, the institution's laser safety officer or local rules.");
+        return page.render();
+    }
+
+    private static void summary(HtmlPage page, CampaignPlan plan) {
+        WavelengthOption w = plan.chosenWavelength();
+        RateOption r = plan.chosenRate();
+        Verdict worst = plan.risks().stream().map(Risk::verdict).reduce(Verdict.PASS, Verdict::worst);
+        page.heading(2, "Settings to dial in");
+        List<String> lines = new ArrayList<>();
+        lines.add(String.format(Locale.ROOT, "Pump at %s (%.3f eV): %s.", q(w.wavelengthM(), Dimension.LENGTH),
+                w.photonEnergyJ() / PhysicalConstants.ELECTRONVOLT_J, String.join("; ", w.reasons())));
+        lines.add(String.format(Locale.ROOT, "Repetition rate %s (pulse picker ÷%d): the fastest offered that keeps residual "
+                        + "excitation (%.2g), charging (%.2g) and heating (%.2g K) within the limits%s.",
+                q(r.repetitionRateHz(), Dimension.FREQUENCY), r.division(), r.residual(), r.charged(), r.steadyRiseK(),
+                r.verdict() == Verdict.FAIL ? " — NONE does; this is the slowest available" : ""));
+        for (DelayPlan d : plan.delayPlans()) {
+            if (d.instrument().kind() == Instrument.Kind.TRANSIENT_ABSORPTION) {
+                lines.add(String.format(Locale.ROOT, "TA delays: %d points from %s to %s (linear around zero, then log); stage "
+                                + "travel %s; average %s per point, %s per fluence.", d.delaysS().length,
+                        q(d.delaysS()[0], Dimension.TIME), q(d.delaysS()[d.delaysS().length - 1], Dimension.TIME),
+                        q(d.stageTravelM(), Dimension.LENGTH), q(d.timePerPointS(), Dimension.TIME),
+                        q(d.timePerFluenceS(), Dimension.TIME)));
+                lines.add(String.format(Locale.ROOT, "Early/late windows: early %s, late %s%s.", q(d.windows().earlyS(), Dimension.TIME),
+                        q(d.windows().lateS(), Dimension.TIME), d.windows().separated() ? "" : " (time scales overlap)"));
+            } else {
+                lines.add(String.format(Locale.ROOT, "TCSPC: %s bins over %s; %s per fluence.", q(d.instrument().minDelayS(),
+                        Dimension.TIME), q(d.instrument().maxDelayS(), Dimension.TIME), q(d.timePerFluenceS(), Dimension.TIME)));
+            }
+        }
+        lines.add("Overall risk verdict: " + worst.name() + " (see the risk table).");
+        page.bullets(lines);
+        page.heading(3, "Fluence series");
+        page.table(List.of("#", "⟨N⟩ probe-averaged", "⟨N⟩ on axis", "pulse energy", "attenuation (OD)",
+                        "peak fluence (µJ/cm²)", "peak photons/cm²", "in range"),
+                indexed(plan.fluences(), plan.chosenWavelength().photonEnergyJ()));
+    }
+
+    private static List<List<String>> indexed(List<FluencePoint> fluences, double photonEnergyJ) {
+        List<List<String>> rows = new ArrayList<>();
+        int i = 1;
+        for (FluencePoint f : fluences) {
+            rows.add(List.of(String.valueOf(i++), num(f.nProbeAveraged()), num(f.nPeak()), q(f.pulseEnergyJ(), Dimension.ENERGY),
+                    String.format(Locale.ROOT, "%.2f", f.attenuatorOd()),
+                    // J/m² → µJ/cm²: × 1e6 / 1e4
+                    num(f.photonFluencePeakPerM2() * photonEnergyJ * 100), num(f.photonFluencePeakPerM2() * 1e-4),
+                    f.reachable() ? "yes" : "NO"));
+        }
+        return rows;
+    }
+
+    private static void designSection(HtmlPage page, CampaignPlan plan) {
+        DesignSearch.Result d = plan.design();
+        page.heading(2, "Optimal design");
+        if (d == null) {
+            page.paragraph("No design search: it needs a transient-absorption instrument and a goal among the Auger "
+                    + "lifetime, the cross-section and the single-exciton lifetime.");
+            return;
+        }
+        page.paragraph(String.format(Locale.ROOT, "Expected relative standard errors from the Fisher information of the "
+                + "predicted ΔA traces under the instrument's noise (%d candidate designs scored; the beam time is shared "
+                + "evenly among all points). The naive design is 8 log-spaced fluences from ⟨N⟩ = 0.05 to 3 at 10 points "
+                + "per decade.", d.evaluated()));
+        List<List<String>> rows = new ArrayList<>();
+        for (DesignSearch.Parameter p : DesignSearch.Parameter.values()) {
+            double best = d.best().error(p);
+            double naive = d.naive().error(p);
+            rows.add(List.of(p.label() + (d.goals().contains(p) ? " (goal)" : ""), pct(naive), pct(best),
+                    Double.isFinite(best) && Double.isFinite(naive) && best > 0 ? String.format(Locale.ROOT, "%.2f×", naive / best) : "—"));
+        }
+        page.table(List.of("parameter", "naive design", "chosen design", "gain"), rows);
+        page.paragraph(String.format(Locale.ROOT, "Chosen design: %d fluences from ⟨N⟩ = %.3g to %.3g, %d delay points per decade.",
+                d.best().nValues().length, d.best().nValues()[0], d.best().nValues()[d.best().nValues().length - 1],
+                d.best().pointsPerDecade()));
+    }
+
+    private static String pct(double relative) {
+        return Double.isFinite(relative) ? String.format(Locale.ROOT, "%.3g %%", 100 * relative) : "not determined";
+    }
+
+    private static String q(double si, Dimension d) {
+        return Double.isFinite(si) ? Quantity.formatBest(si, d, 4) : "—";
+    }
+
+    static String num(double v) {
+        if (Double.isNaN(v)) {
+            return "—";
+        }
+        if (Double.isInfinite(v)) {
+            return v > 0 ? "∞" : "−∞";
+        }
+        return String.format(Locale.ROOT, "%.4g", v);
+    }
+
+    private static double[] scale(double[] v, double f) {
+        double[] o = new double[v.length];
+        for (int i = 0; i < v.length; i++) {
+            o[i] = v[i] * f;
+        }
+        return o;
+    }
+}
