@@ -29,8 +29,10 @@ public final class ExactPropagator {
     /** Largest accepted ‖V‖∞·‖V⁻¹‖∞ before clusters are widened. */
     public static final double GROWTH_LIMIT = 1e8;
     /** Successive relative gaps δ tried; the last one clusters everything. */
-    private static final double[] DELTAS = {1e-3, 1e-2, 5e-2, 0.2, 0.5, 1.0, Double.POSITIVE_INFINITY};
+    private static final double[] DELTAS = {1e-3, 1e-2, 5e-2, 0.1, 0.2, 0.5, 1.0, Double.POSITIVE_INFINITY};
     private static final double UNDERFLOW = -745;
+    /** Starting relative gap, as recommended by Davies & Higham (2003) for their blocking. */
+    public static final double DEFAULT_DELTA = 0.1;
 
     private final int n;
     private final double[][] v;
@@ -58,9 +60,9 @@ public final class ExactPropagator {
         this.clusters = clusters;
     }
 
-    /** Decomposes an upper-triangular generator (rates in 1/s), starting from δ = 1e-3. */
+    /** Decomposes an upper-triangular generator (rates in 1/s), starting from δ = 0.1. */
     public static ExactPropagator of(double[][] q) {
-        return of(q, DELTAS[0]);
+        return of(q, DEFAULT_DELTA);
     }
 
     /** Decomposes with a given starting relative gap δ (widened automatically if V is badly conditioned). */
@@ -226,8 +228,9 @@ public final class ExactPropagator {
     /** p(t) = exp(Qt)·p0, t ≥ 0 in seconds. Entries within their own rounding bound of zero are set to zero. */
     public double[] propagate(double[] p0, double tS) {
         requireTime(tS);
-        double[] y = modal(p0, tS, false);
-        double[] yAbs = modal(p0, tS, true);
+        double[][][] ce = clusterExps(tS);
+        double[] y = modal(p0, tS, false, ce);
+        double[] yAbs = modal(p0, tS, true, ce);
         double[] p = new double[n];
         for (int i = 0; i < n; i++) {
             double s = 0;
@@ -244,7 +247,15 @@ public final class ExactPropagator {
     }
 
     /** exp(Bt)·W·p0 (or its entrywise-absolute bound). */
-    private double[] modal(double[] p0, double tS, boolean absolute) {
+    private double[][][] clusterExps(double tS) {
+        double[][][] ce = new double[clusters.size()][][];
+        for (int c = 0; c < ce.length; c++) {
+            ce[c] = clusterExp(clusters.get(c), tS);
+        }
+        return ce;
+    }
+
+    private double[] modal(double[] p0, double tS, boolean absolute, double[][][] ce) {
         if (p0.length != n) {
             throw new IllegalArgumentException("state vector has " + p0.length + " entries, generator " + n);
         }
@@ -264,8 +275,9 @@ public final class ExactPropagator {
                 y[singleIndex[k]] = Math.exp(x) * wp[singleIndex[k]];
             }
         }
-        for (Cluster c : clusters) {
-            double[][] e = clusterExp(c, tS);
+        for (int ci = 0; ci < ce.length; ci++) {
+            Cluster c = clusters.get(ci);
+            double[][] e = ce[ci];
             if (e == null) {
                 continue;
             }
@@ -302,10 +314,11 @@ public final class ExactPropagator {
         requireTime(tS);
         double[][] out = new double[n][n];
         double[] e = new double[n];
+        double[][][] ce = clusterExps(tS);
         for (int col = 0; col < n; col++) {
             Arrays.fill(e, 0);
             e[col] = 1;
-            double[] y = modal(e, tS, false);
+            double[] y = modal(e, tS, false, ce);
             for (int i = 0; i < n; i++) {
                 double s = 0;
                 for (int k = i; k < n; k++) {

@@ -167,7 +167,8 @@ class ExactPropagatorTest {
             for (int i = 0; i < 31; i++) {
                 direct += obs[i] * pt[i];
             }
-            assertThat(trace[j]).isCloseTo(direct, org.assertj.core.data.Offset.offset(1e-12));
+            // half the dots start at N = 30, where the modal basis has ‖V‖·‖V⁻¹‖ ≈ 2e7: rounding ≈ 1e-16 × that
+            assertThat(trace[j]).isCloseTo(direct, org.assertj.core.data.Offset.offset(1e-16 * p.growth()));
         }
     }
 
