@@ -15,6 +15,7 @@ import org.ladderkin.observe.Risk;
  * @param heat          heating at the highest fluence and the chosen rate
  * @param design        optimal-design search, or null when no TA goal parameter applies
  * @param delayPlans    per instrument
+ * @param multiplication carrier-multiplication forecast per requested photon energy (empty without that goal)
  * @param predictions   predicted signals
  * @param risks         risk table
  * @param advisories    concerns about the inputs (probe larger than pump, approximate cross-section ...)
@@ -22,7 +23,8 @@ import org.ladderkin.observe.Risk;
  */
 public record CampaignPlan(PlanInputs inputs, ModelAssumptions model, List<WavelengthOption> wavelengths,
                            List<RateOption> rates, RateOption chosenRate, List<FluencePoint> fluences, HeatBudget heat,
-                           DesignSearch.Result design, List<DelayPlan> delayPlans, Predictions predictions,
+                           DesignSearch.Result design, List<DelayPlan> delayPlans,
+                           List<MultiplicationPrediction> multiplication, Predictions predictions,
                            List<Risk> risks, List<String> advisories, List<String> cautions) {
 
     public CampaignPlan {
@@ -30,6 +32,7 @@ public record CampaignPlan(PlanInputs inputs, ModelAssumptions model, List<Wavel
         rates = List.copyOf(rates);
         fluences = List.copyOf(fluences);
         delayPlans = List.copyOf(delayPlans);
+        multiplication = List.copyOf(multiplication);
         risks = List.copyOf(risks);
         advisories = List.copyOf(advisories);
         cautions = List.copyOf(cautions);

@@ -89,8 +89,9 @@ public final class DesignSearch {
 
     private static final int FINEST_PER_DECADE = 20;
     private static final int[] POINTS_PER_DECADE = {5, 10, 20};
-    private static final int[] COUNTS = {4, 6, 8, 10, 12};
-    private static final double[] LOWS = {0.02, 0.05, 0.1, 0.2};
+    // at least 6 fluences and a lowest ⟨N⟩ ≤ 0.1: the low-fluence traces are also the photocharging check (common practice)
+    private static final int[] COUNTS = {6, 8, 10, 12};
+    private static final double[] LOWS = {0.02, 0.05, 0.1};
     private static final double[] HIGHS = {1, 2, 3, 5, 8};
 
     private final Context ctx;

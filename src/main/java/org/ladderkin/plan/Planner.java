@@ -97,8 +97,10 @@ public final class Planner {
         Excitation atChosenRate = Excitation.of(sample, new Pulse(laser.maxPulseEnergyJ(), chosen.wavelengthM(),
                 chosenRate.repetitionRateHz()), pump, probe, true);
         List<FluencePoint> fluences = new ArrayList<>();
+        // the probe- and depth-averaged ⟨N⟩ is linear in the pulse energy, so one evaluation gives every setting
+        double nPerJoule = atChosenRate.nAvgProbeWeighted() / laser.maxPulseEnergyJ();
         for (double n : nSeries) {
-            double e = atChosenRate.pulseEnergyForTargetJ(n, Excitation.TargetMode.PROBE_AVERAGED);
+            double e = n / nPerJoule;
             Excitation ex = atChosenRate.withEnergyJ(e);
             boolean reachable = e <= laser.maxPulseEnergyJ() * (1 + 1e-9) && e >= laser.minPulseEnergyJ() * (1 - 1e-9);
             fluences.add(new FluencePoint(n, ex.nAvgPeak(), e, Math.log10(laser.maxPulseEnergyJ() / e),
@@ -138,12 +140,35 @@ public final class Planner {
             risks.add(new Risk("fluence series within the laser's range", Verdict.FAIL, unreachable, 0, "points",
                     unreachable + " point(s) of the series need pulse energies outside the laser's range"));
         }
+        List<MultiplicationPrediction> cm = List.of();
+        if (in.goals().contains(Goal.MULTIPLICATION_YIELD) && !Double.isNaN(sample.firstExcitonEnergyJ())) {
+            cm = MultiplicationForecast.forecast(km, model, MultiplicationForecast.defaultLaw(sample.firstExcitonEnergyJ()),
+                    sample.firstExcitonEnergyJ(), in.multiplicationPhotonEnergiesJ(), laser.pumpWavelengthsM(), period,
+                    1 / laser.repetitionRateHz());
+            for (MultiplicationPrediction p : cm) {
+                double inflation = p.apparentRatioFullRate() / p.idealRatio() - 1;
+                if (inflation > 0.02) {
+                    risks.add(new Risk(String.format(Locale.ROOT, "false multiplication at %.2f·E₁S without pulse picking",
+                            p.energyOverGap()), Verdict.WARN, inflation, 0.02, "relative", String.format(Locale.ROOT,
+                            "at the full %s rate residual excitation and trions inflate A/B by %.0f %% (charged fraction "
+                                    + "%.2g): use the pulse picker (%s) and refresh the sample",
+                            org.ladderkin.units.Quantity.formatBest(laser.repetitionRateHz(), org.ladderkin.units.Dimension.FREQUENCY, 3),
+                            100 * inflation, p.chargedFullRate(),
+                            org.ladderkin.units.Quantity.formatBest(chosenRate.repetitionRateHz(), org.ladderkin.units.Dimension.FREQUENCY, 3))));
+                }
+                if (!p.offered()) {
+                    risks.add(new Risk("multiplication photon energy available", Verdict.FAIL, p.photonEnergyJ(), 0, "J",
+                            String.format(Locale.ROOT, "the laser offers no pump at %.3f eV", p.photonEnergyJ()
+                                    / org.ladderkin.units.PhysicalConstants.ELECTRONVOLT_J)));
+                }
+            }
+        }
         List<String> advisories = atChosenRate.advisories().stream().map(Advisory::message).distinct().toList();
         String matrixKey = sample.spec().matrix().map(m -> m.key()).orElse("unknown matrix");
         List<String> cautions = Cautions.forCampaign(sample.material().key(), matrixKey, heat.steadyRiseK(),
                 heat.boilingPointK());
         progress.step(6, totalSteps, "done");
-        return new CampaignPlan(in, model, wavelengths, rates, chosenRate, fluences, heat, design, delayPlans, predictions,
+        return new CampaignPlan(in, model, wavelengths, rates, chosenRate, fluences, heat, design, delayPlans, cm, predictions,
                 risks, advisories, cautions);
     }
 
@@ -151,7 +176,7 @@ public final class Planner {
                                           double nTop) {
         LaserSetup laser = in.laser();
         PulseExcitation pulse = new PulseExcitation.Poisson(nTop);
-        double energyTop = atMax.pulseEnergyForTargetJ(nTop, Excitation.TargetMode.PROBE_AVERAGED);
+        double energyTop = nTop * atMax.pulse().energyJ() / atMax.nAvgProbeWeighted();
         List<Integer> divisions = laser.pulsePickerDivisions().stream().sorted().toList();
         RateOption[] out = new RateOption[divisions.size()];
         IntStream.range(0, divisions.size()).parallel().forEach(i -> {
@@ -284,10 +309,14 @@ public final class Planner {
         SteadyState ss = kin.steadyState(pulse, period, false);
         double emittedPerDot = Photoluminescence.emittedPerPulse(kin, ss.afterPulse(), period);
         double detectedPerPulse = emittedPerDot * top.dotsInExcitedVolume() * TCSPC_COLLECTION_EFFICIENCY;
-        Risk pile = TimeWindows.pileUp(detectedPerPulse / period, 1 / period, inst.maxCountFraction());
-        risks.add(new Risk(pile.name(), pile.verdict(), pile.value(), pile.limit(), pile.unit(), pile.why()
-                + String.format(Locale.ROOT, " (assumes %.0e collection × detection efficiency; attenuate the emission by "
-                + "%.2g× if needed)", TCSPC_COLLECTION_EFFICIENCY, Math.max(1, pile.value() / inst.maxCountFraction()))));
+        double fraction = detectedPerPulse;
+        double attenuation = fraction / inst.maxCountFraction();
+        risks.add(new Risk("TCSPC pile-up", attenuation > 1 ? Verdict.WARN : Verdict.PASS, fraction, inst.maxCountFraction(),
+                "photons per pulse", String.format(Locale.ROOT, "at the highest fluence about %.3g photons per pulse would be "
+                        + "detected (assuming %.0e collection × detection efficiency); keep below %.3g per pulse (common "
+                        + "practice, no source)%s", fraction, TCSPC_COLLECTION_EFFICIENCY, inst.maxCountFraction(),
+                        attenuation > 1 ? String.format(Locale.ROOT, ": attenuate the detected emission by %.2g× (ND %.1f)",
+                                attenuation, Math.log10(attenuation)) : "")));
         double perPoint = budget / fluenceCount;
         return new DelayPlan(inst, grid, 0, windows, perPoint, perPoint, risks);
     }
