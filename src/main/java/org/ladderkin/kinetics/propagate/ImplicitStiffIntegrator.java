@@ -17,6 +17,9 @@ public final class ImplicitStiffIntegrator {
     /** Steps (accepted plus rejected) after which the integration gives up. */
     static final int MAX_STEPS = 5_000_000;
 
+    /** Newton iterations allowed in fixed-step mode, where the step cannot be shortened when Newton is slow. */
+    private static final int FIXED_STEP_NEWTON = 100;
+
     /** A step that would end within this fraction of the step beyond an output time is stretched onto it. */
     private static final double STRETCH = 0.1;
 
@@ -123,7 +126,7 @@ public final class ImplicitStiffIntegrator {
      */
     double[] integrateFixedSteps(StiffSystem system, double t0, double[] y0, double t1, int steps) {
         InputChecks.check(system, t0, y0, new double[] {t1});
-        RadauStepper stepper = new RadauStepper(system, tolerances);
+        RadauStepper stepper = new RadauStepper(system, tolerances, FIXED_STEP_NEWTON);
         double h = (t1 - t0) / steps;
         double[] y = y0.clone();
         stepper.setBasePoint(t0, y);

@@ -29,6 +29,7 @@ final class RadauStepper {
         }
     }
 
+    private final int maxNewton;
     private final StiffSystem system;
     private final int n;
     private final boolean linear;
@@ -71,6 +72,12 @@ final class RadauStepper {
     private final double[] err;
 
     RadauStepper(StiffSystem system, Tolerances tolerances) {
+        this(system, tolerances, MAX_NEWTON);
+    }
+
+    /** @param maxNewton Newton iterations allowed per step; more than {@link #MAX_NEWTON} only for fixed steps */
+    RadauStepper(StiffSystem system, Tolerances tolerances, int maxNewton) {
+        this.maxNewton = maxNewton;
         this.system = system;
         this.n = system.dimension();
         this.linear = system.isLinear();
@@ -297,7 +304,7 @@ final class RadauStepper {
         facCon = Math.pow(Math.max(facCon, EPS), 0.8);
         double dynoOld = 0;
         double thqOld = 0;
-        for (int newt = 1; newt <= MAX_NEWTON; newt++) {
+        for (int newt = 1; newt <= maxNewton; newt++) {
             if (!residual(h)) {
                 return newtonFailed(0.5);
             }
@@ -307,17 +314,17 @@ final class RadauStepper {
                 lastFailure = "non-finite Newton increment";
                 return newtonFailed(0.5);
             }
-            if (newt > 1 && newt < MAX_NEWTON) {
+            if (newt > 1 && newt < maxNewton) {
                 double thq = dyno / dynoOld;
                 theta = newt == 2 ? thq : Math.sqrt(thq * thqOld);
                 thqOld = thq;
                 if (theta < 0.99) {
                     facCon = theta / (1 - theta);
-                    double dyth = facCon * dyno * Math.pow(theta, MAX_NEWTON - 1 - newt) / newtonTolerance;
+                    double dyth = facCon * dyno * Math.pow(theta, maxNewton - 1 - newt) / newtonTolerance;
                     if (dyth >= 1) {
                         double qNewt = Math.max(1e-4, Math.min(20, dyth));
                         lastFailure = "Newton too slow (contraction " + theta + ")";
-                        return newtonFailed(0.8 * Math.pow(qNewt, -1.0 / (4 + MAX_NEWTON - 1 - newt)));
+                        return newtonFailed(0.8 * Math.pow(qNewt, -1.0 / (4 + maxNewton - 1 - newt)));
                     }
                 } else {
                     lastFailure = "Newton diverges (contraction " + theta + ")";
@@ -332,7 +339,7 @@ final class RadauStepper {
                 return newt;
             }
         }
-        lastFailure = "Newton did not converge in " + MAX_NEWTON + " iterations";
+        lastFailure = "Newton did not converge in " + maxNewton + " iterations";
         return newtonFailed(0.5);
     }
 

@@ -50,4 +50,32 @@ final class HipparchusReference {
         RealMatrix gt = new Array2DRowRealMatrix(generator).scalarMultiply(tS);
         return MatrixUtils.matrixExponential(gt).operate(p0);
     }
+
+    /**
+     * P(t) on an ascending time grid for a ladder generator (transitions only downwards, N+1 → N), by
+     * MatrixUtils.matrixExponential interval by interval on the states still populated: the top states whose
+     * populations all fell below {@code dropBelow} are left out, which is exact up to that population because no
+     * transition leads back up. This keeps ‖G·Δt‖ moderate; a single exp(G·t) with ‖G·t‖ ~ 1e9 loses ~3e-8 of the
+     * probability in scaling and squaring.
+     */
+    static double[][] expmLadderPiecewise(double[][] generator, double[] timesS, double[] p0, double dropBelow) {
+        RealMatrix g = new Array2DRowRealMatrix(generator);
+        double[][] out = new double[timesS.length][];
+        double[] p = p0.clone();
+        double t = 0;
+        for (int i = 0; i < timesS.length; i++) {
+            int active = p.length;
+            while (active > 1 && Math.abs(p[active - 1]) < dropBelow) {
+                active--;
+            }
+            RealMatrix sub = g.getSubMatrix(0, active - 1, 0, active - 1).scalarMultiply(timesS[i] - t);
+            double[] head = MatrixUtils.matrixExponential(sub).operate(java.util.Arrays.copyOf(p, active));
+            double[] next = new double[p.length];
+            System.arraycopy(head, 0, next, 0, active);
+            p = next;
+            t = timesS[i];
+            out[i] = p.clone();
+        }
+        return out;
+    }
 }

@@ -44,7 +44,7 @@ final class StiffFixtures {
         return Math.exp(-(a * t + b / omega * Math.sin(omega * t)));
     }
 
-    /** Logistic-free nonlinear test: y' = −y², y(0) = 1, exact 1/(1 + t). */
+    /** Nonlinear: y' = −y², y(0) = 1, exact 1/(1 + t). */
     static StiffSystem inverseSquare() {
         return new StiffSystem() {
             @Override
@@ -60,6 +60,26 @@ final class StiffFixtures {
             @Override
             public void jacobian(double t, double[] y, double[][] dfdy) {
                 dfdy[0][0] = -2 * y[0];
+            }
+        };
+    }
+
+    /** Riccati equation y' = 1 + y², y(0) = 0, exact tan t. */
+    static StiffSystem riccati() {
+        return new StiffSystem() {
+            @Override
+            public int dimension() {
+                return 1;
+            }
+
+            @Override
+            public void derivatives(double t, double[] y, double[] dydt) {
+                dydt[0] = 1 + y[0] * y[0];
+            }
+
+            @Override
+            public void jacobian(double t, double[] y, double[][] dfdy) {
+                dfdy[0][0] = 2 * y[0];
             }
         };
     }
