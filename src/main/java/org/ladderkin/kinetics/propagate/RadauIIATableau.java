@@ -39,7 +39,80 @@ final class RadauIIATableau {
     /** Error-estimate weights e = A⁻ᵀ(b̂ − b), see {@link #embeddedErrorWeights()}. */
     static final double[] E = embeddedErrorWeights();
 
+    /**
+     * Real eigenbasis T = [v, u, w] of A: v the eigenvector of γ₀, u ± i·w that of the complex pair. Then
+     * T⁻¹AT = {@link #LAMBDA} is block diagonal (γ₀ and a 2×2 rotation-scaling block), which splits the 3n×3n
+     * Newton system into an n×n real and a 2n×2n real system when the stages share one Jacobian
+     * (Hairer &amp; Wanner II, Sect. IV.8).
+     */
+    static final double[][] T = eigenbasis();
+
+    /** T⁻¹. */
+    static final double[][] T_INV = inverse(T);
+
+    /** T⁻¹AT, computed so that the split system is consistent with A to rounding. */
+    static final double[][] LAMBDA = product(product(T_INV, A), T);
+
     private RadauIIATableau() {
+    }
+
+    private static double[][] eigenbasis() {
+        // the complex pair μ = α ± iβ follows from trace and determinant, since one eigenvalue is γ₀
+        double trace = A[0][0] + A[1][1] + A[2][2];
+        double det = A[0][0] * (A[1][1] * A[2][2] - A[1][2] * A[2][1])
+                - A[0][1] * (A[1][0] * A[2][2] - A[1][2] * A[2][0])
+                + A[0][2] * (A[1][0] * A[2][1] - A[1][1] * A[2][0]);
+        double alpha = (trace - GAMMA0) / 2;
+        double beta = Math.sqrt(det / GAMMA0 - alpha * alpha);
+        // a null vector of a rank-2 3×3 matrix is the cross product of two of its rows (complex, no conjugation)
+        double[] v = new double[3];
+        double[] u = new double[3];
+        double[] w = new double[3];
+        double[][] re0 = {A[0].clone(), A[1].clone()};
+        re0[0][0] -= GAMMA0;
+        re0[1][1] -= GAMMA0;
+        for (int k = 0; k < 3; k++) {
+            int a = (k + 1) % 3;
+            int b = (k + 2) % 3;
+            v[k] = re0[0][a] * re0[1][b] - re0[0][b] * re0[1][a];
+        }
+        double[][] re = {A[0].clone(), A[1].clone()};
+        re[0][0] -= alpha;
+        re[1][1] -= alpha;
+        double[][] im = {{-beta, 0, 0}, {0, -beta, 0}};
+        for (int k = 0; k < 3; k++) {
+            int a = (k + 1) % 3;
+            int b = (k + 2) % 3;
+            // (r0a·r1b − r0b·r1a) in complex arithmetic
+            u[k] = (re[0][a] * re[1][b] - im[0][a] * im[1][b]) - (re[0][b] * re[1][a] - im[0][b] * im[1][a]);
+            w[k] = (re[0][a] * im[1][b] + im[0][a] * re[1][b]) - (re[0][b] * im[1][a] + im[0][b] * re[1][a]);
+        }
+        return new double[][] {{v[0], u[0], w[0]}, {v[1], u[1], w[1]}, {v[2], u[2], w[2]}};
+    }
+
+    private static double[][] inverse(double[][] m) {
+        double[][] inv = new double[3][3];
+        for (int col = 0; col < 3; col++) {
+            double[] e = new double[3];
+            e[col] = 1;
+            double[] x = SmallDense.solve(m, e);
+            for (int r = 0; r < 3; r++) {
+                inv[r][col] = x[r];
+            }
+        }
+        return inv;
+    }
+
+    private static double[][] product(double[][] a, double[][] b) {
+        double[][] p = new double[3][3];
+        for (int i = 0; i < 3; i++) {
+            for (int j = 0; j < 3; j++) {
+                for (int k = 0; k < 3; k++) {
+                    p[i][j] += a[i][k] * b[k][j];
+                }
+            }
+        }
+        return p;
     }
 
     /**

@@ -225,10 +225,15 @@ final class RadauStepper {
 
     private void factorNewton(double h, double[][][] jacobians) {
         newtonValid = false;
-        algebra.factorNewton(h, jacobians);
-        factorizations++;
+        factorizations += algebra.factorNewton(h, jacobians);
         newtonValid = true;
         newtonH = h;
+        if (algebra.isSplit() && Arrays.deepEquals(jacobians[0], jac0)) {
+            // the split real block is I − hγ₀J with J = J(t₀): exactly the error filter
+            algebra.adoptRealBlockAsErrorFilter();
+            filterValid = true;
+            filterH = h;
+        }
     }
 
     private void evaluateJacobian(double tS, double[][] target) {

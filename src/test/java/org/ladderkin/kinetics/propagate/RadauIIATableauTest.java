@@ -202,6 +202,21 @@ class RadauIIATableauTest {
     }
 
     @Test
+    void eigenbasisSplitsAIntoARealAndA2x2Block() {
+        double[][] l = RadauIIATableau.LAMBDA;
+        org.assertj.core.data.Offset<Double> tiny = org.assertj.core.data.Offset.offset(1e-14);
+        assertThat(l[0][0]).isCloseTo(RadauIIATableau.GAMMA0, tiny);
+        assertThat(l[0][1]).isCloseTo(0.0, tiny);
+        assertThat(l[0][2]).isCloseTo(0.0, tiny);
+        assertThat(l[1][0]).isCloseTo(0.0, tiny);
+        assertThat(l[2][0]).isCloseTo(0.0, tiny);
+        // the 2×2 block is α·I + β·rotation: equal diagonal, opposite off-diagonal
+        assertThat(l[1][1]).isCloseTo(l[2][2], tiny);
+        assertThat(l[1][2]).isCloseTo(-l[2][1], tiny);
+        assertThat(Math.abs(l[1][2])).isGreaterThan(0.1);
+    }
+
+    @Test
     void lagrangeBasisInterpolatesTheNodes() {
         double[] nodes = {RadauIIATableau.C[0], RadauIIATableau.C[1], RadauIIATableau.C[2]};
         for (int i = 0; i < 3; i++) {
