@@ -35,7 +35,6 @@ final class RadauStepper {
     private final boolean linear;
     private final ErrorScale scale;
     private final StageMatrices algebra;
-    private final double newtonTolerance;
 
     private int jacobianEvaluations;
     private int factorizations;
@@ -61,8 +60,7 @@ final class RadauStepper {
     private final double[] zPrev;
     private double hPrev;
     private boolean havePrev;
-    private double theta;
-    private double facCon = 1.0;
+    private final NewtonMonitor monitor;
 
     private final double[] z;
     private final double[] dz;
@@ -85,7 +83,8 @@ final class RadauStepper {
         this.algebra = new StageMatrices(n);
         double rtol = tolerances.relative();
         // radau5's stopping criterion for Newton, in units of the local tolerance, floored at round-off
-        this.newtonTolerance = rtol > 0 ? Math.max(10 * EPS / rtol, Math.min(0.03, Math.sqrt(rtol))) : 0.03;
+        double newtonTolerance = rtol > 0 ? Math.max(10 * EPS / rtol, Math.min(0.03, Math.sqrt(rtol))) : 0.03;
+        this.monitor = new NewtonMonitor(maxNewton, newtonTolerance);
         int m = RadauIIATableau.STAGES * n;
         y = new double[n];
         f0 = new double[n];
@@ -139,7 +138,7 @@ final class RadauStepper {
                 }
                 jac0Valid = true;
             }
-        } else if (theta > JACOBIAN_REUSE_THETA) {
+        } else if (monitor.theta() > JACOBIAN_REUSE_THETA) {
             jac0Valid = false;
         }
     }
@@ -302,49 +301,30 @@ final class RadauStepper {
     }
 
     /**
-     * Simplified Newton with radau5's convergence monitor; returns the iteration count, or −1 when the iteration
-     * diverges or is too slow (the suggested step factor is then in {@link #failureFactor}).
+     * Simplified Newton iterations judged by {@link NewtonMonitor}; returns the iteration count, or −1 when the
+     * iteration diverges or is too slow (the suggested step factor is then in {@link #failureFactor}).
      */
     private int newton(double h) {
-        facCon = Math.pow(Math.max(facCon, EPS), 0.8);
-        double dynoOld = 0;
-        double thqOld = 0;
+        monitor.start();
         for (int newt = 1; newt <= maxNewton; newt++) {
             if (!residual(h)) {
                 return newtonFailed(0.5);
             }
             algebra.solveNewton(dz);
-            double dyno = scale.rmsNorm(dz, y);
-            if (!Double.isFinite(dyno)) {
-                lastFailure = "non-finite Newton increment";
-                return newtonFailed(0.5);
+            double norm = scale.rmsNorm(dz, y);
+            if (!monitor.proceed(newt, norm)) {
+                lastFailure = monitor.failure();
+                return newtonFailed(monitor.failureFactor());
             }
-            if (newt > 1 && newt < maxNewton) {
-                double thq = dyno / dynoOld;
-                theta = newt == 2 ? thq : Math.sqrt(thq * thqOld);
-                thqOld = thq;
-                if (theta < 0.99) {
-                    facCon = theta / (1 - theta);
-                    double dyth = facCon * dyno * Math.pow(theta, maxNewton - 1 - newt) / newtonTolerance;
-                    if (dyth >= 1) {
-                        double qNewt = Math.max(1e-4, Math.min(20, dyth));
-                        lastFailure = "Newton too slow (contraction " + theta + ")";
-                        return newtonFailed(0.8 * Math.pow(qNewt, -1.0 / (4 + maxNewton - 1 - newt)));
-                    }
-                } else {
-                    lastFailure = "Newton diverges (contraction " + theta + ")";
-                    return newtonFailed(0.5);
-                }
-            }
-            dynoOld = Math.max(dyno, EPS);
             for (int i = 0; i < z.length; i++) {
                 z[i] += dz[i];
             }
-            if (facCon * dyno <= newtonTolerance) {
+            if (monitor.converged(norm)) {
                 return newt;
             }
         }
-        lastFailure = "Newton did not converge in " + maxNewton + " iterations";
+        monitor.exhausted();
+        lastFailure = monitor.failure();
         return newtonFailed(0.5);
     }
 
@@ -352,7 +332,6 @@ final class RadauStepper {
         if (!jacobianAtBase) {
             jac0Valid = false;
         }
-        facCon = 1.0;
         failureFactor = hFactor;
         return -1;
     }
