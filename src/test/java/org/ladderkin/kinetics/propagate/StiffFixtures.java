@@ -84,6 +84,33 @@ final class StiffFixtures {
         };
     }
 
+    /**
+     * Van der Pol's equation in its stiff scaling: y1' = y2, y2' = ((1 − y1²)·y2 − y1)/ε (Hairer &amp; Wanner II,
+     * Sect. IV.1); ε = 1e-6 makes the relaxation jumps about 1e6 times faster than the slow branches.
+     */
+    static StiffSystem vanDerPol(double epsilon) {
+        return new StiffSystem() {
+            @Override
+            public int dimension() {
+                return 2;
+            }
+
+            @Override
+            public void derivatives(double t, double[] y, double[] d) {
+                d[0] = y[1];
+                d[1] = ((1 - y[0] * y[0]) * y[1] - y[0]) / epsilon;
+            }
+
+            @Override
+            public void jacobian(double t, double[] y, double[][] j) {
+                j[0][0] = 0;
+                j[0][1] = 1;
+                j[1][0] = (-2 * y[0] * y[1] - 1) / epsilon;
+                j[1][1] = (1 - y[0] * y[0]) / epsilon;
+            }
+        };
+    }
+
     /** Robertson's chemical kinetics (Hairer &amp; Wanner II, Sect. IV.1). */
     static StiffSystem robertson() {
         return new StiffSystem() {
