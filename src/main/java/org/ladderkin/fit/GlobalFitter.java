@@ -52,28 +52,33 @@ public final class GlobalFitter {
             warnings.add("only some traces have uncertainties: all points are weighted equally");
         }
 
-        List<double[][]> starts = new ArrayList<>();
-        starts.add(null);
-        for (Map<String, Double> s : options.starts()) {
-            starts.add(startValues(problem, s));
-        }
+        List<Map<String, Double>> starts = new ArrayList<>();
+        starts.add(Map.of());
+        starts.addAll(options.starts());
         Run best = null;
         String firstFailure = null;
         int failed = 0;
-        for (double[][] s : starts) {
+        for (int i = 0; i < starts.size(); i++) {
+            String failure;
             try {
-                Projection p = s == null ? proj : new Projection(problem, s, options.analyticJacobian());
+                Projection p = i == 0 ? proj : new Projection(problem, startValues(problem, starts.get(i)), options.analyticJacobian());
                 Run r = optimise(p, options);
                 if (best == null || r.chiSquare < best.chiSquare) {
                     best = r;
                 }
+                continue;
             } catch (Projection.FitFailure e) {
-                failed++;
-                firstFailure = firstFailure == null ? e.getMessage() : firstFailure;
+                failure = e.getMessage();
             } catch (MathRuntimeException e) {
-                failed++;
-                firstFailure = firstFailure == null ? "optimiser stopped: " + e.getMessage() : firstFailure;
+                failure = "optimiser stopped: " + e.getMessage();
+            } catch (IllegalArgumentException e) {
+                failure = "start " + (i + 1) + " is unusable: " + e.getMessage();
+            } catch (RuntimeException e) {
+                // a model that throws must not take the caller down with it; the message says what it was
+                failure = "model failed: " + e.getClass().getSimpleName() + ": " + e.getMessage();
             }
+            failed++;
+            firstFailure = firstFailure == null ? failure : firstFailure;
         }
         if (best == null) {
             return FitResult.failed(starts.size() == 1 ? firstFailure
@@ -234,6 +239,24 @@ public final class GlobalFitter {
         }
 
         double[][] phys = p.physical(run.u());
+        List<String> atBound = new ArrayList<>();
+        for (int c = 0; c < nSlots; c++) {
+            Projection.Slot slot = p.slots.get(c);
+            ParameterSpec spec = p.specs.get(slot.spec());
+            double value = phys[slot.spec()][Math.max(slot.trace(), 0)];
+            double near = 1e-6 * spec.scale();
+            if (value - spec.lower() <= near || spec.upper() - value <= near) {
+                atBound.add(slot.label() + " = " + Projection.brief(value) + " ran to its bound "
+                        + Projection.brief(value - spec.lower() <= near ? spec.lower() : spec.upper()));
+            }
+        }
+        if (!atBound.isEmpty()) {
+            String note = String.join("; ", atBound) + " (the data do not hold it away from the bound: fix it or drop that part of the model)";
+            warnings.add(note);
+            if (!status.isEmpty()) {
+                status = note + "; " + status;
+            }
+        }
         List<ParameterEstimate> estimates = new ArrayList<>();
         for (int s = 0; s < p.specs.size(); s++) {
             ParameterSpec spec = p.specs.get(s);

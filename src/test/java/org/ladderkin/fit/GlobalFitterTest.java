@@ -166,4 +166,62 @@ class GlobalFitterTest {
         assertThat(q.message()).isEqualTo("the data do not depend on unusedS at the best fit (fix it, or widen the delay range)");
         assertThat(q.estimate("tau1S").value()).isFinite();
     }
+
+    @Test
+    void perTraceParametersGetOneValueAndErrorPerTrace() {
+        FitProblem shared = biexponential(13, false);
+        List<ParameterSpec> specs = List.of(ParameterSpec.positive("tau1", "S", 10e-9), ParameterSpec.positive("tau2", "S", 100e-12),
+                ParameterSpec.positive("weight", "2", 0.5).withScope(ParameterSpec.Scope.PER_TRACE));
+        FitProblem p = new FitProblem(shared.data(), shared.model(), specs, LinearTerms.AMPLITUDE_AND_BASELINE);
+        FitResult a = GlobalFitter.fit(p, FitOptions.defaults());
+        FitResult f = GlobalFitter.fit(p, FitOptions.defaults().withAnalyticJacobian(false));
+        assertThat(a.status()).as(a.message()).isEqualTo(FitResult.Status.CONVERGED);
+        assertThat(a.freeParameters()).isEqualTo(2 + 4 + 8);
+        assertThat(a.correlationKeys()).contains("weight2[0]", "weight2[3]");
+        for (int i = 0; i < 4; i++) {
+            ParameterEstimate w = a.find("weight2", i).orElseThrow();
+            assertThat(Math.abs(w.value() - 0.8)).as("weight2[%d]", i).isLessThan(4 * w.stdError());
+            ParameterEstimate wf = f.find("weight2", i).orElseThrow();
+            assertThat(wf.value()).isCloseTo(w.value(), within(1e-5 * w.value()));
+            assertThat(wf.stdError()).isCloseTo(w.stdError(), within(1e-3 * w.stdError()));
+        }
+        assertThat(a.find("weight2", -1)).isEmpty();
+    }
+
+    @Test
+    void parameterThatRunsToItsBoundIsReported() {
+        SharedExponentialsModel model = new SharedExponentialsModel(EXCITATION);
+        Dataset mono = SyntheticSeries.make(model, Map.of("tau1S", 20e-9), SyntheticSeries.logDelays(1e-12, 100e-9, 150),
+                AMPLITUDES, 0, NOISE, 21, false);
+        FitProblem p = new FitProblem(mono, model, List.of(ParameterSpec.positive("tau1", "S", 10e-9),
+                ParameterSpec.positive("tau2", "S", 50e-12).fixedAt(50e-12), ParameterSpec.shared("weight", "2", 0.3, 0.0, 2.0)),
+                LinearTerms.AMPLITUDE_AND_BASELINE);
+        FitResult r = GlobalFitter.fit(p, FitOptions.defaults());
+        assertThat(r.ok()).isTrue();
+        assertThat(r.estimate("weight2").value()).isLessThan(1e-6);
+        assertThat(r.warnings()).anyMatch(w -> w.startsWith("weight2 = ") && w.contains("ran to its bound 0 (the data do not hold it"));
+    }
+
+    @Test
+    void throwingModelAndUnusableStartsBecomeFailureStates() {
+        FitProblem p = biexponential(8, false);
+        TraceModel broken = new TraceModel() {
+            @Override
+            public int traceCount() {
+                return 4;
+            }
+
+            @Override
+            public double[] predict(int trace, double[] t, ParameterValues v) {
+                throw new IllegalStateException("generator not ready");
+            }
+        };
+        FitResult r = GlobalFitter.fit(new FitProblem(p.data(), broken, p.parameters(), p.linear()), FitOptions.defaults());
+        assertThat(r.status()).isEqualTo(FitResult.Status.FAILED);
+        assertThat(r.message()).isEqualTo("model failed: IllegalStateException: generator not ready");
+        FitResult s = GlobalFitter.fit(p, FitOptions.defaults().withStarts(List.of(Map.of("tau2S", -1.0), Map.of("nonsense", 1.0))));
+        assertThat(s.status()).isEqualTo(FitResult.Status.CONVERGED);
+        assertThat(s.startsFailed()).isEqualTo(2);
+        assertThat(s.warnings()).anyMatch(w -> w.startsWith("2 of 3 starts failed; the first: start 2 is unusable: start value -1.0 for tau2S is outside its bounds"));
+    }
 }

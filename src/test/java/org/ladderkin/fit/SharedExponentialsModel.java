@@ -4,7 +4,8 @@ package org.ladderkin.fit;
  * Analytic test model for a fluence series: up to three exponential decays with shared lifetimes, the k-th weighted
  * by x_i^(k−1), where x_i = g_i / (1 + g_i / saturation) grows with each trace's relative excitation g_i. It mimics the
  * structure of the ladder fit (fast components that grow with fluence) in closed form, with an analytic Jacobian.
- * Parameters: tau1S, tau2S, tau3S, weight2, weight3, saturation (absent ones contribute nothing / no saturation).
+ * Parameters: tau1S, tau2S, tau3S, weight2, weight3, saturation (absent ones contribute nothing / no saturation);
+ * any of them may be shared or per trace.
  */
 public final class SharedExponentialsModel implements TraceModel {
 
@@ -22,15 +23,15 @@ public final class SharedExponentialsModel implements TraceModel {
     private record Values(double tau1, double tau2, double tau3, double w2, double w3, double sat, int iSat) {
     }
 
-    private static Values read(ParameterValues p) {
+    private static Values read(ParameterValues p, int t) {
         int i1 = p.indexOf("tau1S");
         int i2 = p.indexOf("tau2S");
         int i3 = p.indexOf("tau3S");
         int iw2 = p.indexOf("weight2");
         int iw3 = p.indexOf("weight3");
         int is = p.indexOf("saturation");
-        return new Values(p.value(i1, 0), i2 < 0 ? 1 : p.value(i2, 0), i3 < 0 ? 1 : p.value(i3, 0),
-                iw2 < 0 ? 0 : p.value(iw2, 0), iw3 < 0 ? 0 : p.value(iw3, 0), is < 0 ? Double.POSITIVE_INFINITY : p.value(is, 0), is);
+        return new Values(p.value(i1, t), i2 < 0 ? 1 : p.value(i2, t), i3 < 0 ? 1 : p.value(i3, t),
+                iw2 < 0 ? 0 : p.value(iw2, t), iw3 < 0 ? 0 : p.value(iw3, t), is < 0 ? Double.POSITIVE_INFINITY : p.value(is, t), is);
     }
 
     private double x(int trace, double sat) {
@@ -40,7 +41,7 @@ public final class SharedExponentialsModel implements TraceModel {
 
     @Override
     public double[] predict(int trace, double[] t, ParameterValues p) {
-        Values v = read(p);
+        Values v = read(p, trace);
         double x = x(trace, v.sat());
         double[] f = new double[t.length];
         for (int j = 0; j < t.length; j++) {
@@ -56,7 +57,7 @@ public final class SharedExponentialsModel implements TraceModel {
 
     @Override
     public double[][] jacobian(int trace, double[] t, ParameterValues p) {
-        Values v = read(p);
+        Values v = read(p, trace);
         double g = excitation[trace];
         double x = x(trace, v.sat());
         double dxdSat = Double.isInfinite(v.sat()) ? 0 : g * g / ((v.sat() + g) * (v.sat() + g));
