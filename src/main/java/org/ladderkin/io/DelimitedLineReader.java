@@ -124,6 +124,46 @@ final class DelimitedLineReader implements AutoCloseable {
         }
     }
 
+    /**
+     * Finds the cell boundaries of {@code line} without copying: cell c is {@code line[from[c], to[c])}. Returns the
+     * number of cells found (which may exceed the array length: the caller reports it).
+     */
+    int bounds(String line, int[] from, int[] to) {
+        int n = 0;
+        int start = 0;
+        int len = line.length();
+        while (true) {
+            int at = line.indexOf(delimiter, start);
+            int end = at < 0 ? len : at;
+            if (n < from.length) {
+                from[n] = start;
+                to[n] = end;
+            }
+            n++;
+            if (at < 0) {
+                return n;
+            }
+            start = at + 1;
+        }
+    }
+
+    /** The number in {@code line[from, to)}: the exact fast path for plain decimals, else {@link #number(String, int, String)}. */
+    double number(String line, int from, int to, String field) {
+        int a = from;
+        int b = to;
+        while (a < b && line.charAt(a) <= ' ') {
+            a++;
+        }
+        while (b > a && line.charAt(b - 1) <= ' ') {
+            b--;
+        }
+        if (a == b) {
+            return Double.NaN;
+        }
+        double v = DecimalParser.tryParse(line, a, b, delimiter != ',');
+        return Double.isNaN(v) ? number(line.substring(from, to), from + 1, field) : v;
+    }
+
     /** Number of cells in {@code line}. */
     int count(String line) {
         int n = 1;

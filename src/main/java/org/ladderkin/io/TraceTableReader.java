@@ -128,37 +128,37 @@ public final class TraceTableReader {
         for (int c = 1; c < width; c++) {
             columns[c] = new GrowableDoubles();
         }
-        String[] cells = new String[width];
-        int[] cellStarts = new int[width];
+        int[] cellFrom = new int[width];
+        int[] cellTo = new int[width];
         double factor = delayUnit.toSi(1) - delayUnit.toSi(0);
         double offset = delayUnit.toSi(0);
         double previous = Double.NaN;
         int previousLine = 0;
         String line;
         while ((line = in.nextContentLine()) != null) {
-            int n = in.split(line, cells, cellStarts);
+            int n = in.bounds(line, cellFrom, cellTo);
             if (n != width) {
                 throw new InputException(in.here(0), null, "row has " + n + " cell" + (n == 1 ? "" : "s") + " but the header at line "
                         + headerLine + " has " + width + " (ragged row: check for a missing or extra delimiter)");
             }
-            double d = in.number(cells[0], cellStarts[0], names[0].strip());
+            double d = in.number(line, cellFrom[0], cellTo[0], names[0].strip());
             if (Double.isNaN(d)) {
-                throw new InputException(in.here(cellStarts[0]), names[0].strip(), "missing delay (every row needs one)");
+                throw new InputException(in.here(cellFrom[0] + 1), names[0].strip(), "missing delay (every row needs one)");
             }
             double dS = d * factor + offset;
             if (delays.size() > 0 && !(dS > previous)) {
                 String what = dS == previous ? "duplicate delay " + fmt(d) + " " + delayUnit.symbol() + " (also at line " + previousLine + ")"
                         : "delay " + fmt(d) + " " + delayUnit.symbol() + " is smaller than " + fmt((previous - offset) / factor) + " "
                         + delayUnit.symbol() + " at line " + previousLine;
-                throw new InputException(in.here(cellStarts[0]), names[0].strip(), what + " (delays must increase strictly down the file)");
+                throw new InputException(in.here(cellFrom[0] + 1), names[0].strip(), what + " (delays must increase strictly down the file)");
             }
             delays.add(dS);
             previous = dS;
             previousLine = in.lineNumber();
             for (int c = 1; c < width; c++) {
-                double v = in.number(cells[c], cellStarts[c], names[c].strip());
+                double v = in.number(line, cellFrom[c], cellTo[c], names[c].strip());
                 if (Double.isNaN(v) && options.missing() == MissingValuePolicy.REJECT) {
-                    throw new InputException(in.here(cellStarts[c]), names[c].strip(),
+                    throw new InputException(in.here(cellFrom[c] + 1), names[c].strip(),
                             "missing value (missing values are refused here; allow them to drop the point)");
                 }
                 columns[c].add(v);

@@ -5,6 +5,7 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Locale;
 import java.util.concurrent.TimeUnit;
 import org.ladderkin.fit.Dataset;
 import org.ladderkin.io.TableOptions;
@@ -24,7 +25,8 @@ import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
 
 /**
- * Reading speed of the streaming trace table reader on a generated CSV (one delay column, four traces).
+ * Reading speed of the streaming trace table reader on a generated CSV (one delay column, four traces, cells with six
+ * significant digits).
  * Run: {@code mvn -B -q test-compile && java -cp target/test-classes:target/classes:$(cat cp.txt) org.openjdk.jmh.Main TraceTableRead}
  * (with {@code cp.txt} from {@code mvn dependency:build-classpath -Dmdep.outputFile=cp.txt}).
  */
@@ -48,10 +50,11 @@ public class TraceTableReadBenchmark {
             w.write("delay (ps),a,b,c,d\n");
             for (int i = 0; i < rows; i++) {
                 double t = i * 0.01;
-                w.write(Double.toString(t));
+                // six significant digits, as instruments write them
+                w.write(String.format(Locale.ROOT, "%.6g", t));
                 for (int k = 1; k <= 4; k++) {
                     w.write(',');
-                    w.write(Double.toString(k * Math.exp(-t / (100.0 * k))));
+                    w.write(String.format(Locale.ROOT, "%.6g", k * Math.exp(-t / (100.0 * k))));
                 }
                 w.write('\n');
             }
