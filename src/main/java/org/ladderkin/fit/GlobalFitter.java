@@ -60,8 +60,17 @@ public final class GlobalFitter {
         int failed = 0;
         for (int i = 0; i < starts.size(); i++) {
             String failure;
+            double[][] startValues;
             try {
-                Projection p = i == 0 ? proj : new Projection(problem, startValues(problem, starts.get(i)), options.analyticJacobian());
+                startValues = i == 0 ? null : startValues(problem, starts.get(i));
+            } catch (IllegalArgumentException e) {
+                failed++;
+                String unusable = "start " + (i + 1) + " is unusable: " + e.getMessage();
+                firstFailure = firstFailure == null ? unusable : firstFailure;
+                continue;
+            }
+            try {
+                Projection p = i == 0 ? proj : new Projection(problem, startValues, options.analyticJacobian());
                 Run r = optimise(p, options);
                 if (best == null || r.chiSquare < best.chiSquare) {
                     best = r;
@@ -71,8 +80,6 @@ public final class GlobalFitter {
                 failure = e.getMessage();
             } catch (MathRuntimeException e) {
                 failure = "optimiser stopped: " + e.getMessage();
-            } catch (IllegalArgumentException e) {
-                failure = "start " + (i + 1) + " is unusable: " + e.getMessage();
             } catch (RuntimeException e) {
                 // a model that throws must not take the caller down with it; the message says what it was
                 failure = "model failed: " + e.getClass().getSimpleName() + ": " + e.getMessage();

@@ -36,8 +36,12 @@ public final class ParameterValues {
         return value(i, trace);
     }
 
-    /** Value of shared parameter {@code key}. */
+    /** Value of shared parameter {@code key}; a per-trace parameter must be asked with its trace. */
     public double get(String key) {
+        int i = indexOf(key);
+        if (i >= 0 && values[i].length > 1) {
+            throw new IllegalArgumentException("parameter '" + key + "' has one value per trace: ask get(key, trace)");
+        }
         return get(key, 0);
     }
 

@@ -55,7 +55,7 @@ public final class TaMatrixReader {
         int[] starts = new int[width];
         in.split(header, cells, starts);
         int headerLine = in.lineNumber();
-        String corner = cells[0];
+        String corner = TraceTableReader.unquote(cells[0]);
         double[] axis = new double[width - 1];
         for (int c = 1; c < width; c++) {
             axis[c - 1] = in.number(cells[c], starts[c], "first row");

@@ -77,11 +77,17 @@ public final class TraceTableReader {
                     "no data (expected a header line such as 'delay (ps),1 nJ,2 nJ' and rows of numbers)");
         }
         in.detectDelimiter(header);
-        int width = in.count(header);
-        String[] names = new String[width];
-        int[] starts = new int[width];
+        int cellsPerRow = in.count(header);
+        String[] names = new String[cellsPerRow];
+        int[] starts = new int[cellsPerRow];
         in.split(header, names, starts);
         int headerLine = in.lineNumber();
+        for (int c = 0; c < cellsPerRow; c++) {
+            names[c] = unquote(names[c]);
+        }
+        // some programs end every line with a delimiter: an empty last header then means "no column", not a nameless one
+        boolean trailingDelimiter = cellsPerRow > 2 && names[cellsPerRow - 1].isEmpty();
+        int width = trailingDelimiter ? cellsPerRow - 1 : cellsPerRow;
         if (allNumeric(names)) {
             throw new InputException(in.here(0), null, "missing header line: the first line holds numbers "
                     + "(add a line naming the columns, e.g. 'delay (ps)" + in.delimiter() + "1 nJ" + in.delimiter() + "2 nJ')");
@@ -128,8 +134,8 @@ public final class TraceTableReader {
         for (int c = 1; c < width; c++) {
             columns[c] = new GrowableDoubles();
         }
-        int[] cellFrom = new int[width];
-        int[] cellTo = new int[width];
+        int[] cellFrom = new int[cellsPerRow];
+        int[] cellTo = new int[cellsPerRow];
         double factor = delayUnit.toSi(1) - delayUnit.toSi(0);
         double offset = delayUnit.toSi(0);
         double previous = Double.NaN;
@@ -137,9 +143,10 @@ public final class TraceTableReader {
         String line;
         while ((line = in.nextContentLine()) != null) {
             int n = in.bounds(line, cellFrom, cellTo);
-            if (n != width) {
+            if (n != cellsPerRow || trailingDelimiter && !line.substring(cellFrom[width], cellTo[width]).isBlank()) {
                 throw new InputException(in.here(0), null, "row has " + n + " cell" + (n == 1 ? "" : "s") + " but the header at line "
-                        + headerLine + " has " + width + " (ragged row: check for a missing or extra delimiter)");
+                        + headerLine + " has " + cellsPerRow + (trailingDelimiter ? " (the last one empty)" : "")
+                        + " (ragged row: check for a missing or extra delimiter)");
             }
             double d = in.number(line, cellFrom[0], cellTo[0], names[0].strip());
             if (Double.isNaN(d)) {
@@ -175,6 +182,12 @@ public final class TraceTableReader {
                     sigmaOf[c] < 0 ? null : columns[sigmaOf[c]]));
         }
         return traces;
+    }
+
+    /** The header text without surrounding spaces and double quotes (spreadsheets quote headers). */
+    static String unquote(String cell) {
+        String t = cell.strip();
+        return t.length() >= 2 && t.charAt(0) == '"' && t.charAt(t.length() - 1) == '"' ? t.substring(1, t.length() - 1).strip() : t;
     }
 
     private static String errorBase(String header) {

@@ -61,6 +61,16 @@ class TraceTableReaderTest {
     }
 
     @Test
+    void quotedHeadersAndTrailingDelimitersAreAccepted() throws IOException {
+        Dataset d = read("\"delay (ps)\",\"1 nJ\",\"2 nJ\",\r\n0,1,2,\r\n1,0.5,1,\r\n2,0.25,0.5,\r\n");
+        assertThat(d.labels()).containsExactly("1 nJ", "2 nJ");
+        assertThat(d.traces().get(1).signal()).containsExactly(2, 1, 0.5);
+        Path p = write("t.csv", "delay (ps),a,b,\n0,1,2,\n1,0.5,1,9\n2,0.25,0.5,\n");
+        assertThatThrownBy(() -> TraceTableReader.read(p, "t.csv", TableOptions.defaults()))
+                .hasMessageStartingWith("t.csv:3: row has 4 cells but the header at line 1 has 4 (the last one empty)");
+    }
+
+    @Test
     void headerWithoutUnitTakesTheDefault() throws IOException {
         Path p = write("d.csv", "delay,x\n1,3\n2,2\n3,1\n");
         Dataset d = TraceTableReader.read(p, "d.csv", new TableOptions(Units.of("ns"), MissingValuePolicy.DROP));
