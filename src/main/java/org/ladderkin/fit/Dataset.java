@@ -38,6 +38,26 @@ public record Dataset(List<Trace> traces, List<String> sourceFiles) {
         return traces.stream().mapToInt(Trace::droppedMissing).sum();
     }
 
+    /**
+     * One line for the user about dropped missing values, e.g. "dropped 4 missing values (a: 1, b: 3)", or empty when
+     * none were dropped.
+     */
+    public String missingSummary() {
+        int total = droppedMissing();
+        if (total == 0) {
+            return "";
+        }
+        StringBuilder b = new StringBuilder("dropped ").append(total).append(" missing value").append(total == 1 ? "" : "s").append(" (");
+        boolean first = true;
+        for (Trace t : traces) {
+            if (t.droppedMissing() > 0) {
+                b.append(first ? "" : ", ").append(t.label()).append(": ").append(t.droppedMissing());
+                first = false;
+            }
+        }
+        return b.append(')').toString();
+    }
+
     /** Labels in order. */
     public List<String> labels() {
         return traces.stream().map(Trace::label).toList();

@@ -224,4 +224,40 @@ class GlobalFitterTest {
         assertThat(s.startsFailed()).isEqualTo(2);
         assertThat(s.warnings()).anyMatch(w -> w.startsWith("2 of 3 starts failed; the first: start 2 is unusable: start value -1.0 for tau2S is outside its bounds"));
     }
+
+    @Test
+    void allNonlinearParametersFixedLeavesALinearFit() {
+        FitProblem p = biexponential(4, false);
+        List<ParameterSpec> fixed = p.parameters().stream().map(s -> s.fixedAt(TRUTH.get(s.key()))).toList();
+        FitResult r = GlobalFitter.fit(new FitProblem(p.data(), p.model(), fixed, p.linear()), FitOptions.defaults());
+        assertThat(r.status()).isEqualTo(FitResult.Status.CONVERGED);
+        assertThat(r.freeParameters()).isEqualTo(8);
+        assertThat(r.iterations()).isZero();
+        ParameterEstimate a0 = r.find("amplitude", 0).orElseThrow();
+        assertThat(Math.abs(a0.value() - 2e-3)).isLessThan(4 * a0.stdError());
+        assertThat(r.estimate("tau1S").stdError()).isZero();
+    }
+
+    @Test
+    void sharedLookupOfAPerTraceParameterIsAModelErrorWithAMessage() {
+        FitProblem p = biexponential(6, false);
+        TraceModel careless = new TraceModel() {
+            @Override
+            public int traceCount() {
+                return 4;
+            }
+
+            @Override
+            public double[] predict(int trace, double[] t, ParameterValues v) {
+                v.get("weight2");
+                return p.model().predict(trace, t, v);
+            }
+        };
+        List<ParameterSpec> specs = List.of(p.parameters().get(0), p.parameters().get(1),
+                p.parameters().get(2).withScope(ParameterSpec.Scope.PER_TRACE));
+        FitResult r = GlobalFitter.fit(new FitProblem(p.data(), careless, specs, p.linear()), FitOptions.defaults());
+        assertThat(r.status()).isEqualTo(FitResult.Status.FAILED);
+        assertThat(r.message()).isEqualTo("model failed: IllegalArgumentException: parameter 'weight2' has one value per trace: "
+                + "ask get(key, trace)");
+    }
 }

@@ -87,6 +87,7 @@ class TraceTableReaderTest {
         assertThat(d.traces().get(1).delaysS()).containsExactly(1e-12, 4e-12, 5e-12);
         assertThat(d.traces().get(1).droppedMissing()).isEqualTo(3);
         assertThat(d.droppedMissing()).isEqualTo(4);
+        assertThat(d.missingSummary()).isEqualTo("dropped 4 missing values (a: 1, b: 3)");
     }
 
     @Test
