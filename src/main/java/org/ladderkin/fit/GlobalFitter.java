@@ -65,6 +65,7 @@ public final class GlobalFitter {
                 startValues = i == 0 ? null : startValues(problem, starts.get(i));
             } catch (IllegalArgumentException e) {
                 failed++;
+                options.progress().update("start", i + 1, starts.size());
                 String unusable = "start " + (i + 1) + " is unusable: " + e.getMessage();
                 firstFailure = firstFailure == null ? unusable : firstFailure;
                 continue;
@@ -75,6 +76,7 @@ public final class GlobalFitter {
                 if (best == null || r.chiSquare < best.chiSquare) {
                     best = r;
                 }
+                options.progress().update("start", i + 1, starts.size());
                 continue;
             } catch (Projection.FitFailure e) {
                 failure = e.getMessage();
@@ -86,6 +88,7 @@ public final class GlobalFitter {
             }
             failed++;
             firstFailure = firstFailure == null ? failure : firstFailure;
+            options.progress().update("start", i + 1, starts.size());
         }
         if (best == null) {
             return FitResult.failed(starts.size() == 1 ? firstFailure

@@ -31,10 +31,12 @@ final class ProfileLikelihood {
         double step = Double.isFinite(se) && se > 0 ? se : 0.1 * (theta != 0 ? Math.abs(theta) : spec.scale());
         double chiMin = best.chiSquare();
         double s2 = result.reducedChiSquare();
-        FitOptions plain = options.withProfile(java.util.List.of()).withStarts(java.util.List.of());
+        FitOptions plain = options.withProfile(java.util.List.of()).withStarts(java.util.List.of()).withProgress(FitProgress.NONE);
+        int expected = 2 * (MAX_EXPANSIONS + MAX_ROOT_REFITS);
         int[] refits = {0};
         java.util.function.DoubleUnaryOperator rise = value -> {
             refits[0]++;
+            options.progress().update("profile " + key, refits[0], Math.max(expected, refits[0]));
             double[][] start = new double[bestValues.length][];
             for (int s = 0; s < start.length; s++) {
                 start[s] = bestValues[s].clone();

@@ -164,13 +164,16 @@ class FitValidationTest {
         Dataset d = SyntheticSeries.make(model, Map.of("tau1S", 100e-12), SyntheticSeries.logDelays(1e-12, 1e-9, 200),
                 new double[] {1.0}, 0.0, 0.01, 23, false);
         FitProblem p = new FitProblem(d, model, List.of(ParameterSpec.positive("tau1", "S", 50e-12)), LinearTerms.AMPLITUDE_AND_BASELINE);
-        FitResult r = GlobalFitter.fit(p, FitOptions.defaults().withProfile(List.of("tau1S")));
+        List<String> stages = new ArrayList<>();
+        FitResult r = GlobalFitter.fit(p, FitOptions.defaults().withProfile(List.of("tau1S"))
+                .withProgress((stage, done, total) -> stages.add(stage)));
         ParameterEstimate tau = r.estimate("tau1S");
         ProfileInterval pi = r.profile("tau1S").orElseThrow();
         double se = tau.stdError();
         assertThat(pi.lower()).isCloseTo(tau.value() - se, org.assertj.core.data.Offset.offset(0.05 * se));
         assertThat(pi.upper()).isCloseTo(tau.value() + se, org.assertj.core.data.Offset.offset(0.05 * se));
         assertThat(pi.refits()).isPositive();
+        assertThat(stages).startsWith("start").contains("profile tau1S").hasSize(1 + pi.refits());
     }
 
     @Test

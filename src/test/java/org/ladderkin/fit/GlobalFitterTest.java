@@ -107,8 +107,11 @@ class GlobalFitterTest {
         FitResult alone = GlobalFitter.fit(q, FitOptions.defaults());
         assertThat(alone.status()).isEqualTo(FitResult.Status.FAILED);
         assertThat(alone.message()).startsWith("model returned NaN for trace 'trace0' at delay 1.0E-12 s with tau1S=5e-06, tau2S=1e-10, weight2=0.5");
+        List<String> progress = new java.util.ArrayList<>();
         FitResult grid = GlobalFitter.fit(q, FitOptions.defaults().withStarts(List.of(
-                Map.of("tau1S", 30e-9), Map.of("tau1S", 3e-9, "tau2S", 20e-12))));
+                Map.of("tau1S", 30e-9), Map.of("tau1S", 3e-9, "tau2S", 20e-12)))
+                .withProgress((stage, done, total) -> progress.add(stage + " " + done + "/" + total)));
+        assertThat(progress).containsExactly("start 1/3", "start 2/3", "start 3/3");
         assertThat(grid.status()).isEqualTo(FitResult.Status.CONVERGED);
         assertThat(grid.startsTried()).isEqualTo(3);
         assertThat(grid.startsFailed()).isEqualTo(1);
