@@ -88,7 +88,7 @@ public final class TraceTableReader {
         // some programs end every line with a delimiter: an empty last header then means "no column", not a nameless one
         boolean trailingDelimiter = cellsPerRow > 2 && names[cellsPerRow - 1].isEmpty();
         int width = trailingDelimiter ? cellsPerRow - 1 : cellsPerRow;
-        if (allNumeric(names)) {
+        if (allNumeric(java.util.Arrays.copyOf(names, width))) {
             throw new InputException(in.here(0), null, "missing header line: the first line holds numbers "
                     + "(add a line naming the columns, e.g. 'delay (ps)" + in.delimiter() + "1 nJ" + in.delimiter() + "2 nJ')");
         }

@@ -134,6 +134,8 @@ class TraceTableReaderTest {
                         "data.csv:3: row has 2 cells but the header at line 1 has 3"),
                 Arguments.of("missing header", "0,1,2\n1,0.5,1\n2,0.2,0.1\n",
                         "data.csv:1: missing header line: the first line holds numbers"),
+                Arguments.of("missing header, trailing delimiters", "0,1,2,\n1,0.5,1,\n2,0.2,0.1,\n",
+                        "data.csv:1: missing header line: the first line holds numbers"),
                 Arguments.of("unknown unit", "delay (pz),a\n0,1\n1,0.5\n2,0.2\n",
                         "data.csv:1:1: field 'delay (pz)': unknown time unit 'pz' in header (units: fs, ps, ns"),
                 Arguments.of("length unit in delay header", "delay (nm),a\n0,1\n1,0.5\n2,0.2\n",
