@@ -202,7 +202,11 @@ final class DelimitedLineReader implements AutoCloseable {
                     + " (write a number such as 1.5e-3, or leave the cell empty / NaN for a missing value)");
         }
         try {
-            return Double.parseDouble(t);
+            double v = Double.parseDouble(t);
+            if (Double.isInfinite(v)) {
+                throw new InputException(here(column), field, "'" + cell.strip() + "' is out of range for a double");
+            }
+            return v;
         } catch (NumberFormatException e) {
             throw new InputException(here(column), field, "'" + cell.strip() + "' is not a number");
         }

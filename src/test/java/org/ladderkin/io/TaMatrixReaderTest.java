@@ -118,4 +118,16 @@ class TaMatrixReaderTest {
         assertThat(d.labels()).containsExactly("low", "high");
         assertThat(d.traces().get(1).signal()[1]).isCloseTo(4.0, within(1e-12));
     }
+
+    @Test
+    void semicolonMatrixWithDecimalCommaAndRefusedMissingCells() throws IOException {
+        String text = "delay (ps) \\ wavelength (nm);579,5;580,5\n0;1,5;2,5\n1;0,5;1,5\n2;0,25;0,75\n";
+        Trace t = TaMatrixReader.read(write("s.csv", text), "s.csv", WINDOW);
+        assertThat(t.signal()).containsExactly(2.0, 1.0, 0.5);
+        Path missing = write("r.csv", "delay (ps) \\ wavelength (nm),580\n0,1\n1,\n2,0.2\n");
+        MatrixOptions strict = new MatrixOptions(MatrixOptions.Orientation.DETECT, 575e-9, 585e-9, Units.of("ps"), Units.of("nm"),
+                MissingValuePolicy.REJECT);
+        assertThatThrownBy(() -> TaMatrixReader.read(missing, "r.csv", strict))
+                .hasMessageStartingWith("r.csv:3:3: field 'column 2': missing value in the wavelength window");
+    }
 }

@@ -144,6 +144,8 @@ class TraceTableReaderTest {
                         "data.csv:3:1: field 'delay (ps)': missing delay"),
                 Arguments.of("infinity is not a number", "delay (ps),a\n0,1\n1,Infinity\n2,0.2\n",
                         "data.csv:3:3: field 'a': 'Infinity' is not a number"),
+                Arguments.of("overflowing number", "delay (ps),a\n0,1\n1,1e400\n2,0.2\n",
+                        "data.csv:3:3: field 'a': '1e400' is out of range for a double"),
                 Arguments.of("empty file", "# only a comment\n\n",
                         "data.csv: no data (expected a header line"),
                 Arguments.of("duplicate header", "delay (ps),a,a\n0,1,1\n1,0.5,2\n2,0.2,3\n",
