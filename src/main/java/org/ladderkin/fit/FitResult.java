@@ -53,9 +53,26 @@ public record FitResult(Status status, String message, List<ParameterEstimate> e
         autocorrelation = List.copyOf(autocorrelation);
         profiles = List.copyOf(profiles);
         warnings = List.copyOf(warnings);
+        correlation = deepCopy(Objects.requireNonNull(correlation, "correlation"));
+        residuals = residuals.stream().map(double[]::clone).toList();
+        autocorrelation = autocorrelation.stream().map(double[]::clone).toList();
         if (status != Status.CONVERGED && message.isBlank()) {
             throw new IllegalArgumentException("a " + status + " result needs a message");
         }
+    }
+
+    /** A copy of the correlation matrix (rows in the order of {@link #correlationKeys()}). */
+    @Override
+    public double[][] correlation() {
+        return deepCopy(correlation);
+    }
+
+    private static double[][] deepCopy(double[][] m) {
+        double[][] c = new double[m.length][];
+        for (int i = 0; i < m.length; i++) {
+            c[i] = m[i].clone();
+        }
+        return c;
     }
 
     /** A failed fit with its reason. */

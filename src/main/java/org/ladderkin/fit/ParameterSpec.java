@@ -78,7 +78,7 @@ public record ParameterSpec(String name, String unitSuffix, double start, double
         return new ParameterSpec(name, unitSuffix, value, Math.min(lower, value), Math.max(upper, value), true, scope, scale);
     }
 
-    /** A copy starting at {@code value} (moved inside the bounds if it sits on one). */
+    /** A copy starting at {@code value}, which must satisfy the same bound rules as any start. */
     public ParameterSpec startingAt(double value) {
         return new ParameterSpec(name, unitSuffix, value, lower, upper, fixed, scope, scale);
     }
