@@ -1,0 +1,91 @@
+package org.ladderkin.io;
+
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.ladderkin.units.Dimension;
+import org.ladderkin.units.Unit;
+import org.ladderkin.units.Units;
+
+/**
+ * Finds the unit a column header declares: {@code delay (ps)}, {@code delay [ns]}, {@code t/ps} or {@code t_ps}.
+ * A bracketed unit that is not a known unit of the wanted dimension is an error; a {@code /} or {@code _} suffix that
+ * is not a unit is taken as part of the name (so {@code pump_probe} is just a name).
+ */
+final class HeaderUnit {
+
+    private static final Pattern BRACKETED = Pattern.compile("^(.*?)\\s*[(\\[]\\s*([^()\\[\\]]*?)\\s*[)\\]]\\s*$");
+    private static final Pattern ANY_BRACKETED = Pattern.compile("[(\\[]\\s*([^()\\[\\]]*?)\\s*[)\\]]");
+    private static final Pattern SUFFIXED = Pattern.compile("^(.*?)\\s*[/_]\\s*([^/_]+?)\\s*$");
+
+    private HeaderUnit() {
+    }
+
+    /**
+     * The unit of {@code header}, or {@code fallback} when it names none (which may be null: then it is an error).
+     *
+     * @param where location of the header cell for messages
+     * @param flag  how the user gives a default on the command line, for the message
+     */
+    static Unit of(String header, Dimension dimension, Unit fallback, SourceLocation where, String flag) {
+        String h = header.strip();
+        Matcher m = BRACKETED.matcher(h);
+        if (m.matches()) {
+            String text = m.group(2);
+            Unit u = Units.find(text);
+            if (u == null || u.dimension() != dimension) {
+                throw new InputException(where, h, "unknown " + dimension.label() + " unit '" + text + "' in header (units: "
+                        + Units.accepted(dimension) + ")");
+            }
+            return u;
+        }
+        Matcher s = SUFFIXED.matcher(h);
+        if (s.matches()) {
+            Unit u = Units.find(s.group(2));
+            if (u != null && u.dimension() == dimension) {
+                return u;
+            }
+        }
+        if (fallback == null) {
+            throw new InputException(where, h, "no " + dimension.label() + " unit in header (write it like '"
+                    + exampleName(dimension) + " (" + Units.of(dimension).get(1).symbol() + ")' or give " + flag + ")");
+        }
+        return fallback;
+    }
+
+    /**
+     * Where in {@code text} a bracketed unit of {@code dimension} appears, or -1. A corner cell such as
+     * "delay (ps) \\ wavelength (nm)" says which axis runs down the first column.
+     */
+    static int position(String text, Dimension dimension) {
+        Matcher m = ANY_BRACKETED.matcher(text);
+        while (m.find()) {
+            Unit u = Units.find(m.group(1));
+            if (u != null && u.dimension() == dimension) {
+                return m.start();
+            }
+        }
+        return -1;
+    }
+
+    /** The first bracketed unit of {@code dimension} in {@code text}, or null. */
+    static Unit find(String text, Dimension dimension) {
+        Matcher m = ANY_BRACKETED.matcher(text);
+        while (m.find()) {
+            Unit u = Units.find(m.group(1));
+            if (u != null && u.dimension() == dimension) {
+                return u;
+            }
+        }
+        return null;
+    }
+
+    /** The header's name without its unit, e.g. "1 nJ" from "1 nJ" or "delay" from "delay (ps)". */
+    static String name(String header) {
+        Matcher m = BRACKETED.matcher(header.strip());
+        return m.matches() && !m.group(1).isBlank() ? m.group(1).strip() : header.strip();
+    }
+
+    private static String exampleName(Dimension dimension) {
+        return dimension == Dimension.TIME ? "delay" : dimension == Dimension.LENGTH ? "wavelength" : "value";
+    }
+}

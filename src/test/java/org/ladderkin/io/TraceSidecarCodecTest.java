@@ -1,0 +1,79 @@
+package org.ladderkin.io;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.ladderkin.fit.Dataset;
+import org.ladderkin.fit.Excitation;
+import org.ladderkin.fit.Trace;
+import org.ladderkin.io.json.JsonTree;
+import org.ladderkin.units.Photon;
+
+class TraceSidecarCodecTest {
+
+    private static final Dataset DATA = new Dataset(List.of(
+            Trace.of("low", new double[] {0, 1, 2}, new double[] {1, 0.5, 0.2}),
+            Trace.of("high", new double[] {0, 1, 2}, new double[] {2, 1, 0.3})), List.of("x.csv"));
+
+    private static Dataset apply(String json) {
+        return TraceSidecarCodec.apply(JsonTree.parse(json, "side.json"), DATA);
+    }
+
+    @Test
+    void entriesInOrderWithSharedPump() {
+        Dataset d = apply("{\"schema\":\"ladderkin.traces/1\",\"pump\":\"400 nm\",\"traces\":["
+                + "{\"pulseEnergy\":\"1 nJ\"},{\"photonFluence\":\"3e14 photons/cm²\"}]}");
+        var low = d.traces().get(0).metadata();
+        assertThat(low.excitation().orElseThrow().kind()).isEqualTo(Excitation.Kind.PULSE_ENERGY_J);
+        assertThat(low.excitation().orElseThrow().value()).isCloseTo(1e-9, within(1e-24));
+        assertThat(low.photonEnergyJ().getAsDouble()).isCloseTo(Photon.energyJ(400e-9), within(1e-30));
+        assertThat(d.traces().get(1).metadata().excitation().orElseThrow().value()).isCloseTo(3e18, within(1e3));
+    }
+
+    @Test
+    void entriesByLabelWithOwnPumpAndEnergyFluence() {
+        Dataset d = apply("{\"schema\":\"ladderkin.traces/1\",\"traces\":["
+                + "{\"label\":\"high\",\"meanOccupancy\":0.9,\"pump\":\"3.1 eV\"},"
+                + "{\"label\":\"low\",\"energyFluence\":\"0.1 mJ/cm²\",\"pump\":\"400 nm\"}]}");
+        assertThat(d.traces().get(1).metadata().excitation().orElseThrow().value()).isEqualTo(0.9);
+        double photons = 1.0 / Photon.energyJ(400e-9);
+        assertThat(d.traces().get(0).metadata().excitation().orElseThrow().value()).isCloseTo(photons, within(photons * 1e-12));
+    }
+
+    @Test
+    void rejections() {
+        assertThatThrownBy(() -> apply("{\"schema\":\"ladderkin.traces/1\",\"traces\":[{\"pulseEnergy\":\"1 nJ\"}]}"))
+                .hasMessage("side.json:1:41: field 'traces': 1 entries for 2 traces (low, high); give one entry per trace in order, or label the entries");
+        assertThatThrownBy(() -> apply("{\"schema\":\"ladderkin.traces/1\",\"traces\":[{\"label\":\"mid\",\"pulseEnergy\":\"1 nJ\"}]}"))
+                .hasMessageStartingWith("side.json:1:51: field 'traces[0].label': no trace is labelled 'mid' (traces: low, high)");
+        assertThatThrownBy(() -> apply("{\"schema\":\"ladderkin.traces/1\",\"traces\":[{\"pulseEnergy\":\"1 nJ\",\"colour\":1},{}]}"))
+                .hasMessageContaining("field 'traces[0].colour': unknown field");
+        assertThatThrownBy(() -> apply("{\"schema\":\"ladderkin.traces/1\",\"traces\":[{\"pulseEnergy\":\"1 nJ\",\"meanOccupancy\":1},{}]}"))
+                .hasMessageContaining("give only one of 'pulseEnergy' and 'meanOccupancy'");
+        assertThatThrownBy(() -> apply("{\"schema\":\"ladderkin.traces/1\",\"traces\":[{\"pulseEnergy\":\"1 ps\"},{}]}"))
+                .hasMessageContaining("field 'traces[0].pulseEnergy'");
+        assertThatThrownBy(() -> apply("{\"schema\":\"ladderkin.traces/1\",\"traces\":[{\"energyFluence\":\"1 mJ/cm²\"},{}]}"))
+                .hasMessageContaining("needs the pump photon energy");
+        assertThatThrownBy(() -> apply("{\"schema\":\"ladderkin.traces/1\",\"pump\":\"5 ps\",\"traces\":[{},{}]}"))
+                .hasMessageContaining("field 'pump': '5 ps' is neither a wavelength nor a photon energy");
+        assertThatThrownBy(() -> apply("{\"schema\":\"ladderkin.plan/1\",\"traces\":[{},{}]}"))
+                .hasMessageContaining("expected schema 'ladderkin.traces/1'");
+    }
+
+    @Test
+    void argumentsInColumnOrder() {
+        Dataset d = TraceArguments.apply(DATA, List.of("1e13 photons/cm²", "0.2 mJ/cm²"), "400nm", "--fluences");
+        assertThat(d.traces().get(0).metadata().excitation().orElseThrow().value()).isCloseTo(1e17, within(1e3));
+        double expected = 2.0 / Photon.energyJ(400e-9);
+        assertThat(d.traces().get(1).metadata().excitation().orElseThrow().value()).isCloseTo(expected, within(expected * 1e-12));
+        assertThatThrownBy(() -> TraceArguments.apply(DATA, List.of("1 nJ"), null, "--fluences"))
+                .hasMessage("--fluences: 1 values for 2 traces (low, high)");
+        assertThatThrownBy(() -> TraceArguments.apply(DATA, List.of("1 nJ", "5 ps"), null, "--fluences"))
+                .hasMessageStartingWith("--fluences: field '[2]': '5 ps' is time");
+        assertThatThrownBy(() -> TraceArguments.apply(DATA, List.of("1 nJ", "0.2 mJ/cm²"), null, "--fluences"))
+                .hasMessageContaining("add --pump 400nm");
+    }
+}
