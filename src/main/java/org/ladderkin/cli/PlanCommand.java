@@ -41,6 +41,10 @@ final class PlanCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "output folder (created if missing)")
     Path outDir;
 
+    @Option(names = "--what-if", paramLabel = "CHANGE", description = {"also plan with one input changed and compare "
+            + "(repeatable): refresh=static|stirred|flowing:<flow>:<cell volume>, rate=<frequency>"})
+    java.util.List<String> whatIfs = new java.util.ArrayList<>();
+
     @Option(names = "--quiet", description = "no progress bar")
     boolean quiet;
 
@@ -51,8 +55,16 @@ final class PlanCommand implements Callable<Integer> {
         printSummary(inputs, out);
         CampaignPlan plan = Planner.plan(inputs, quiet ? Planner.Progress.NONE : new ProgressBar(spec.commandLine().getErr()));
         printSettings(plan, out);
+        java.util.List<org.ladderkin.plan.WhatIf> variants = whatIfs.stream()
+                .map(w -> org.ladderkin.plan.WhatIf.of(inputs, w)).toList();
+        for (var v : variants) {
+            out.println(String.format(java.util.Locale.ROOT, "What if %s: rate %s, residual %.3g, charged %.3g, worst risk %s",
+                    v.change(), fmt(v.plan().chosenRate().repetitionRateHz(), Dimension.FREQUENCY), v.plan().chosenRate().residual(),
+                    v.plan().chosenRate().charged(), v.plan().risks().stream().map(r -> r.verdict())
+                            .reduce(org.ladderkin.observe.Verdict.PASS, org.ladderkin.observe.Verdict::worst)));
+        }
         if (outDir != null) {
-            AtomicFiles.writeString(outDir.resolve("report.html"), PlanReport.html(plan));
+            AtomicFiles.writeString(outDir.resolve("report.html"), PlanReport.html(plan, variants));
             PlanOutputs.write(plan, outDir);
             out.println("wrote " + outDir.resolve("report.html") + ", plan-resolved.json, traces.csv");
         }

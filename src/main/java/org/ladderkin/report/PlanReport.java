@@ -75,6 +75,11 @@ public final class PlanReport {
 
     /** The complete HTML page. */
     public static String html(CampaignPlan plan) {
+        return html(plan, List.of());
+    }
+
+    /** The complete HTML page with what-if variants side by side. */
+    public static String html(CampaignPlan plan, List<org.ladderkin.plan.WhatIf> whatIfs) {
         HtmlPage page = new HtmlPage("Campaign plan — " + plan.inputs().title());
         if (!plan.inputs().lab().isEmpty()) {
             page.block("note", plan.inputs().lab());
@@ -93,6 +98,8 @@ public final class PlanReport {
                 + "series; residual excitation from earlier pulses included.");
         page.charts(charts(plan), 520, 340);
         designSection(page, plan);
+        multiplicationSection(page, plan);
+        whatIfSection(page, plan, whatIfs);
         page.heading(2, "Pump wavelengths compared");
         page.table(List.of("wavelength", "photon energy", "σ (cm²)", "absorbance (OD)", "ħω/E₁S", "max ⟨N⟩", "score", "reasons"),
                 plan.wavelengths().stream().map(w -> List.of(q(w.wavelengthM(), Dimension.LENGTH),
@@ -210,6 +217,43 @@ public final class PlanReport {
         page.paragraph(String.format(Locale.ROOT, "Chosen design: %d fluences from ⟨N⟩ = %.3g to %.3g, %d delay points per decade.",
                 d.best().nValues().length, d.best().nValues()[0], d.best().nValues()[d.best().nValues().length - 1],
                 d.best().pointsPerDecade()));
+    }
+
+    private static void multiplicationSection(HtmlPage page, CampaignPlan plan) {
+        if (plan.multiplication().isEmpty()) {
+            return;
+        }
+        page.heading(2, "Carrier multiplication forecast");
+        page.paragraph("Low-fluence (⟨N_abs⟩ = 0.05) early/late ratio A/B at each requested photon energy, with an assumed "
+                + "threshold-linear quantum yield (E_th = 2.5·E₁S, ε_eh = 1.5·E₁S; replace with your expectation). "
+                + "'Apparent' ratios subtract the signal just before the pulse, as negative delays show it.");
+        page.table(List.of("photon energy (eV)", "ħω/E₁S", "assumed η", "ideal A/B", "A/B at chosen rate", "charged at chosen rate",
+                        "A/B at full rate", "charged at full rate", "pump available"),
+                plan.multiplication().stream().map(m -> List.of(
+                        String.format(Locale.ROOT, "%.3f", m.photonEnergyJ() / PhysicalConstants.ELECTRONVOLT_J),
+                        num(m.energyOverGap()), num(m.eta()), num(m.idealRatio()), num(m.apparentRatioChosen()),
+                        num(m.chargedChosen()), num(m.apparentRatioFullRate()), num(m.chargedFullRate()),
+                        m.offered() ? "yes" : "NO")).toList());
+    }
+
+    private static void whatIfSection(HtmlPage page, CampaignPlan plan, List<org.ladderkin.plan.WhatIf> whatIfs) {
+        if (whatIfs.isEmpty()) {
+            return;
+        }
+        page.heading(2, "What if");
+        List<List<String>> rows = new ArrayList<>();
+        rows.add(whatIfRow("as planned", plan));
+        for (var w : whatIfs) {
+            rows.add(whatIfRow(w.change(), w.plan()));
+        }
+        page.table(List.of("variant", "rate", "residual", "charged", "steady rise (K)", "τ₂ rel. error", "worst risk"), rows);
+    }
+
+    private static List<String> whatIfRow(String label, CampaignPlan p) {
+        Verdict worst = p.risks().stream().map(Risk::verdict).reduce(Verdict.PASS, Verdict::worst);
+        String tau2 = p.design() == null ? "—" : pct(p.design().best().error(DesignSearch.Parameter.TAU_BIEXCITON));
+        return List.of(label, q(p.chosenRate().repetitionRateHz(), Dimension.FREQUENCY), num(p.chosenRate().residual()),
+                num(p.chosenRate().charged()), num(p.chosenRate().steadyRiseK()), tau2, worst.name());
     }
 
     private static String pct(double relative) {

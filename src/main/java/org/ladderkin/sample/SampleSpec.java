@@ -111,6 +111,11 @@ public record SampleSpec(String name, Material material, Size size, double sizeD
     }
 
     /** This description with a different given cross-section (the instance is not changed). */
+    /** A copy with another refresh mode (the instance is not changed). */
+    public SampleSpec withRefresh(Refresh r) {
+        return new SampleSpec(name, material, size, sizeDispersion, amount, pathLengthM, matrix, r, spectrum, givenCrossSection);
+    }
+
     public SampleSpec withGivenCrossSection(Optional<GivenCrossSection> given) {
         return new SampleSpec(name, material, size, sizeDispersion, amount, pathLengthM, matrix, refresh, spectrum, given);
     }
