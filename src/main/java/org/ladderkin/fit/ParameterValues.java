@@ -16,6 +16,20 @@ public final class ParameterValues {
         this.values = values;
     }
 
+    /** Shared values by key, in the given order, e.g. to evaluate a model at known parameters. */
+    public static ParameterValues shared(java.util.List<String> keys, double[] values) {
+        if (keys.size() != values.length) {
+            throw new IllegalArgumentException(keys.size() + " keys but " + values.length + " values");
+        }
+        Map<String, Integer> index = new java.util.LinkedHashMap<>();
+        double[][] v = new double[values.length][];
+        for (int i = 0; i < values.length; i++) {
+            index.put(keys.get(i), i);
+            v[i] = new double[] {values[i]};
+        }
+        return new ParameterValues(index, v);
+    }
+
     /** Index of the parameter with key {@code key}, or -1 when the problem has no such parameter. */
     public int indexOf(String key) {
         Integer i = index.get(key);

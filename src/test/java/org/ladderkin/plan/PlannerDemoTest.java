@@ -1,0 +1,122 @@
+package org.ladderkin.plan;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Path;
+import java.util.Comparator;
+import java.util.List;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+import org.ladderkin.excite.Excitation;
+import org.ladderkin.excite.GaussianBeam;
+import org.ladderkin.excite.Pulse;
+import org.ladderkin.io.PlanCodec;
+import org.ladderkin.kinetics.KineticModel;
+import org.ladderkin.kinetics.LadderKinetics;
+import org.ladderkin.kinetics.train.PulseExcitation;
+import org.ladderkin.kinetics.train.SteadyState;
+import org.ladderkin.observe.EarlyLate;
+import org.ladderkin.observe.Heating;
+import org.ladderkin.observe.PulseTrainRisks;
+import org.ladderkin.observe.Risk;
+import org.ladderkin.observe.Verdict;
+
+/**
+ * Builds the plan of every demo and checks its numbers against the observables computed here directly from the
+ * engine, the excitation geometry and the heating formulas — never against files the program wrote.
+ */
+class PlannerDemoTest {
+
+    static final Path HOME = Path.of(System.getProperty("ladderkin.home", "."));
+
+    static CampaignPlan plan(String file) {
+        return Planner.plan(PlanCodec.read(HOME.resolve("experiments-plan").resolve(file)), Planner.Progress.NONE);
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"cdse-auger-1khz.plan.json", "pbse-multiplication-80mhz.plan.json"})
+    void demoPlanAgreesWithDirectlyComputedObservables(String file) {
+        CampaignPlan plan = plan(file);
+        PlanInputs in = plan.inputs();
+        int g = (int) in.sample().material().electronDegeneracy().value();
+        KineticModel km = plan.model().kineticModel(g);
+        double period = 1 / plan.chosenRate().repetitionRateHz();
+        WavelengthOption w = plan.chosenWavelength();
+
+        // each setting of the series gives its target ⟨N⟩ when the excitation is computed afresh
+        for (FluencePoint f : plan.fluences()) {
+            Excitation ex = Excitation.of(in.sample(), new Pulse(f.pulseEnergyJ(), w.wavelengthM(),
+                    plan.chosenRate().repetitionRateHz()), new GaussianBeam(in.laser().pumpRadiusM()),
+                    new GaussianBeam(in.laser().probeRadiusM()), true);
+            assertThat(ex.nAvgProbeWeighted()).isCloseTo(f.nProbeAveraged(), org.assertj.core.data.Percentage.withPercentage(1e-6));
+            assertThat(ex.nAvgPeak()).isCloseTo(f.nPeak(), org.assertj.core.data.Percentage.withPercentage(1e-6));
+            assertThat(Math.pow(10, f.attenuatorOd()) * f.pulseEnergyJ())
+                    .isCloseTo(in.laser().maxPulseEnergyJ(), org.assertj.core.data.Percentage.withPercentage(1e-9));
+        }
+
+        // predicted traces: the engine's steady state at the chosen rate, ΔA = −A₀·bleach
+        double a0 = in.sample().absorbanceAt(in.sample().firstExcitonWavelengthM());
+        Predictions p = plan.predictions();
+        int last = plan.fluences().size() - 1;
+        PulseExcitation top = new PulseExcitation.Poisson(plan.fluences().get(last).nProbeAveraged());
+        LadderKinetics kin = LadderKinetics.forPulses(km, top);
+        SteadyState ss = kin.steadyState(top, period, false);
+        double[] bleach = kin.trace(ss.afterPulse(), p.delaysS()).bleach();
+        for (int m = 0; m < bleach.length; m += 7) {
+            assertThat(p.deltaAOd().get(last)[m]).isCloseTo(-a0 * bleach[m], org.assertj.core.data.Offset.offset(1e-12));
+        }
+
+        // the chosen repetition rate: residual recomputed, and it is the fastest option that does not fail
+        double nTop = Math.min(5, Math.min(w.maxProbeAveragedN(), Planner.MODEL_VALIDITY_N));
+        PulseExcitation rateProbe = new PulseExcitation.Poisson(nTop);
+        double residual = PulseTrainRisks.residualBeforePulse(LadderKinetics.forPulses(km, rateProbe), rateProbe, period);
+        assertThat(plan.chosenRate().residual()).isCloseTo(residual, org.assertj.core.data.Offset.offset(1e-12));
+        List<RateOption> passing = plan.rates().stream().filter(r -> r.verdict() != Verdict.FAIL).toList();
+        if (!passing.isEmpty()) {
+            assertThat(plan.chosenRate()).isEqualTo(passing.stream().max(Comparator.comparingDouble(RateOption::repetitionRateHz)).get());
+        } else {
+            assertThat(plan.chosenRate().repetitionRateHz())
+                    .isEqualTo(plan.rates().stream().mapToDouble(RateOption::repetitionRateHz).min().getAsDouble());
+        }
+
+        // heating: the liquid conduction formula on the absorbed power at the highest setting
+        HeatBudget h = plan.heat();
+        Excitation exTop = Excitation.of(in.sample(), new Pulse(plan.fluences().get(last).pulseEnergyJ(), w.wavelengthM(),
+                plan.chosenRate().repetitionRateHz()), new GaussianBeam(in.laser().pumpRadiusM()),
+                new GaussianBeam(in.laser().probeRadiusM()), true);
+        var matrix = in.sample().spec().matrix().orElseThrow();
+        var medium = new org.ladderkin.observe.ThermalMedium(matrix.densityKgPerM3().value(), matrix.specificHeatJPerKgK().value(),
+                matrix.thermalConductivityWPerMK().value(), matrix.boilingPointK().value());
+        double rise = Heating.steadyRiseLiquidK(exTop.absorbedPowerW() * h.heatFraction(), in.laser().pumpRadiusM(),
+                in.sample().spec().pathLengthM(), HeatBudget.WALL_DISTANCE_M, medium);
+        assertThat(h.steadyRiseK()).isCloseTo(rise, org.assertj.core.data.Percentage.withPercentage(1e-9));
+
+        // every risk's verdict follows from its number and limit where the rule is a plain limit
+        for (Risk r : plan.risks()) {
+            if (r.name().equals("photocharging") || r.name().startsWith("residual excitation")) {
+                assertThat(r.verdict()).isEqualTo(Verdict.against(r.value(), r.limit(), 0.5));
+            }
+        }
+        assertThat(plan.cautions()).anyMatch(c -> c.contains("laser safety officer"));
+        assertThat(plan.cautions()).anyMatch(c -> c.contains("cadmium and lead"));
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"pbse-multiplication-80mhz.plan.json"})
+    void multiplicationForecastMatchesTheEarlyLateObservable(String file) {
+        CampaignPlan plan = plan(file);
+        KineticModel km = plan.model().kineticModel((int) plan.inputs().sample().material().electronDegeneracy().value());
+        var windows = plan.delayPlans().get(0).windows();
+        assertThat(plan.multiplication()).hasSize(2);
+        for (MultiplicationPrediction m : plan.multiplication()) {
+            double direct = EarlyLate.lowFluenceRatio(km, MultiplicationForecast.LOW_FLUENCE_N, m.eta(), windows.earlyS(),
+                    windows.lateS());
+            assertThat(m.idealRatio()).isCloseTo(direct, org.assertj.core.data.Offset.offset(1e-12));
+            // the 80 MHz trap: without pulse picking the apparent ratio is inflated by residual excitation and trions
+            assertThat(m.apparentRatioFullRate()).isGreaterThan(m.idealRatio() * 1.1);
+            assertThat(m.chargedFullRate()).isGreaterThan(m.chargedChosen());
+        }
+        assertThat(plan.chosenRate().repetitionRateHz()).isLessThan(plan.inputs().laser().repetitionRateHz());
+        assertThat(plan.risks()).anyMatch(r -> r.name().startsWith("false multiplication"));
+    }
+}
