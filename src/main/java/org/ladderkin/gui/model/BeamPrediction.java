@@ -105,7 +105,7 @@ public final class BeamPrediction implements PredictionSource {
             periodNs[i] = d[i] / laser.repetitionRateHz() * 1e9;
         }
         List<ChartSpec.Series> series = new ArrayList<>();
-        series.add(new ChartSpec.Series("time between pulses", d, periodNs, d.length == 1));
+        series.add(new ChartSpec.Series("time between pulses", d, periodNs, true));
         double[] span = d.length == 1 ? d : new double[] {d[0], d[d.length - 1]};
         for (int i = 0; i < plan.instruments().size(); i++) {
             Instrument inst = plan.instruments().get(i);

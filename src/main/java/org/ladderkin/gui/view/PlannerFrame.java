@@ -123,6 +123,7 @@ public final class PlannerFrame extends JFrame {
         forms.addTab("Goals & limits", scroll(goalsForm));
 
         JTabbedPane lower = new JTabbedPane();
+        lower.setName("lower");
         lower.addTab("Risks", new JScrollPane(risks));
         lower.addTab("Derived numbers", scroll(derived));
         JSplitPane centre = new JSplitPane(JSplitPane.VERTICAL_SPLIT, charts, lower);
@@ -243,7 +244,7 @@ public final class PlannerFrame extends JFrame {
         cautions.show(prediction.cautions());
         deliveredCount++;
         double sinceEditMs = (System.nanoTime() - editNanos) / 1e6;
-        predictionStatus.setText(String.format(java.util.Locale.ROOT, "updated %.0f ms after the edit (computed in %.1f ms)",
+        predictionStatus.setText(String.format(java.util.Locale.ROOT, "charts updated %.0f ms after the change (computed in %.1f ms)",
                 sinceEditMs, result.computeNanos() / 1e6));
         predictionStatus.setToolTipText("Prediction basis: " + prediction.basis());
         for (Action a : chartActions) {

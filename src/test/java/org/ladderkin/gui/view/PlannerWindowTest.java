@@ -32,6 +32,7 @@ import org.ladderkin.gui.app.Theme;
 import org.ladderkin.gui.model.BeamPrediction;
 import org.ladderkin.gui.model.PlanEditor;
 import org.ladderkin.gui.model.RecoveryStore;
+import org.ladderkin.io.AtomicFiles;
 import org.ladderkin.report.ChartSpec;
 
 /**
@@ -177,7 +178,7 @@ class PlannerWindowTest {
             return img;
         });
         Path out = SCREENSHOTS.resolve(name);
-        ImageIO.write(image, "png", out.toFile());
+        AtomicFiles.write(out, o -> ImageIO.write(image, "png", o));
         return out;
     }
 }
