@@ -49,10 +49,12 @@ import org.ladderkin.gui.model.Autosaver;
 import org.ladderkin.gui.model.PlanEditor;
 import org.ladderkin.gui.model.PlanForms;
 import org.ladderkin.gui.model.Prediction;
+import org.ladderkin.gui.model.PredictionReport;
 import org.ladderkin.gui.model.PredictionSource;
 import org.ladderkin.gui.model.RecomputeService;
 import org.ladderkin.gui.model.RecoveryStore;
 import org.ladderkin.gui.model.UnsavedChanges;
+import org.ladderkin.io.AtomicFiles;
 import org.ladderkin.io.InputException;
 
 /**
@@ -88,11 +90,13 @@ public final class PlannerFrame extends JFrame {
     private final JLabel fileStatus = new JLabel(" ");
     private final JSplitPane mainSplit;
     private final JMenu recentMenu = new JMenu("Open Recent");
-    private final List<Action> chartActions = new ArrayList<>();
+    private final List<Action> exportActions = new ArrayList<>();
     private Action undoAction;
     private Action redoAction;
     private String instrumentShape = "";
     private Prediction prediction;
+    private org.ladderkin.plan.PlanInputs predictedFor;
+    private org.ladderkin.plan.PlanInputs requested;
     private long editNanos;
     private long deliveredCount;
 
@@ -226,6 +230,7 @@ public final class PlannerFrame extends JFrame {
         if (change != PlanEditor.Change.SAVED) {
             editor.lastValid().ifPresent(inputs -> {
                 editNanos = System.nanoTime();
+                requested = inputs;
                 recompute.request(inputs);
             });
         }
@@ -238,6 +243,7 @@ public final class PlannerFrame extends JFrame {
             return;
         }
         prediction = result.prediction();
+        predictedFor = requested;
         charts.show(prediction.charts());
         risks.show(prediction.risks());
         derived.show(prediction.derived());
@@ -247,7 +253,7 @@ public final class PlannerFrame extends JFrame {
         predictionStatus.setText(String.format(java.util.Locale.ROOT, "charts updated %.0f ms after the change (computed in %.1f ms)",
                 sinceEditMs, result.computeNanos() / 1e6));
         predictionStatus.setToolTipText("Prediction basis: " + prediction.basis());
-        for (Action a : chartActions) {
+        for (Action a : exportActions) {
             a.setEnabled(true);
         }
     }
@@ -363,6 +369,29 @@ public final class PlannerFrame extends JFrame {
         }
     }
 
+    private void exportReport() {
+        if (prediction == null || predictedFor == null) {
+            return;
+        }
+        JFileChooser chooser = new JFileChooser(prefs.lastDirectory().map(Path::toFile).orElse(null));
+        chooser.setFileFilter(new FileNameExtensionFilter("HTML page", "html"));
+        chooser.setSelectedFile(new File(editor.displayName().replaceAll("(\\.plan)?\\.json$", "") + "-planner.html"));
+        if (chooser.showSaveDialog(this) != JFileChooser.APPROVE_OPTION) {
+            return;
+        }
+        Path target = chooser.getSelectedFile().toPath();
+        if (!target.getFileName().toString().endsWith(".html")) {
+            target = target.resolveSibling(target.getFileName() + ".html");
+        }
+        String source = editor.file().map(Path::toString).orElse("untitled plan");
+        try {
+            AtomicFiles.writeString(target, PredictionReport.html(predictedFor, source, prediction));
+            predictionStatus.setText("exported " + target.getFileName());
+        } catch (IOException e) {
+            error("Cannot export the report", target + ": " + e.getMessage());
+        }
+    }
+
     private void themeSelected(Theme theme) {
         theme.switchTo();
         prefs.theme(theme);
@@ -432,10 +461,14 @@ public final class PlannerFrame extends JFrame {
         for (ChartExport.Format f : ChartExport.Format.values()) {
             Action a = action("Selected chart as " + f.name() + "…", null, () -> exportChart(f));
             a.setEnabled(false);
-            chartActions.add(a);
-            export.add(a);
+            exportActions.add(a);
+            export.add(a).setName("export:" + f.name());
         }
         file.add(export);
+        Action report = action("Export Report (HTML)…", KeyStroke.getKeyStroke(KeyEvent.VK_E, menuKey), this::exportReport);
+        report.setEnabled(false);
+        exportActions.add(report);
+        file.add(report);
         file.addSeparator();
         file.add(action("Quit", KeyStroke.getKeyStroke(KeyEvent.VK_Q, menuKey), this::quit));
         bar.add(file);

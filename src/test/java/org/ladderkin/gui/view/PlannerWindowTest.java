@@ -52,6 +52,7 @@ class PlannerWindowTest {
     @TempDir
     Path dir;
     Preferences prefsNode;
+    GuiPrefs prefs;
     FrameFixture window;
     PlannerFrame frame;
     Path plan;
@@ -67,7 +68,7 @@ class PlannerWindowTest {
         plan = dir.resolve("demo.plan.json");
         Files.copy(DEMO, plan);
         prefsNode = Preferences.userRoot().node("org/ladderkin/gui-test/" + UUID.randomUUID());
-        GuiPrefs prefs = new GuiPrefs(prefsNode);
+        prefs = new GuiPrefs(prefsNode);
         frame = GuiActionRunner.execute(() -> {
             Theme.LIGHT.install();
             PlannerFrame f = new PlannerFrame(prefs, new RecoveryStore(dir.resolve("recovery")), new BeamPrediction());
@@ -144,6 +145,44 @@ class PlannerWindowTest {
         assertThat(window.panel("cautions").target().isShowing()).isTrue();
         window.table("risks").requireRowCount(2);
         assertThat(window.table("risks").valueAt(org.assertj.swing.data.TableCell.row(0).column(0))).isEqualTo("pass");
+    }
+
+    @Test
+    void closingWithUnsavedChangesAsksAndCancelKeepsTheWindow() {
+        window.tabbedPane("forms").selectTab("Laser & geometry");
+        window.textBox("laser.pumpRadius").deleteText().enterText("120 um");
+        window.close();
+        window.optionPane().requireTitle("Unsaved changes").buttonWithText("Cancel").click();
+        assertThat(frame.isShowing()).isTrue();
+        window.close();
+        window.optionPane().buttonWithText("Don't Save").click();
+        waitFor("the window to close", () -> !GuiActionRunner.execute(() -> frame.isDisplayable()));
+        assertThat(prefs.bounds()).as("window bounds remembered").isPresent();
+        assertThat(prefs.formsWidth()).isPositive();
+    }
+
+    @Test
+    void theThemeSwitchIsAppliedAndRemembered() {
+        window.menuItem("theme:DARK").click();
+        assertThat(GuiActionRunner.execute(() -> javax.swing.UIManager.getLookAndFeel().getName())).contains("Dark");
+        assertThat(prefs.theme()).isEqualTo(Theme.DARK);
+        assertThat(GuiActionRunner.execute(() -> javax.swing.UIManager.getColor("Ladderkin.verdict.pass")))
+                .as("theme keys from FlatDarkLaf.properties").isNotNull();
+        window.menuItem("theme:LIGHT").click();
+        assertThat(prefs.theme()).isEqualTo(Theme.LIGHT);
+    }
+
+    @Test
+    void theSelectedChartIsExportedAsCsvThroughTheMenu() throws Exception {
+        window.menuItem("export:CSV").click();
+        var chooser = window.fileChooser();
+        chooser.setCurrentDirectory(dir.toFile());
+        chooser.fileNameTextBox().setText("fluence");
+        chooser.approve();
+        Path csv = dir.resolve("fluence.csv");
+        waitFor("the export", () -> Files.exists(csv));
+        String expected = GuiActionRunner.execute(() -> org.ladderkin.gui.chart.ChartCsv.of(frame.prediction().charts().get(0)));
+        assertThat(Files.readString(csv)).isEqualTo(expected);
     }
 
     private double lastEnergyNj() {
