@@ -64,8 +64,11 @@ import org.ladderkin.io.InputException;
  */
 public final class PlannerFrame extends JFrame {
 
-    /** Wait after the last keystroke before recomputing (ms). */
-    static final int DEBOUNCE_MS = 150;
+    /**
+     * Wait after the last keystroke before recomputing (ms): long enough that typing "1 kHz" costs one computation,
+     * short enough that the charts follow within about 150 ms of the last keystroke.
+     */
+    static final int DEBOUNCE_MS = 100;
     /** How often unsaved changes are copied to the recovery folder (ms). */
     static final int AUTOSAVE_MS = 20_000;
     private static final String TITLE = "ladderkin planner";
