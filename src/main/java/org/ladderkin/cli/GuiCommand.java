@@ -41,7 +41,14 @@ final class GuiCommand implements Callable<Integer> {
             spec.commandLine().getErr().flush();
             return ExitCodes.BAD_INPUT;
         }
-        PlannerApp.runUntilClosed(plan);
+        try {
+            PlannerApp.runUntilClosed(plan);
+        } catch (java.awt.AWTError | java.awt.HeadlessException e) {
+            // DISPLAY is set but no X server answers
+            spec.commandLine().getErr().println("ladderkin: gui: cannot open a window: " + e.getMessage());
+            spec.commandLine().getErr().flush();
+            return ExitCodes.BAD_INPUT;
+        }
         return ExitCodes.OK;
     }
 

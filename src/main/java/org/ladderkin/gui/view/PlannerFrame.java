@@ -133,6 +133,9 @@ public final class PlannerFrame extends JFrame {
         lower.setName("lower");
         lower.addTab("Risks", new JScrollPane(risks));
         lower.addTab("Derived numbers", scroll(derived));
+        // the split starts at the preferred heights: charts get most of the room
+        charts.setPreferredSize(new java.awt.Dimension(760, 540));
+        lower.setPreferredSize(new java.awt.Dimension(760, 190));
         JSplitPane centre = new JSplitPane(JSplitPane.VERTICAL_SPLIT, charts, lower);
         centre.setResizeWeight(0.72);
         mainSplit = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, forms, centre);
