@@ -56,6 +56,8 @@ import org.ladderkin.gui.model.RecoveryStore;
 import org.ladderkin.gui.model.UnsavedChanges;
 import org.ladderkin.io.AtomicFiles;
 import org.ladderkin.io.InputException;
+import org.ladderkin.plan.PlanInputs;
+import org.ladderkin.report.ChartSpec;
 
 /**
  * The planner window: plan forms on the left, the live charts in the centre, risks and derived numbers below, the
@@ -98,8 +100,8 @@ public final class PlannerFrame extends JFrame {
     private Action redoAction;
     private String instrumentShape = "";
     private Prediction prediction;
-    private org.ladderkin.plan.PlanInputs predictedFor;
-    private org.ladderkin.plan.PlanInputs requested;
+    private PlanInputs predictedFor;
+    private PlanInputs requested;
     private long editNanos;
     private long deliveredCount;
 
@@ -356,7 +358,7 @@ public final class PlannerFrame extends JFrame {
     }
 
     private void exportChart(ChartExport.Format format) {
-        Optional<org.ladderkin.report.ChartSpec> spec = charts.selected();
+        Optional<ChartSpec> spec = charts.selected();
         if (spec.isEmpty()) {
             return;
         }
