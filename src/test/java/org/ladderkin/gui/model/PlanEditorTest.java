@@ -217,7 +217,7 @@ class PlanEditorTest {
     @Test
     void restoringARecoveredDocumentCountsAsUnsaved() {
         var doc = editor.document();
-        doc.with("laser").put("repetitionRate", "3 kHz");
+        ((com.fasterxml.jackson.databind.node.ObjectNode) doc.get("laser")).put("repetitionRate", "3 kHz");
         editor.restore(doc, planFile);
         assertThat(editor.isDirty()).isTrue();
         assertThat(editor.text(REP_RATE)).isEqualTo("3 kHz");

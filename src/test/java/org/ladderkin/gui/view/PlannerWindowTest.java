@@ -150,7 +150,7 @@ class PlannerWindowTest {
     @Test
     void aRecoveryCopyIsOfferedAndRestored() throws Exception {
         var doc = GuiActionRunner.execute(() -> frame.editor().document());
-        doc.with("laser").put("pumpRadius", "111 µm");
+        ((com.fasterxml.jackson.databind.node.ObjectNode) doc.get("laser")).put("pumpRadius", "111 µm");
         new RecoveryStore(dir.resolve("recovery")).write(doc, plan, java.time.Instant.now());
         javax.swing.SwingUtilities.invokeLater(frame::offerRecovery);
         press(window.optionPane().requireTitle("Restore unsaved changes").yesButton());
