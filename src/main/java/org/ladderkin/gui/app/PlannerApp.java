@@ -32,7 +32,6 @@ public final class PlannerApp {
      */
     public static void runUntilClosed(Path plan) throws InterruptedException {
         System.setProperty("awt.useSystemAAFontSettings", System.getProperty("awt.useSystemAAFontSettings", "on"));
-        System.setProperty("flatlaf.uiScale.allowScaleDown", "true");
         GuiPrefs prefs = GuiPrefs.user();
         CountDownLatch closed = new CountDownLatch(1);
         try {
