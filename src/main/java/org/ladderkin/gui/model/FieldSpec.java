@@ -1,0 +1,232 @@
+package org.ladderkin.gui.model;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.TextNode;
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.Set;
+import org.ladderkin.units.Dimension;
+import org.ladderkin.units.Quantity;
+import org.ladderkin.units.QuantityFormatException;
+
+/**
+ * One form field: what it is called, where its text lives in the plan document and how to check it while the user
+ * types. Forms are tables of these, so adapting a form to a changed plan schema means editing a table.
+ *
+ * @param label     what the form shows next to the field
+ * @param path      where the value lives in the plan document
+ * @param kind      how text maps to JSON
+ * @param dimension what a quantity measures (for {@link Kind#QUANTITY} and {@link Kind#QUANTITY_LIST}), else null
+ * @param choices   allowed words (for {@link Kind#CHOICE} and {@link Kind#KEY_SET}), else empty
+ * @param optional  a blank field removes the key from the document instead of storing ""
+ * @param help      one sentence for the tooltip
+ */
+public record FieldSpec(String label, JsonPath path, Kind kind, Dimension dimension, List<String> choices,
+                        boolean optional, String help) {
+
+    /** How the text of a field maps to JSON. */
+    public enum Kind {
+        /** Free text, stored as a JSON string. */
+        TEXT,
+        /** A quantity with a unit ("50 nJ"), stored as a string. */
+        QUANTITY,
+        /** Comma-separated quantities ("400 nm, 515 nm"), stored as an array of strings. */
+        QUANTITY_LIST,
+        /** Comma-separated whole numbers ≥ 1 ("1, 2, 5"), stored as an array of numbers. */
+        INTEGER_LIST,
+        /** A fraction in [0, 1], written "6 %" or "0.06", stored as a string. */
+        FRACTION,
+        /** One word from {@link #choices()}, stored as a string. */
+        CHOICE,
+        /** A set of words from {@link #choices()}, stored as an array of strings; text is comma-separated. */
+        KEY_SET
+    }
+
+    public FieldSpec {
+        Objects.requireNonNull(label, "label");
+        Objects.requireNonNull(path, "path");
+        Objects.requireNonNull(kind, "kind");
+        choices = List.copyOf(choices);
+        help = help == null ? "" : help;
+        if ((kind == Kind.QUANTITY || kind == Kind.QUANTITY_LIST) && dimension == null) {
+            throw new IllegalArgumentException("quantity field '" + path + "' needs a dimension");
+        }
+        if ((kind == Kind.CHOICE || kind == Kind.KEY_SET) && choices.isEmpty()) {
+            throw new IllegalArgumentException("choice field '" + path + "' needs choices");
+        }
+    }
+
+    /** A required quantity field. */
+    public static FieldSpec quantity(String label, String path, Dimension dimension, String help) {
+        return new FieldSpec(label, JsonPath.of(path), Kind.QUANTITY, dimension, List.of(), false, help);
+    }
+
+    /** A quantity field that may be left blank (the key is then removed). */
+    public static FieldSpec optionalQuantity(String label, String path, Dimension dimension, String help) {
+        return new FieldSpec(label, JsonPath.of(path), Kind.QUANTITY, dimension, List.of(), true, help);
+    }
+
+    public static FieldSpec quantityList(String label, String path, Dimension dimension, String help) {
+        return new FieldSpec(label, JsonPath.of(path), Kind.QUANTITY_LIST, dimension, List.of(), false, help);
+    }
+
+    public static FieldSpec integerList(String label, String path, boolean optional, String help) {
+        return new FieldSpec(label, JsonPath.of(path), Kind.INTEGER_LIST, null, List.of(), optional, help);
+    }
+
+    public static FieldSpec text(String label, String path, boolean optional, String help) {
+        return new FieldSpec(label, JsonPath.of(path), Kind.TEXT, null, List.of(), optional, help);
+    }
+
+    public static FieldSpec fraction(String label, String path, boolean optional, String help) {
+        return new FieldSpec(label, JsonPath.of(path), Kind.FRACTION, null, List.of(), optional, help);
+    }
+
+    public static FieldSpec choice(String label, String path, List<String> choices, String help) {
+        return new FieldSpec(label, JsonPath.of(path), Kind.CHOICE, null, choices, false, help);
+    }
+
+    public static FieldSpec keySet(String label, String path, List<String> choices, String help) {
+        return new FieldSpec(label, JsonPath.of(path), Kind.KEY_SET, null, choices, false, help);
+    }
+
+    /** The same field, but a blank value removes the key (the instance is not changed). */
+    public FieldSpec asOptional() {
+        return new FieldSpec(label, path, kind, dimension, choices, true, help);
+    }
+
+    /** The text this field shows for the document: "" when absent, list items joined by ", ". */
+    public String read(JsonNode document) {
+        JsonNode n = path.get(document);
+        if (n == null || n.isNull()) {
+            return "";
+        }
+        if (n.isArray()) {
+            List<String> parts = new ArrayList<>();
+            n.forEach(item -> parts.add(item.isValueNode() ? item.asText() : item.toString()));
+            return String.join(", ", parts);
+        }
+        return n.isValueNode() ? n.asText() : n.toString();
+    }
+
+    /**
+     * The JSON to store for {@code text}, or empty when the key should be removed (a blank optional field).
+     * Text that does not parse is stored as typed so that the document keeps what the user wrote; the plan reader
+     * then reports it at this path.
+     */
+    public Optional<JsonNode> toJson(String text) {
+        String t = text.strip();
+        if (t.isEmpty() && optional) {
+            return Optional.empty();
+        }
+        JsonNodeFactory f = JsonNodeFactory.instance;
+        return Optional.of(switch (kind) {
+            case TEXT, QUANTITY, FRACTION, CHOICE -> TextNode.valueOf(t);
+            case QUANTITY_LIST, KEY_SET -> {
+                ArrayNode a = f.arrayNode();
+                splitList(t).forEach(a::add);
+                yield a;
+            }
+            case INTEGER_LIST -> {
+                ArrayNode a = f.arrayNode();
+                for (String part : splitList(t)) {
+                    try {
+                        a.add(Integer.parseInt(part));
+                    } catch (NumberFormatException e) {
+                        a.add(part);
+                    }
+                }
+                yield a;
+            }
+        });
+    }
+
+    /** The problem with {@code text} for this field alone, or empty when it reads well. */
+    public Optional<String> check(String text) {
+        String t = text.strip();
+        if (t.isEmpty()) {
+            return optional ? Optional.empty() : Optional.of("required (e.g. " + example() + ")");
+        }
+        try {
+            switch (kind) {
+                case TEXT -> { }
+                case QUANTITY -> positiveOrZero(Quantity.parse(t, dimension));
+                case QUANTITY_LIST -> {
+                    for (String part : splitList(t)) {
+                        positiveOrZero(Quantity.parse(part, dimension));
+                    }
+                }
+                case FRACTION -> {
+                    double p = Quantity.parse(t, Dimension.DIMENSIONLESS).si();
+                    if (p < 0 || p > 1) {
+                        return Optional.of("must be a fraction between 0 and 1 (e.g. \"5 %\"), was " + t);
+                    }
+                }
+                case INTEGER_LIST -> {
+                    for (String part : splitList(t)) {
+                        int v;
+                        try {
+                            v = Integer.parseInt(part);
+                        } catch (NumberFormatException e) {
+                            return Optional.of("'" + part + "' is not a whole number");
+                        }
+                        if (v < 1) {
+                            return Optional.of("must be whole numbers >= 1, was " + part);
+                        }
+                    }
+                }
+                case CHOICE -> {
+                    if (!choices.contains(t)) {
+                        return Optional.of("'" + t + "' is not one of: " + String.join(", ", choices));
+                    }
+                }
+                case KEY_SET -> {
+                    Set<String> seen = new LinkedHashSet<>();
+                    for (String part : splitList(t)) {
+                        if (!choices.contains(part)) {
+                            return Optional.of("'" + part + "' is not one of: " + String.join(", ", choices));
+                        }
+                        if (!seen.add(part)) {
+                            return Optional.of("'" + part + "' is listed twice");
+                        }
+                    }
+                }
+            }
+        } catch (QuantityFormatException e) {
+            return Optional.of(e.getMessage());
+        }
+        return Optional.empty();
+    }
+
+    private static void positiveOrZero(Quantity q) {
+        if (q.si() < 0 && q.unit().offsetSi() == 0) {
+            throw new QuantityFormatException(q.format(), "must not be negative, was " + q.format());
+        }
+    }
+
+    private String example() {
+        return switch (kind) {
+            case QUANTITY, QUANTITY_LIST -> "\"" + dimension.example() + "\"";
+            case FRACTION -> "\"5 %\"";
+            case INTEGER_LIST -> "\"1, 2, 5\"";
+            case CHOICE, KEY_SET -> choices.get(0);
+            case TEXT -> "a name";
+        };
+    }
+
+    /** Items of a comma- or semicolon-separated list, blanks dropped. */
+    static List<String> splitList(String text) {
+        List<String> out = new ArrayList<>();
+        for (String part : text.split("[,;]")) {
+            if (!part.isBlank()) {
+                out.add(part.strip());
+            }
+        }
+        return out;
+    }
+}

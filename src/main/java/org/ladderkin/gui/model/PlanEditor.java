@@ -1,0 +1,318 @@
+package org.ladderkin.gui.model;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.concurrent.CopyOnWriteArrayList;
+import org.ladderkin.io.AtomicFiles;
+import org.ladderkin.io.InputException;
+import org.ladderkin.io.ResolvedJson;
+import org.ladderkin.io.SourceLocation;
+import org.ladderkin.io.json.JsonTree;
+import org.ladderkin.plan.PlanInputs;
+
+/**
+ * The plan being edited: the plan document itself (a JSON tree), its file, undo/redo, validation and the last valid
+ * plan. Views bind each form field to a {@link FieldSpec} and call {@link #edit}; they redraw on {@link Listener}
+ * events. No Swing here, so everything is tested without a display.
+ */
+public final class PlanEditor {
+
+    /** What changed. */
+    public enum Change {
+        /** One field was edited; the path names it. */
+        EDIT,
+        /** The whole document was replaced (new, open, undo, redo, restore): every field must be re-read. */
+        REPLACED,
+        /** The document was saved; only the file name and the dirty mark change. */
+        SAVED
+    }
+
+    /** Told after every change, on the thread that made it. */
+    @FunctionalInterface
+    public interface Listener {
+        void planChanged(Change change, String path);
+    }
+
+    private static final ObjectMapper MAPPER = new ObjectMapper();
+    private static final int UNDO_STEPS = 200;
+
+    private final EditHistory history = new EditHistory(UNDO_STEPS);
+    private final Map<String, String> typedProblems = new LinkedHashMap<>();
+    private final List<Listener> listeners = new CopyOnWriteArrayList<>();
+    private ObjectNode document;
+    private String savedText;
+    private Path file;
+    private PlanCheck check;
+    private PlanInputs lastValid;
+
+    /** An editor on a new, untitled, blank plan. */
+    public PlanEditor() {
+        replace(PlanTemplate.blank(), null);
+    }
+
+    public void addListener(Listener l) {
+        listeners.add(Objects.requireNonNull(l, "listener"));
+    }
+
+    public void removeListener(Listener l) {
+        listeners.remove(l);
+    }
+
+    // ---- reading -----------------------------------------------------------------------------------------------
+
+    /** A copy of the document (changes to it do not reach the editor). */
+    public ObjectNode document() {
+        return document.deepCopy();
+    }
+
+    /** The document as the JSON text a save would write. */
+    public String text() {
+        return ResolvedJson.toText(document);
+    }
+
+    /** The text a field shows for the current document. */
+    public String text(FieldSpec field) {
+        return field.read(document);
+    }
+
+    /** The file this plan was opened from or last saved to, if any. */
+    public Optional<Path> file() {
+        return Optional.ofNullable(file);
+    }
+
+    /** "name.plan.json" or "untitled". */
+    public String displayName() {
+        return file == null ? "untitled" : file.getFileName().toString();
+    }
+
+    /** Whether the document differs from what was last opened or saved. */
+    public boolean isDirty() {
+        return !text().equals(savedText);
+    }
+
+    /** The outcome of reading the current document as a plan. */
+    public PlanCheck check() {
+        return check;
+    }
+
+    /** The most recent document state that read as a valid plan, if any: predictions stay alive while typing. */
+    public Optional<PlanInputs> lastValid() {
+        return Optional.ofNullable(lastValid);
+    }
+
+    /** Every field of the forms for the current document. */
+    public List<FieldSpec> fields() {
+        List<FieldSpec> all = new ArrayList<>(PlanForms.SAMPLE);
+        all.addAll(PlanForms.LASER);
+        for (int i = 0; i < PlanForms.instrumentCount(document); i++) {
+            all.addAll(PlanForms.instrument(document, i));
+        }
+        all.addAll(PlanForms.GOALS_AND_LIMITS);
+        return all;
+    }
+
+    /**
+     * Why a field is invalid, or empty: its own check of the typed text first (instant, and one per field), then the
+     * plan reader's first problem when it concerns this field.
+     */
+    public Optional<String> problem(FieldSpec field) {
+        String typed = typedProblems.get(field.path().toString());
+        if (typed != null) {
+            return Optional.of(typed);
+        }
+        if (!check.valid() && field.path().concerns(check.field())) {
+            return Optional.of(check.problem());
+        }
+        return Optional.empty();
+    }
+
+    /**
+     * The plan reader's problem when no form field shows it (a missing section, "give either diameter or peak"),
+     * prefixed by its path when it has one; empty when the plan is valid or a field shows the problem.
+     */
+    public Optional<String> generalProblem() {
+        if (check.valid()) {
+            return Optional.empty();
+        }
+        for (FieldSpec f : fields()) {
+            if (f.path().concerns(check.field())) {
+                return Optional.empty();
+            }
+        }
+        String where = check.field() == null ? "" : "'" + check.field() + "': ";
+        return Optional.of(where + check.problem());
+    }
+
+    public boolean canUndo() {
+        return history.canUndo();
+    }
+
+    public boolean canRedo() {
+        return history.canRedo();
+    }
+
+    // ---- editing -----------------------------------------------------------------------------------------------
+
+    /**
+     * Sets the text of one field. The text is stored as typed (even when it does not parse), so the document always
+     * holds what the form shows; the field's own check marks it at once. Consecutive edits of one field make one
+     * undo step until {@link #endEdit()}.
+     */
+    public void edit(FieldSpec field, String text) {
+        String path = field.path().toString();
+        Optional<String> typed = field.check(text);
+        boolean problemChanged = !Objects.equals(typedProblems.get(path), typed.orElse(null));
+        typed.ifPresentOrElse(p -> typedProblems.put(path, p), () -> typedProblems.remove(path));
+        String before = text();
+        ObjectNode next = document.deepCopy();
+        field.toJson(text).ifPresentOrElse(v -> field.path().set(next, v), () -> field.path().remove(next));
+        String after = ResolvedJson.toText(next);
+        if (after.equals(before)) {
+            if (problemChanged) {
+                fire(Change.EDIT, path);
+            }
+            return;
+        }
+        history.beforeEdit(before, path);
+        document = next;
+        recheck();
+        fire(Change.EDIT, path);
+    }
+
+    /** Ends a run of typing in one field: the next edit is a new undo step. */
+    public void endEdit() {
+        history.boundary();
+    }
+
+    public void undo() {
+        restoreSnapshot(history.undo(text()));
+    }
+
+    public void redo() {
+        restoreSnapshot(history.redo(text()));
+    }
+
+    // ---- files -------------------------------------------------------------------------------------------------
+
+    /** Replaces the document with a blank plan, untitled. */
+    public void newPlan() {
+        replace(PlanTemplate.blank(), null);
+        fire(Change.REPLACED, null);
+    }
+
+    /**
+     * Opens a plan file. The file must be a JSON object; it need not be a valid plan (problems are marked for
+     * editing).
+     *
+     * @throws InputException when the file is missing, not UTF-8 or not well-formed JSON (located)
+     */
+    public void open(Path planFile) {
+        JsonTree.read(planFile, planFile.toString());
+        JsonNode parsed;
+        try {
+            parsed = MAPPER.readTree(Files.readString(planFile, StandardCharsets.UTF_8));
+        } catch (IOException e) {
+            throw new InputException(SourceLocation.of(planFile.toString()), null, "cannot read: " + e.getMessage(), e);
+        }
+        if (!(parsed instanceof ObjectNode object)) {
+            throw new InputException(SourceLocation.of(planFile.toString()), null, "a plan file must hold one JSON object");
+        }
+        replace(object, planFile.toAbsolutePath().normalize());
+        fire(Change.REPLACED, null);
+    }
+
+    /** Saves to the current file, atomically. */
+    public void save() throws IOException {
+        if (file == null) {
+            throw new IllegalStateException("an untitled plan needs a file: use saveAs");
+        }
+        saveAs(file);
+    }
+
+    /** Saves to {@code target}, atomically, and makes it the current file. */
+    public void saveAs(Path target) throws IOException {
+        String text = text();
+        AtomicFiles.writeString(target, text);
+        file = target.toAbsolutePath().normalize();
+        savedText = text;
+        history.boundary();
+        fire(Change.SAVED, null);
+    }
+
+    /**
+     * Puts back a recovered document. It counts as unsaved: {@code originalFile} (if any) becomes the current file
+     * but what is on disk there stays as it was until the user saves.
+     */
+    public void restore(ObjectNode recovered, Path originalFile) {
+        replace(recovered, originalFile);
+        savedText = null;
+        fire(Change.REPLACED, null);
+    }
+
+    // ---- internals ---------------------------------------------------------------------------------------------
+
+    private void replace(ObjectNode doc, Path newFile) {
+        document = doc.deepCopy();
+        file = newFile;
+        history.clear();
+        savedText = text();
+        lastValid = null;
+        recheckAllFields();
+    }
+
+    private void restoreSnapshot(String snapshot) {
+        try {
+            document = (ObjectNode) MAPPER.readTree(snapshot);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("undo snapshot is not JSON (a bug)", e);
+        }
+        recheckAllFields();
+        fire(Change.REPLACED, null);
+    }
+
+    private void recheckAllFields() {
+        typedProblems.clear();
+        for (FieldSpec f : fields()) {
+            f.check(f.read(document)).ifPresent(p -> typedProblems.put(f.path().toString(), p));
+        }
+        recheck();
+    }
+
+    private void recheck() {
+        check = PlanCheck.of(text(), displayName());
+        if (check.valid()) {
+            lastValid = check.inputs();
+        }
+    }
+
+    private void fire(Change change, String path) {
+        for (Listener l : listeners) {
+            l.planChanged(change, path);
+        }
+    }
+
+    /** Used by tests and the recovery store: the document parsed from JSON text. */
+    static ObjectNode parseObject(String json) {
+        try {
+            JsonNode n = MAPPER.readTree(json);
+            if (n instanceof ObjectNode o) {
+                return o;
+            }
+        } catch (JsonProcessingException e) {
+            throw new IllegalArgumentException("not JSON: " + e.getOriginalMessage(), e);
+        }
+        throw new IllegalArgumentException("not a JSON object");
+    }
+}

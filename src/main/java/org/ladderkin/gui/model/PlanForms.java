@@ -1,0 +1,103 @@
+package org.ladderkin.gui.model;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import org.ladderkin.plan.Goal;
+import org.ladderkin.plan.Instrument;
+import org.ladderkin.units.Dimension;
+
+/**
+ * The field tables behind the plan editor's forms (schema {@code ladderkin.plan/1}). Each form is a list of
+ * {@link FieldSpec}s; when the plan schema changes, these tables change and the views follow.
+ */
+public final class PlanForms {
+
+    /** Sample section: kept as a plain table because the sample schema is still evolving. */
+    public static final List<FieldSpec> SAMPLE = List.of(
+            FieldSpec.text("Title", "title", false, "one line naming the campaign"),
+            FieldSpec.text("Lab", "lab", true, "who runs the campaign"),
+            FieldSpec.text("Sample name", "sample.name", false, "your name for the batch"),
+            FieldSpec.text("Material", "sample.material", false, "material key in the library, e.g. CdSe"),
+            FieldSpec.optionalQuantity("Diameter", "sample.diameter", Dimension.LENGTH,
+                    "core diameter; give either this or the first-exciton peak"),
+            FieldSpec.optionalQuantity("First-exciton peak", "sample.firstExcitonPeak", Dimension.LENGTH,
+                    "measured first absorption peak; give either this or the diameter"),
+            FieldSpec.fraction("Size dispersion", "sample.sizeDispersion", true,
+                    "relative standard deviation of the diameter, e.g. 6 %"),
+            FieldSpec.quantity("Absorbance at pump", "sample.absorbanceAtPump", Dimension.ABSORBANCE,
+                    "decadic absorbance at the first pump wavelength over the path length"),
+            FieldSpec.quantity("Path length", "sample.pathLength", Dimension.LENGTH, "optical path length of the cell or film"),
+            FieldSpec.text("Matrix", "sample.matrix", false, "solvent or film host, e.g. toluene"),
+            FieldSpec.choice("Refresh", "sample.refresh.mode", List.of("static", "stirred", "flowing"),
+                    "how the excited volume is renewed between pulses"),
+            FieldSpec.optionalQuantity("Flow rate", "sample.refresh.flowRate", Dimension.VOLUMETRIC_FLOW,
+                    "volumetric flow, only for a flowing cell"));
+
+    /** Laser and geometry. */
+    public static final List<FieldSpec> LASER = List.of(
+            FieldSpec.quantityList("Pump wavelengths", "laser.pumpWavelengths", Dimension.LENGTH,
+                    "comma-separated, e.g. 400 nm, 515 nm"),
+            FieldSpec.quantity("Repetition rate", "laser.repetitionRate", Dimension.FREQUENCY, "amplifier or oscillator rate"),
+            FieldSpec.integerList("Pulse picker ÷", "laser.pulsePickerDivisions", true,
+                    "divisions of the repetition rate the picker offers, e.g. 1, 2, 5, 10"),
+            FieldSpec.quantity("Pulse width", "laser.pulseWidth", Dimension.TIME, "pump intensity FWHM"),
+            FieldSpec.quantity("Lowest pulse energy", "laser.pulseEnergyRange[0]", Dimension.ENERGY,
+                    "lowest pump pulse energy that can be set"),
+            FieldSpec.quantity("Highest pulse energy", "laser.pulseEnergyRange[1]", Dimension.ENERGY,
+                    "highest pump pulse energy available"),
+            FieldSpec.quantity("Pump radius", "laser.pumpRadius", Dimension.LENGTH, "pump 1/e² intensity radius at the sample"),
+            FieldSpec.quantity("Probe radius", "laser.probeRadius", Dimension.LENGTH, "probe 1/e² intensity radius at the sample"));
+
+    /** Goals and limits. */
+    public static final List<FieldSpec> GOALS_AND_LIMITS = List.of(
+            FieldSpec.keySet("Measure", "goals.measure", Arrays.stream(Goal.values()).map(Goal::key).toList(),
+                    "what the campaign sets out to measure"),
+            FieldSpec.quantityList("Multiplication photon energies", "goals.multiplicationPhotonEnergies", Dimension.ENERGY,
+                    "photon energies for the multiplication yield, e.g. 3.1 eV (only with multiplication-yield)")
+                    .asOptional(),
+            FieldSpec.quantity("Max temperature rise", "limits.maxTemperatureRise", Dimension.TEMPERATURE,
+                    "highest tolerated steady-state rise, in K"),
+            FieldSpec.fraction("Max charged fraction", "limits.maxChargedFraction", false,
+                    "highest tolerated fraction of photocharged dots"),
+            FieldSpec.fraction("Max residual excitation", "limits.maxResidualExcitation", false,
+                    "highest tolerated fraction of dots still excited at the next pulse"),
+            FieldSpec.quantity("Beam time", "limits.beamTime", Dimension.TIME, "measurement time available"));
+
+    private PlanForms() {
+    }
+
+    /** The fields of instrument {@code index} of the document, chosen by its {@code kind}. */
+    public static List<FieldSpec> instrument(JsonNode document, int index) {
+        String p = "instruments[" + index + "].";
+        JsonNode kindNode = JsonPath.of(p + "kind").get(document);
+        String kind = kindNode == null ? "" : kindNode.asText();
+        List<FieldSpec> fields = new ArrayList<>();
+        if (kind.equals(Instrument.Kind.TCSPC.key())) {
+            fields.add(FieldSpec.quantity("Time bin", p + "timeBin", Dimension.TIME, "width of one TCSPC histogram bin"));
+            fields.add(FieldSpec.quantity("Time range", p + "timeRange", Dimension.TIME, "span of the TCSPC histogram"));
+            fields.add(FieldSpec.quantity("IRF FWHM", p + "irfFwhm", Dimension.TIME, "instrument response width"));
+            fields.add(FieldSpec.fraction("Max count fraction", p + "maxCountFraction", true,
+                    "highest detected-photon rate as a fraction of the repetition rate"));
+        } else {
+            fields.add(FieldSpec.quantity("Shortest delay", p + "delayRange[0]", Dimension.TIME, "first useful delay"));
+            fields.add(FieldSpec.quantity("Longest delay", p + "delayRange[1]", Dimension.TIME, "longest delay the stage reaches"));
+            fields.add(FieldSpec.quantity("Noise floor", p + "noiseFloor", Dimension.ABSORBANCE, "rms ΔA noise per averaged point"));
+            fields.add(FieldSpec.quantity("IRF FWHM", p + "irfFwhm", Dimension.TIME, "instrument response width"));
+        }
+        return List.copyOf(fields);
+    }
+
+    /** How many instruments the document lists (0 when the list is missing). */
+    public static int instrumentCount(JsonNode document) {
+        JsonNode n = document.get("instruments");
+        return n != null && n.isArray() ? n.size() : 0;
+    }
+
+    /** The {@code kind} of instrument {@code index}, or "" when missing. */
+    public static String instrumentKind(JsonNode document, int index) {
+        JsonNode n = JsonPath.of("instruments[" + index + "].kind").get(document);
+        return n == null ? "" : n.asText();
+    }
+}

@@ -1,0 +1,59 @@
+package org.ladderkin.gui.view;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import javax.swing.JTabbedPane;
+import org.ladderkin.gui.chart.ChartView;
+import org.ladderkin.report.ChartSpec;
+
+/** The charts of the current prediction, one per tab; the selected one is what "Export chart" writes. */
+final class ChartsPanel extends JTabbedPane {
+
+    private final List<ChartView> views = new ArrayList<>();
+
+    ChartsPanel() {
+        setName("charts");
+    }
+
+    /** Shows {@code specs}, keeping the tabs (and the selected tab) when the set of charts is unchanged. */
+    void show(List<ChartSpec> specs) {
+        boolean sameTabs = specs.size() == views.size();
+        for (int i = 0; sameTabs && i < specs.size(); i++) {
+            sameTabs = specs.get(i).title().equals(views.get(i).spec().title());
+        }
+        if (sameTabs) {
+            for (int i = 0; i < specs.size(); i++) {
+                views.get(i).show(specs.get(i));
+            }
+            return;
+        }
+        int selected = getSelectedIndex();
+        removeAll();
+        views.clear();
+        for (ChartSpec spec : specs) {
+            ChartView v = new ChartView(spec);
+            views.add(v);
+            addTab(shortTitle(spec.title()), null, v, spec.title());
+        }
+        if (selected >= 0 && selected < views.size()) {
+            setSelectedIndex(selected);
+        }
+    }
+
+    /** The chart in the selected tab. */
+    Optional<ChartSpec> selected() {
+        int i = getSelectedIndex();
+        return i < 0 ? Optional.empty() : Optional.of(views.get(i).spec());
+    }
+
+    /** Every chart shown, in tab order. */
+    List<ChartSpec> specs() {
+        return views.stream().map(ChartView::spec).toList();
+    }
+
+    private static String shortTitle(String title) {
+        int paren = title.indexOf(" (");
+        return paren > 0 ? title.substring(0, paren) : title;
+    }
+}

@@ -1,0 +1,646 @@
+package org.ladderkin.gui.view;
+
+import java.awt.BorderLayout;
+import java.awt.Rectangle;
+import java.awt.Toolkit;
+import java.awt.datatransfer.DataFlavor;
+import java.awt.event.ActionEvent;
+import java.awt.event.InputEvent;
+import java.awt.event.KeyEvent;
+import java.awt.event.WindowAdapter;
+import java.awt.event.WindowEvent;
+import java.io.File;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Clock;
+import java.time.ZoneId;
+import java.time.format.DateTimeFormatter;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import javax.swing.AbstractAction;
+import javax.swing.Action;
+import javax.swing.BorderFactory;
+import javax.swing.ButtonGroup;
+import javax.swing.JComponent;
+import javax.swing.JFileChooser;
+import javax.swing.JFrame;
+import javax.swing.JLabel;
+import javax.swing.JMenu;
+import javax.swing.JMenuBar;
+import javax.swing.JMenuItem;
+import javax.swing.JOptionPane;
+import javax.swing.JPanel;
+import javax.swing.JRadioButtonMenuItem;
+import javax.swing.JScrollPane;
+import javax.swing.JSplitPane;
+import javax.swing.JTabbedPane;
+import javax.swing.KeyStroke;
+import javax.swing.SwingUtilities;
+import javax.swing.Timer;
+import javax.swing.TransferHandler;
+import javax.swing.filechooser.FileNameExtensionFilter;
+import net.miginfocom.swing.MigLayout;
+import org.ladderkin.gui.app.GuiPrefs;
+import org.ladderkin.gui.app.Theme;
+import org.ladderkin.gui.chart.ChartExport;
+import org.ladderkin.gui.model.Autosaver;
+import org.ladderkin.gui.model.PlanEditor;
+import org.ladderkin.gui.model.PlanForms;
+import org.ladderkin.gui.model.Prediction;
+import org.ladderkin.gui.model.PredictionReport;
+import org.ladderkin.gui.model.PredictionSource;
+import org.ladderkin.gui.model.RecomputeService;
+import org.ladderkin.gui.model.RecoveryStore;
+import org.ladderkin.gui.model.UnsavedChanges;
+import org.ladderkin.io.AtomicFiles;
+import org.ladderkin.io.InputException;
+import org.ladderkin.plan.PlanInputs;
+import org.ladderkin.report.ChartSpec;
+
+/**
+ * The planner window: plan forms on the left, the live charts in the centre, risks and derived numbers below, the
+ * safety cautions on top and a status bar. All state lives in the {@link PlanEditor}; this class lays out, forwards
+ * user actions and redraws on the editor's events and on delivered predictions.
+ */
+public final class PlannerFrame extends JFrame {
+
+    /**
+     * Wait after the last keystroke before recomputing (ms): long enough that typing "1 kHz" costs one computation,
+     * short enough that the charts follow within about 150 ms of the last keystroke.
+     */
+    static final int DEBOUNCE_MS = 100;
+    /** How often unsaved changes are copied to the recovery folder (ms). */
+    static final int AUTOSAVE_MS = 20_000;
+    private static final String TITLE = "ladderkin planner";
+
+    private final GuiPrefs prefs;
+    private final RecoveryStore recovery;
+    private final PlanEditor editor = new PlanEditor();
+    private final Autosaver autosaver;
+    private final RecomputeService recompute;
+    private final Timer autosaveTimer;
+
+    private final FieldFormPanel sampleForm;
+    private final FieldFormPanel laserForm;
+    private final FieldFormPanel instrumentsForm;
+    private final FieldFormPanel goalsForm;
+    private final ChartsPanel charts = new ChartsPanel();
+    private final RiskTable risks = new RiskTable();
+    private final DerivedPanel derived = new DerivedPanel();
+    private final CautionBar cautions = new CautionBar();
+    private final JLabel planStatus = new JLabel(" ");
+    private final JLabel predictionStatus = new JLabel(" ");
+    private final JLabel fileStatus = new JLabel(" ");
+    private final JSplitPane mainSplit;
+    private final JMenu recentMenu = new JMenu("Open Recent");
+    private final List<Action> exportActions = new ArrayList<>();
+    private Action undoAction;
+    private Action redoAction;
+    private String instrumentShape = "";
+    private Prediction prediction;
+    private PlanInputs predictedFor;
+    private PlanInputs requested;
+    private long editNanos;
+    private long deliveredCount;
+
+    /**
+     * @param prefs    where theme, window bounds and recent files are remembered
+     * @param recovery where the recovery copy is kept
+     * @param source   what computes the prediction (on a background thread)
+     */
+    public PlannerFrame(GuiPrefs prefs, RecoveryStore recovery, PredictionSource source) {
+        super(TITLE);
+        this.prefs = prefs;
+        this.recovery = recovery;
+        this.autosaver = new Autosaver(editor, recovery, Clock.systemUTC());
+        this.recompute = new RecomputeService(source, DEBOUNCE_MS, SwingUtilities::invokeLater, this::predictionArrived);
+        this.autosaveTimer = new Timer(AUTOSAVE_MS, e -> autosaveTick());
+
+        sampleForm = new FieldFormPanel(editor, List.of(new FieldFormPanel.Section("", PlanForms.SAMPLE)));
+        laserForm = new FieldFormPanel(editor, List.of(new FieldFormPanel.Section("", PlanForms.LASER)));
+        instrumentsForm = new FieldFormPanel(editor, instrumentSections());
+        goalsForm = new FieldFormPanel(editor, List.of(new FieldFormPanel.Section("", PlanForms.GOALS_AND_LIMITS)));
+
+        JTabbedPane forms = new JTabbedPane();
+        forms.setName("forms");
+        forms.setTabLayoutPolicy(JTabbedPane.SCROLL_TAB_LAYOUT);
+        forms.addTab("Sample", scroll(sampleForm));
+        forms.addTab("Laser & geometry", scroll(laserForm));
+        forms.addTab("Instruments", scroll(instrumentsForm));
+        forms.addTab("Goals & limits", scroll(goalsForm));
+
+        JTabbedPane lower = new JTabbedPane();
+        lower.setName("lower");
+        lower.addTab("Risks", new JScrollPane(risks));
+        lower.addTab("Derived numbers", scroll(derived));
+        // the split starts at the preferred heights: charts get most of the room
+        charts.setPreferredSize(new java.awt.Dimension(760, 540));
+        lower.setPreferredSize(new java.awt.Dimension(760, 190));
+        JSplitPane centre = new JSplitPane(JSplitPane.VERTICAL_SPLIT, charts, lower);
+        centre.setResizeWeight(0.72);
+        mainSplit = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, forms, centre);
+        mainSplit.setResizeWeight(0);
+
+        JPanel content = new JPanel(new BorderLayout());
+        content.add(cautions, BorderLayout.NORTH);
+        content.add(mainSplit, BorderLayout.CENTER);
+        content.add(statusBar(), BorderLayout.SOUTH);
+        setContentPane(content);
+        setJMenuBar(menus());
+        setTransferHandler(new PlanDropHandler());
+
+        editor.addListener(this::planChanged);
+        setDefaultCloseOperation(DO_NOTHING_ON_CLOSE);
+        addWindowListener(new WindowAdapter() {
+            @Override
+            public void windowClosing(WindowEvent e) {
+                quit();
+            }
+        });
+        restoreBounds();
+        planChanged(PlanEditor.Change.REPLACED, null);
+        autosaveTimer.start();
+    }
+
+    // ---- what tests and start-up use ---------------------------------------------------------------------------
+
+    /** The presentation model behind the window. */
+    public PlanEditor editor() {
+        return editor;
+    }
+
+    /** The prediction shown, or null before the first one arrives. */
+    public Prediction prediction() {
+        return prediction;
+    }
+
+    /** How many predictions have been shown. */
+    public long deliveredCount() {
+        return deliveredCount;
+    }
+
+    /** Opens {@code file} without asking about unsaved changes (the caller has); errors are shown in a dialog. */
+    public boolean openFile(Path file) {
+        try {
+            editor.open(file);
+            prefs.recentFiles(prefs.recentFiles().add(file));
+            prefs.lastDirectory(file.toAbsolutePath().getParent());
+            rebuildRecentMenu();
+            return true;
+        } catch (InputException e) {
+            error("Cannot open the plan", e.getMessage());
+            return false;
+        }
+    }
+
+    /** Offers to restore a recovery copy left by an earlier session that did not end cleanly. */
+    public void offerRecovery() {
+        Optional<RecoveryStore.Recovered> found = recovery.read();
+        if (found.isEmpty()) {
+            return;
+        }
+        RecoveryStore.Recovered r = found.get();
+        String what = r.originalFile() == null ? "an untitled plan" : r.originalFile().toString();
+        String when = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm").withZone(ZoneId.systemDefault()).format(r.savedAt());
+        int answer = JOptionPane.showConfirmDialog(this, "<html>Unsaved changes to " + what + " were kept from a session"
+                        + " that ended on " + when + ".<br>Restore them?</html>", "Restore unsaved changes",
+                JOptionPane.YES_NO_OPTION, JOptionPane.QUESTION_MESSAGE);
+        if (answer == JOptionPane.YES_OPTION) {
+            editor.restore(r.document(), r.originalFile());
+        } else {
+            try {
+                recovery.clear();
+            } catch (IOException e) {
+                error("Cannot remove the recovery copy", e.getMessage());
+            }
+        }
+    }
+
+    // ---- editor and prediction events ---------------------------------------------------------------------------
+
+    private void planChanged(PlanEditor.Change change, String path) {
+        if (change == PlanEditor.Change.REPLACED) {
+            String shape = instrumentShape();
+            if (!shape.equals(instrumentShape)) {
+                instrumentShape = shape;
+                instrumentsForm.rebuild(instrumentSections());
+            }
+            for (FieldFormPanel f : forms()) {
+                f.refreshAll();
+            }
+        } else if (change == PlanEditor.Change.EDIT) {
+            for (FieldFormPanel f : forms()) {
+                f.refreshProblems();
+            }
+        }
+        if (change != PlanEditor.Change.SAVED) {
+            editor.lastValid().ifPresent(inputs -> {
+                editNanos = System.nanoTime();
+                requested = inputs;
+                recompute.request(inputs);
+            });
+        }
+        updateStatus();
+    }
+
+    private void predictionArrived(RecomputeService.Result result) {
+        if (result.prediction() == null) {
+            predictionStatus.setText("prediction failed: " + result.error());
+            return;
+        }
+        prediction = result.prediction();
+        predictedFor = requested;
+        charts.show(prediction.charts());
+        risks.show(prediction.risks());
+        derived.show(prediction.derived());
+        cautions.show(prediction.cautions());
+        deliveredCount++;
+        double sinceEditMs = (System.nanoTime() - editNanos) / 1e6;
+        predictionStatus.setText(String.format(java.util.Locale.ROOT, "charts updated %.0f ms after the change (computed in %.1f ms)",
+                sinceEditMs, result.computeNanos() / 1e6));
+        predictionStatus.setToolTipText("Prediction basis: " + prediction.basis());
+        for (Action a : exportActions) {
+            a.setEnabled(true);
+        }
+    }
+
+    private void updateStatus() {
+        String name = editor.displayName() + (editor.isDirty() ? " •" : "");
+        setTitle(name + " — " + TITLE);
+        fileStatus.setText(editor.file().map(Path::toString).orElse("untitled") + (editor.isDirty() ? " (unsaved)" : ""));
+        if (editor.check().valid()) {
+            planStatus.setText("plan valid");
+            planStatus.setToolTipText(null);
+        } else {
+            String general = editor.generalProblem().orElse(null);
+            String msg = general != null ? general : "a marked field needs attention: " + editor.check().problem();
+            planStatus.setText("⚠ " + msg + (editor.lastValid().isPresent() ? " — charts show the last valid plan" : ""));
+            planStatus.setToolTipText(msg);
+        }
+        undoAction.setEnabled(editor.canUndo());
+        redoAction.setEnabled(editor.canRedo());
+    }
+
+    // ---- user actions -------------------------------------------------------------------------------------------
+
+    private void newPlan() {
+        if (mayLeave()) {
+            editor.newPlan();
+        }
+    }
+
+    private void open() {
+        if (!mayLeave()) {
+            return;
+        }
+        JFileChooser chooser = chooser();
+        if (chooser.showOpenDialog(this) == JFileChooser.APPROVE_OPTION) {
+            openFile(chooser.getSelectedFile().toPath());
+        }
+    }
+
+    private void openRecent(Path file) {
+        if (!Files.isRegularFile(file)) {
+            error("Cannot open the plan", file + " no longer exists; it is removed from the list.");
+            prefs.recentFiles(prefs.recentFiles().remove(file));
+            rebuildRecentMenu();
+            return;
+        }
+        if (mayLeave()) {
+            openFile(file);
+        }
+    }
+
+    private boolean save() {
+        if (editor.file().isEmpty()) {
+            return saveAs();
+        }
+        return write(editor.file().get());
+    }
+
+    private boolean saveAs() {
+        Optional<Path> target = chooseSaveTarget();
+        return target.isPresent() && write(target.get());
+    }
+
+    private boolean write(Path target) {
+        try {
+            editor.saveAs(target);
+            autosaver.discard();
+            prefs.recentFiles(prefs.recentFiles().add(target));
+            rebuildRecentMenu();
+            return true;
+        } catch (IOException e) {
+            error("Cannot save the plan", target + ": " + e.getMessage());
+            return false;
+        }
+    }
+
+    private Optional<Path> chooseSaveTarget() {
+        JFileChooser chooser = chooser();
+        editor.file().ifPresent(f -> chooser.setSelectedFile(f.toFile()));
+        if (chooser.showSaveDialog(this) != JFileChooser.APPROVE_OPTION) {
+            return Optional.empty();
+        }
+        Path target = chooser.getSelectedFile().toPath();
+        if (!target.getFileName().toString().endsWith(".json")) {
+            target = target.resolveSibling(target.getFileName() + ".plan.json");
+        }
+        if (Files.exists(target) && !target.equals(editor.file().orElse(null))
+                && JOptionPane.showConfirmDialog(this, target + " exists. Replace it?", "Replace file",
+                JOptionPane.OK_CANCEL_OPTION, JOptionPane.WARNING_MESSAGE) != JOptionPane.OK_OPTION) {
+            return Optional.empty();
+        }
+        prefs.lastDirectory(target.toAbsolutePath().getParent());
+        return Optional.of(target);
+    }
+
+    private void exportChart(ChartExport.Format format) {
+        Optional<ChartSpec> spec = charts.selected();
+        if (spec.isEmpty()) {
+            return;
+        }
+        JFileChooser chooser = new JFileChooser(prefs.lastDirectory().map(Path::toFile).orElse(null));
+        chooser.setFileFilter(new FileNameExtensionFilter(format.description(), format.extension()));
+        chooser.setSelectedFile(new File(slug(spec.get().title()) + "." + format.extension()));
+        if (chooser.showSaveDialog(this) != JFileChooser.APPROVE_OPTION) {
+            return;
+        }
+        Path target = format.withExtension(chooser.getSelectedFile().toPath());
+        try {
+            ChartExport.write(spec.get(), format, target);
+            predictionStatus.setText("exported " + target.getFileName());
+        } catch (IOException e) {
+            error("Cannot export the chart", target + ": " + e.getMessage());
+        }
+    }
+
+    private void exportReport() {
+        if (prediction == null || predictedFor == null) {
+            return;
+        }
+        JFileChooser chooser = new JFileChooser(prefs.lastDirectory().map(Path::toFile).orElse(null));
+        chooser.setFileFilter(new FileNameExtensionFilter("HTML page", "html"));
+        chooser.setSelectedFile(new File(editor.displayName().replaceAll("(\\.plan)?\\.json$", "") + "-planner.html"));
+        if (chooser.showSaveDialog(this) != JFileChooser.APPROVE_OPTION) {
+            return;
+        }
+        Path target = chooser.getSelectedFile().toPath();
+        if (!target.getFileName().toString().endsWith(".html")) {
+            target = target.resolveSibling(target.getFileName() + ".html");
+        }
+        String source = editor.file().map(Path::toString).orElse("untitled plan");
+        try {
+            AtomicFiles.writeString(target, PredictionReport.html(predictedFor, source, prediction));
+            predictionStatus.setText("exported " + target.getFileName());
+        } catch (IOException e) {
+            error("Cannot export the report", target + ": " + e.getMessage());
+        }
+    }
+
+    private void themeSelected(Theme theme) {
+        theme.switchTo();
+        prefs.theme(theme);
+    }
+
+    /** Closes the window after the unsaved-changes question; remembers the layout. */
+    public void quit() {
+        if (!mayLeave()) {
+            return;
+        }
+        rememberBounds();
+        autosaveTimer.stop();
+        recompute.close();
+        try {
+            autosaver.discard();
+        } catch (IOException e) {
+            // the copy stays and is offered next time, which is harmless
+        }
+        dispose();
+    }
+
+    private boolean mayLeave() {
+        try {
+            return UnsavedChanges.mayProceed(editor, this::askAboutUnsaved, this::chooseSaveTarget);
+        } catch (IOException e) {
+            error("Cannot save the plan", e.getMessage());
+            return false;
+        }
+    }
+
+    private UnsavedChanges.Answer askAboutUnsaved(String planName) {
+        Object[] options = {"Save", "Don't Save", "Cancel"};
+        int answer = JOptionPane.showOptionDialog(this, "Save the changes to " + planName + "?", "Unsaved changes",
+                JOptionPane.YES_NO_CANCEL_OPTION, JOptionPane.WARNING_MESSAGE, null, options, options[0]);
+        return switch (answer) {
+            case 0 -> UnsavedChanges.Answer.SAVE;
+            case 1 -> UnsavedChanges.Answer.DISCARD;
+            default -> UnsavedChanges.Answer.CANCEL;
+        };
+    }
+
+    private void autosaveTick() {
+        try {
+            autosaver.tick();
+        } catch (IOException e) {
+            predictionStatus.setText("autosave failed: " + e.getMessage());
+        }
+    }
+
+    // ---- layout helpers -----------------------------------------------------------------------------------------
+
+    private JMenuBar menus() {
+        int menuKey = Toolkit.getDefaultToolkit().getMenuShortcutKeyMaskEx();
+        JMenuBar bar = new JMenuBar();
+
+        JMenu file = new JMenu("File");
+        file.setMnemonic(KeyEvent.VK_F);
+        file.add(action("New", KeyStroke.getKeyStroke(KeyEvent.VK_N, menuKey), this::newPlan));
+        file.add(action("Open…", KeyStroke.getKeyStroke(KeyEvent.VK_O, menuKey), this::open));
+        file.add(recentMenu);
+        rebuildRecentMenu();
+        file.addSeparator();
+        file.add(action("Save", KeyStroke.getKeyStroke(KeyEvent.VK_S, menuKey), this::save));
+        file.add(action("Save As…", KeyStroke.getKeyStroke(KeyEvent.VK_S, menuKey | InputEvent.SHIFT_DOWN_MASK), this::saveAs));
+        file.addSeparator();
+        JMenu export = new JMenu("Export Chart");
+        for (ChartExport.Format f : ChartExport.Format.values()) {
+            Action a = action("Selected chart as " + f.name() + "…", null, () -> exportChart(f));
+            a.setEnabled(false);
+            exportActions.add(a);
+            export.add(a).setName("export:" + f.name());
+        }
+        file.add(export);
+        Action report = action("Export Report (HTML)…", KeyStroke.getKeyStroke(KeyEvent.VK_E, menuKey), this::exportReport);
+        report.setEnabled(false);
+        exportActions.add(report);
+        file.add(report);
+        file.addSeparator();
+        file.add(action("Quit", KeyStroke.getKeyStroke(KeyEvent.VK_Q, menuKey), this::quit));
+        bar.add(file);
+
+        JMenu edit = new JMenu("Edit");
+        edit.setMnemonic(KeyEvent.VK_E);
+        undoAction = action("Undo", KeyStroke.getKeyStroke(KeyEvent.VK_Z, menuKey), () -> {
+            if (editor.canUndo()) {
+                editor.undo();
+            }
+        });
+        redoAction = action("Redo", KeyStroke.getKeyStroke(KeyEvent.VK_Y, menuKey), () -> {
+            if (editor.canRedo()) {
+                editor.redo();
+            }
+        });
+        edit.add(undoAction);
+        edit.add(redoAction);
+        // Ctrl+Shift+Z also redoes, as many editors do.
+        getRootPane().getInputMap(JComponent.WHEN_IN_FOCUSED_WINDOW)
+                .put(KeyStroke.getKeyStroke(KeyEvent.VK_Z, menuKey | InputEvent.SHIFT_DOWN_MASK), "redo");
+        getRootPane().getActionMap().put("redo", redoAction);
+        bar.add(edit);
+
+        JMenu view = new JMenu("View");
+        view.setMnemonic(KeyEvent.VK_V);
+        ButtonGroup themes = new ButtonGroup();
+        for (Theme t : Theme.values()) {
+            JRadioButtonMenuItem item = new JRadioButtonMenuItem(t.label() + " theme");
+            item.setName("theme:" + t.name());
+            item.setSelected(t == prefs.theme());
+            item.addActionListener(e -> themeSelected(t));
+            themes.add(item);
+            view.add(item);
+        }
+        bar.add(view);
+        return bar;
+    }
+
+    private void rebuildRecentMenu() {
+        recentMenu.removeAll();
+        for (Path p : prefs.recentFiles().files()) {
+            JMenuItem item = new JMenuItem(p.getFileName().toString());
+            item.setToolTipText(p.toString());
+            item.addActionListener(e -> openRecent(p));
+            recentMenu.add(item);
+        }
+        recentMenu.setEnabled(recentMenu.getItemCount() > 0);
+    }
+
+    private static Action action(String name, KeyStroke key, Runnable run) {
+        Action a = new AbstractAction(name) {
+            @Override
+            public void actionPerformed(ActionEvent e) {
+                run.run();
+            }
+        };
+        if (key != null) {
+            a.putValue(Action.ACCELERATOR_KEY, key);
+        }
+        return a;
+    }
+
+    private JPanel statusBar() {
+        JPanel bar = new JPanel(new MigLayout("insets 3 8 3 8", "[grow 60, left]16[grow 40, left]16[right]"));
+        bar.setBorder(BorderFactory.createMatteBorder(1, 0, 0, 0, javax.swing.UIManager.getColor("Component.borderColor")));
+        planStatus.setName("status:plan");
+        predictionStatus.setName("status:prediction");
+        fileStatus.setName("status:file");
+        bar.add(planStatus, "wmin 0");
+        bar.add(predictionStatus, "wmin 0");
+        bar.add(fileStatus, "wmin 0");
+        return bar;
+    }
+
+    private static JScrollPane scroll(JComponent c) {
+        JScrollPane s = new JScrollPane(c);
+        s.setBorder(BorderFactory.createEmptyBorder());
+        s.getVerticalScrollBar().setUnitIncrement(16);
+        return s;
+    }
+
+    private List<FieldFormPanel> forms() {
+        return List.of(sampleForm, laserForm, instrumentsForm, goalsForm);
+    }
+
+    private List<FieldFormPanel.Section> instrumentSections() {
+        var doc = editor.document();
+        List<FieldFormPanel.Section> sections = new ArrayList<>();
+        for (int i = 0; i < PlanForms.instrumentCount(doc); i++) {
+            sections.add(new FieldFormPanel.Section("Instrument " + (i + 1) + ": " + PlanForms.instrumentKind(doc, i),
+                    PlanForms.instrument(doc, i)));
+        }
+        return sections;
+    }
+
+    private String instrumentShape() {
+        var doc = editor.document();
+        StringBuilder b = new StringBuilder();
+        for (int i = 0; i < PlanForms.instrumentCount(doc); i++) {
+            b.append(PlanForms.instrumentKind(doc, i)).append(';');
+        }
+        return b.toString();
+    }
+
+    private JFileChooser chooser() {
+        JFileChooser chooser = new JFileChooser(prefs.lastDirectory().map(Path::toFile).orElse(null));
+        chooser.setFileFilter(new FileNameExtensionFilter("Campaign plans (*.json)", "json"));
+        return chooser;
+    }
+
+    private void restoreBounds() {
+        Optional<Rectangle> bounds = prefs.bounds();
+        Rectangle screen = getGraphicsConfiguration().getBounds();
+        if (bounds.isPresent() && screen.intersects(bounds.get())) {
+            setBounds(bounds.get());
+        } else {
+            setSize(Math.min(1360, screen.width), Math.min(860, screen.height));
+            setLocationRelativeTo(null);
+        }
+        if (prefs.maximized()) {
+            setExtendedState(MAXIMIZED_BOTH);
+        }
+        int formsWidth = prefs.formsWidth();
+        mainSplit.setDividerLocation(formsWidth > 100 ? formsWidth : 430);
+    }
+
+    private void rememberBounds() {
+        boolean maximized = (getExtendedState() & MAXIMIZED_BOTH) == MAXIMIZED_BOTH;
+        prefs.maximized(maximized);
+        if (!maximized) {
+            prefs.bounds(getBounds());
+        }
+        prefs.formsWidth(mainSplit.getDividerLocation());
+    }
+
+    private void error(String title, String message) {
+        JOptionPane.showMessageDialog(this, message, title, JOptionPane.ERROR_MESSAGE);
+    }
+
+    private static String slug(String title) {
+        String s = title.toLowerCase(java.util.Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("(^-|-$)", "");
+        return s.length() > 48 ? s.substring(0, 48) : s;
+    }
+
+    /** Opens a plan file dropped on the window. */
+    private final class PlanDropHandler extends TransferHandler {
+        @Override
+        public boolean canImport(TransferSupport support) {
+            return support.isDataFlavorSupported(DataFlavor.javaFileListFlavor);
+        }
+
+        @Override
+        public boolean importData(TransferSupport support) {
+            try {
+                @SuppressWarnings("unchecked")
+                List<File> files = (List<File>) support.getTransferable().getTransferData(DataFlavor.javaFileListFlavor);
+                if (files.size() != 1 || !mayLeave()) {
+                    return false;
+                }
+                return openFile(files.get(0).toPath());
+            } catch (java.awt.datatransfer.UnsupportedFlavorException | IOException e) {
+                return false;
+            }
+        }
+    }
+}

@@ -1,0 +1,66 @@
+package org.ladderkin.gui.model;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The forms must cover the plan schema: every value of the demo plan (and of a new blank plan) is shown by some form
+ * field, so nothing in a plan file is out of reach of the planner. When the schema changes, this test names the
+ * paths the field tables in {@link PlanForms} must learn.
+ */
+class PlanFormsTest {
+
+    @Test
+    void everyValueOfTheDemoPlanIsBoundToAFormField() {
+        PlanEditor editor = new PlanEditor();
+        editor.open(PlanEditorTest.DEMO);
+        assertThat(unbound(editor)).isEmpty();
+    }
+
+    @Test
+    void everyValueOfANewPlanIsBoundToAFormField() {
+        assertThat(unbound(new PlanEditor())).isEmpty();
+    }
+
+    @Test
+    void fieldPathsAreUnique() {
+        List<String> paths = new PlanEditor().fields().stream().map(f -> f.path().toString()).toList();
+        assertThat(paths).doesNotHaveDuplicates();
+    }
+
+    /** Leaf paths of the document no field concerns; "schema" and the instrument kinds are fixed, not edited. */
+    private static List<String> unbound(PlanEditor editor) {
+        List<String> leaves = new ArrayList<>();
+        collect(editor.document(), "", leaves);
+        List<String> out = new ArrayList<>();
+        for (String leaf : leaves) {
+            if (leaf.equals("schema") || leaf.matches("instruments\\[\\d+]\\.kind")) {
+                continue;
+            }
+            boolean bound = editor.fields().stream().anyMatch(f -> f.path().concerns(leaf));
+            if (!bound) {
+                out.add(leaf);
+            }
+        }
+        return out;
+    }
+
+    private static void collect(JsonNode n, String path, List<String> out) {
+        if (n.isObject()) {
+            for (Map.Entry<String, JsonNode> e : n.properties()) {
+                collect(e.getValue(), path.isEmpty() ? e.getKey() : path + "." + e.getKey(), out);
+            }
+        } else if (n.isArray() && n.size() > 0) {
+            for (int i = 0; i < n.size(); i++) {
+                collect(n.get(i), path + "[" + i + "]", out);
+            }
+        } else {
+            out.add(path);
+        }
+    }
+}
