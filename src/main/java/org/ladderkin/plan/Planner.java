@@ -51,6 +51,14 @@ public final class Planner {
 
     /** Plans the campaign the inputs describe. */
     public static CampaignPlan plan(PlanInputs in, Progress progress) {
+        return plan(in, progress, true);
+    }
+
+    /**
+     * Plans the campaign; without the design search the series is the naive log-spaced one, which is what an
+     * interactive view wants (the search dominates the cost).
+     */
+    public static CampaignPlan plan(PlanInputs in, Progress progress, boolean searchDesign) {
         int totalSteps = 6;
         Sample sample = in.sample();
         LaserSetup laser = in.laser();
@@ -85,7 +93,7 @@ public final class Planner {
         DesignSearch.Result design = null;
         double firstDelay = ta == null ? 1e-12 : Math.max(ta.minDelayS(), 5 * model.coolingS());
         double lastDelay = ta == null ? 3e-9 : ta.maxDelayS();
-        if (ta != null && !goalParams.isEmpty() && !Double.isNaN(bandEdgeOd) && nReach > 0.2) {
+        if (searchDesign && ta != null && !goalParams.isEmpty() && !Double.isNaN(bandEdgeOd) && nReach > 0.2) {
             double budget = in.limits().beamTimeS() * DATA_SHARE_OF_BEAM_TIME;
             design = DesignSearch.search(new DesignSearch.Context(model, g, period, bandEdgeOd, ta.noiseFloor(), budget,
                     firstDelay, lastDelay, nReach, goalParams));

@@ -7,7 +7,7 @@ import java.lang.reflect.InvocationTargetException;
 import java.nio.file.Path;
 import java.util.concurrent.CountDownLatch;
 import javax.swing.SwingUtilities;
-import org.ladderkin.gui.model.BeamPrediction;
+import org.ladderkin.gui.model.PlannerPrediction;
 import org.ladderkin.gui.model.RecoveryStore;
 import org.ladderkin.gui.view.PlannerFrame;
 
@@ -38,7 +38,7 @@ public final class PlannerApp {
             SwingUtilities.invokeAndWait(() -> {
                 prefs.theme().install();
                 PlannerFrame frame = new PlannerFrame(prefs, new RecoveryStore(RecoveryStore.defaultFolder()),
-                        new BeamPrediction());
+                        new PlannerPrediction());
                 frame.addWindowListener(new WindowAdapter() {
                     @Override
                     public void windowClosed(WindowEvent e) {

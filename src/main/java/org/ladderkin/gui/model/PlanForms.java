@@ -14,7 +14,7 @@ import org.ladderkin.units.Dimension;
  */
 public final class PlanForms {
 
-    /** Sample section: kept as a plain table because the sample schema is still evolving. */
+    /** Sample section: a plain table of (label, JSON path, kind) so a schema change is a one-line edit. */
     public static final List<FieldSpec> SAMPLE = List.of(
             FieldSpec.text("Title", "title", false, "one line naming the campaign"),
             FieldSpec.text("Lab", "lab", true, "who runs the campaign"),
@@ -26,14 +26,24 @@ public final class PlanForms {
                     "measured first absorption peak; give either this or the diameter"),
             FieldSpec.fraction("Size dispersion", "sample.sizeDispersion", true,
                     "relative standard deviation of the diameter, e.g. 6 %"),
-            FieldSpec.quantity("Absorbance at pump", "sample.absorbanceAtPump", Dimension.ABSORBANCE,
-                    "decadic absorbance at the first pump wavelength over the path length"),
+            FieldSpec.optionalQuantity("Absorbance", "sample.absorbance.value", Dimension.ABSORBANCE,
+                    "measured decadic absorbance over the path length; give either this or the concentration"),
+            FieldSpec.text("Absorbance measured at", "sample.absorbance.at", true,
+                    "\"first-exciton\" or a wavelength such as \"400 nm\""),
+            FieldSpec.optionalQuantity("Concentration", "sample.concentration", Dimension.CONCENTRATION,
+                    "dot concentration, if known instead of the absorbance"),
+            FieldSpec.optionalQuantity("Cross-section", "sample.crossSection.value", Dimension.AREA,
+                    "your measured absorption cross-section, overriding the material's law"),
+            FieldSpec.optionalQuantity("Cross-section measured at", "sample.crossSection.at", Dimension.LENGTH,
+                    "wavelength where your cross-section holds"),
             FieldSpec.quantity("Path length", "sample.pathLength", Dimension.LENGTH, "optical path length of the cell or film"),
             FieldSpec.text("Matrix", "sample.matrix", false, "solvent or film host, e.g. toluene"),
             FieldSpec.choice("Refresh", "sample.refresh.mode", List.of("static", "stirred", "flowing"),
                     "how the excited volume is renewed between pulses"),
             FieldSpec.optionalQuantity("Flow rate", "sample.refresh.flowRate", Dimension.VOLUMETRIC_FLOW,
-                    "volumetric flow, only for a flowing cell"));
+                    "volumetric flow, only for a flowing cell"),
+            FieldSpec.optionalQuantity("Cell volume", "sample.refresh.cellVolume", Dimension.VOLUME,
+                    "volume of the flow cell, only for a flowing cell"));
 
     /** Laser and geometry. */
     public static final List<FieldSpec> LASER = List.of(

@@ -24,7 +24,9 @@ public final class PlanTemplate {
         sample.put("name", "");
         sample.put("material", "");
         sample.put("firstExcitonPeak", "");
-        sample.put("absorbanceAtPump", "");
+        ObjectNode absorbance = sample.putObject("absorbance");
+        absorbance.put("value", "");
+        absorbance.put("at", "first-exciton");
         sample.put("pathLength", "");
         sample.put("matrix", "");
         sample.putObject("refresh").put("mode", "static");

@@ -26,8 +26,9 @@ public final class PredictionReport {
         if (!plan.lab().isEmpty()) {
             page.paragraph(plan.lab());
         }
-        page.block("summary", "Plan: " + planSource + ". Sample: " + plan.sample().name() + " (" + plan.sample().material()
-                + " in " + plan.sample().matrix() + ").");
+        page.block("summary", "Plan: " + planSource + ". Sample: " + plan.sample().spec().name() + " ("
+                + plan.sample().material().key() + " in " + plan.sample().spec().matrix().map(m -> m.name()).orElse("no matrix given")
+                + ").");
         page.block("note", "Basis of these numbers: " + prediction.basis() + ".");
         page.heading(2, "Safety");
         page.cautions(prediction.cautions());

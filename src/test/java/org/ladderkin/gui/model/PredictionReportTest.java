@@ -10,10 +10,10 @@ class PredictionReportTest {
 
     @Test
     void theReportHoldsWhatThePlannerShows() {
-        Prediction p = new BeamPrediction().predict(BeamPredictionTest.DEMO);
-        String html = PredictionReport.html(BeamPredictionTest.DEMO, "demo.plan.json", p);
-        assertThat(html).startsWith("<!DOCTYPE html>").contains(HtmlPage.escape(BeamPredictionTest.DEMO.title()))
-                .contains(HtmlPage.escape(Cautions.LASER)).contains("no kinetic model yet");
+        Prediction p = new PlannerPrediction().predict(RecomputeServiceTest.DEMO);
+        String html = PredictionReport.html(RecomputeServiceTest.DEMO, "demo.plan.json", p);
+        assertThat(html).startsWith("<!DOCTYPE html>").contains(HtmlPage.escape(RecomputeServiceTest.DEMO.title()))
+                .contains(HtmlPage.escape(Cautions.LASER)).contains("multiexciton ladder");
         for (var r : p.risks()) {
             assertThat(html).contains(HtmlPage.escape(r.name()));
         }

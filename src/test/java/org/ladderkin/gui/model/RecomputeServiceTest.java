@@ -23,7 +23,7 @@ class RecomputeServiceTest {
 
     static PlanInputs withTitle(String title) {
         return new PlanInputs(title, DEMO.lab(), DEMO.sample(), DEMO.laser(), DEMO.instruments(), DEMO.goals(),
-                DEMO.multiplicationPhotonEnergiesJ(), DEMO.limits());
+                DEMO.multiplicationPhotonEnergiesJ(), DEMO.limits(), DEMO.modelOverrides());
     }
 
     static Prediction titled(PlanInputs in) {

@@ -17,7 +17,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
 import org.ladderkin.gui.app.GuiPrefs;
 import org.ladderkin.gui.app.Theme;
-import org.ladderkin.gui.model.BeamPrediction;
+import org.ladderkin.gui.model.PlannerPrediction;
 import org.ladderkin.gui.model.RecoveryStore;
 import org.ladderkin.io.AtomicFiles;
 
@@ -41,7 +41,7 @@ class PlannerScreenshots {
             GuiPrefs prefs = new GuiPrefs(node);
             PlannerFrame frame = GuiActionRunner.execute(() -> {
                 theme.install();
-                PlannerFrame f = new PlannerFrame(prefs, new RecoveryStore(dir), new BeamPrediction());
+                PlannerFrame f = new PlannerFrame(prefs, new RecoveryStore(dir), new PlannerPrediction());
                 f.openFile(PlannerWindowTest.DEMO);
                 return f;
             });
