@@ -3,6 +3,8 @@ package org.ladderkin.kinetics.propagate;
 /**
  * Local error tolerances of the implicit integrator: the error estimate of each component must satisfy
  * |err_i| ≤ absolute + relative·|y_i|. As with any local control, these bound each step's error, not the global one.
+ * {@link ImplicitStiffIntegrator} applies them to its embedded (order-3) estimate, so its actual error is usually
+ * much smaller than asked.
  *
  * @param absolute absolute tolerance, in the units of y (a population: probability per dot)
  * @param relative relative tolerance
