@@ -13,8 +13,8 @@ import picocli.CommandLine.Spec;
         description = {
             "Plan and analyse pump-probe and time-resolved PL campaigns on semiconductor nanocrystals:",
             "multiexciton kinetics, fluence series, risks and global fits."},
-        subcommands = {PlanCommand.class, ExciteCommand.class, MaterialsCommand.class, GuiCommand.class,
-            CommandLine.HelpCommand.class},
+        subcommands = {PlanCommand.class, SimulateCommand.class, ExciteCommand.class, MaterialsCommand.class,
+            GuiCommand.class, BenchCommand.class, CommandLine.HelpCommand.class},
         footer = {"", "Quantities take units as written in the lab: 50 ps, 1 kHz, 2.5 µJ (or uJ), 0.3 mJ/cm², 400 nm.",
             "Exit codes: 0 ok, 2 bad command line, 3 bad input, 4 cannot write output, 1 internal error."})
 public final class Main implements Runnable {

@@ -92,18 +92,21 @@ public final class LadderKinetics {
 
     /** The distribution right after one pulse hits {@code before}. */
     public Populations applyPulse(Populations before, PulseExcitation pulse) {
-        double[][] e = PulseMatrix.of(space, pulse);
-        double[] b = before.probabilities();
+        return new Populations(space, apply(PulseMatrix.of(space, pulse), before.probabilities(), "just after the pulse"));
+    }
+
+    private double[] apply(double[][] e, double[] b, String where) {
         double[] a = new double[b.length];
         for (int i = 0; i < a.length; i++) {
             double s = 0;
+            double[] ei = e[i];
             for (int j = 0; j < a.length; j++) {
-                s += e[i][j] * b[j];
+                s += ei[j] * b[j];
             }
             a[i] = s;
         }
-        PopulationGuard.check(space, a, 0, "just after the pulse");
-        return new Populations(space, a);
+        PopulationGuard.check(space, a, 0, where);
+        return a;
     }
 
     /** Bleach and PL at the given delays after the pulse that produced {@code afterPulse}. */
@@ -136,9 +139,13 @@ public final class LadderKinetics {
      * @param withConvergence also compute |λ₂| and the pulses to reach 1 % (one dense eigen-decomposition)
      */
     public SteadyState steadyState(PulseExcitation pulse, double periodS, boolean withConvergence) {
-        PeriodicSteadyState train = pulseTrain(pulse, periodS);
+        if (!(periodS > 0) || !Double.isFinite(periodS)) {
+            throw new IllegalArgumentException("pulse period must be finite and > 0, was " + periodS + " s");
+        }
+        double[][] e = PulseMatrix.of(space, pulse);
+        PeriodicSteadyState train = new PeriodicSteadyState(space, periodMaps.computeIfAbsent(periodS, propagator::matrix), e);
         Populations before = new Populations(space, train.fixedPoint());
-        Populations after = applyPulse(before, pulse);
+        Populations after = new Populations(space, apply(e, before.probabilities(), "just after a pulse in the steady state"));
         double lambda2 = withConvergence ? train.secondEigenvalueModulus() : Double.NaN;
         int pulses = withConvergence ? PeriodicSteadyState.pulsesToOnePercent(lambda2) : -1;
         return new SteadyState(before, after, before.excitedFraction(), before.chargedFraction(), lambda2, pulses);

@@ -16,8 +16,8 @@ class ConservationPropertyTest {
     void probabilityIsConservedAndNonNegative(long seed) {
         SplittableRandom rnd = new SplittableRandom(seed);
         KineticModel model = TestModels.random(rnd);
-        PulseExcitation pulse = rnd.nextBoolean() ? new PulseExcitation.Poisson(rnd.nextDouble() * 5)
-                : new PulseExcitation.Multiplication(rnd.nextDouble() * 3, rnd.nextDouble());
+        PulseExcitation pulse = rnd.nextBoolean() ? new PulseExcitation.Poisson(rnd.nextDouble() * 2.5)
+                : new PulseExcitation.Multiplication(rnd.nextDouble() * 1.5, rnd.nextDouble());
         LadderKinetics k = LadderKinetics.forPulses(model, pulse);
         Populations p = k.applyPulse(Populations.ground(k.space()), pulse);
         for (double t : new double[] {1e-14, 1e-12, 1e-10, 1e-8, 1e-6, 1e-3}) {

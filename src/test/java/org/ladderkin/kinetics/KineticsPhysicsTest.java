@@ -154,6 +154,29 @@ class KineticsPhysicsTest {
         assertThat(ss.pulsesToOnePercent()).isGreaterThan(10);
     }
 
+    @Test
+    void deflatedSpectralRadiusAgreesWithTheEigenvalue() {
+        KineticModel m = TestModels.ladder(200e-9, RadiativeScaling.LINEAR, 50e-12, AugerScaling.STATISTICAL, 2, 0);
+        PulseExcitation pulse = new PulseExcitation.Poisson(0.3);
+        LadderKinetics k = LadderKinetics.forPulses(m, pulse);
+        PeriodicSteadyState train = k.pulseTrain(pulse, 12.5e-9);
+        assertThat(train.deflatedSpectralRadius()).isCloseTo(train.secondEigenvalueModulus(),
+                org.assertj.core.data.Offset.offset(1e-6));
+    }
+
+    @Test
+    void buildUpApproachesTheFixedPoint() {
+        KineticModel m = TestModels.ladder(200e-9, RadiativeScaling.LINEAR, 50e-12, AugerScaling.STATISTICAL, 2, 0);
+        PulseExcitation pulse = new PulseExcitation.Poisson(0.5);
+        LadderKinetics k = LadderKinetics.forPulses(m, pulse);
+        PeriodicSteadyState train = k.pulseTrain(pulse, 12.5e-9);
+        java.util.List<double[]> build = train.buildUp(200);
+        assertThat(build).hasSize(200);
+        assertThat(build.get(0)[0]).isEqualTo(1.0);
+        assertThat(distance(build.get(199), train.fixedPoint())).isLessThan(1e-9);
+        assertThat(distance(build.get(1), train.fixedPoint())).isGreaterThan(1e-3);
+    }
+
     private static double distance(double[] a, double[] b) {
         double s = 0;
         for (int i = 0; i < a.length; i++) {

@@ -36,7 +36,7 @@ public final class TestModels {
         return ladder(20e-9, RadiativeScaling.STATISTICAL, 50e-12, AugerScaling.STATISTICAL, 2, 30);
     }
 
-    /** A random model with every process switched on at random rates (1/(0.5 ps) to 1/(5 µs)). */
+    /** A random model with every process switched on at random rates (1/(0.5 ps) to 1/(5 µs)), Nmax 3 to 10. */
     public static KineticModel random(SplittableRandom rnd) {
         List<RateLaw> laws = new ArrayList<>();
         laws.add(new RadiativeDecay(rate(rnd), rnd.nextBoolean() ? RadiativeScaling.LINEAR : RadiativeScaling.STATISTICAL,
@@ -60,7 +60,7 @@ public final class TestModels {
         if (rnd.nextBoolean()) {
             charges.add(left == Charge.NEGATIVE ? Charge.POSITIVE : Charge.NEGATIVE);
         }
-        return new KineticModel(laws, charges, hot, rnd.nextBoolean() ? 2 : 8, 0);
+        return new KineticModel(laws, charges, hot, rnd.nextBoolean() ? 2 : 8, 3 + rnd.nextInt(8));
     }
 
     private static double rate(SplittableRandom rnd) {

@@ -21,6 +21,11 @@ import java.util.List;
  * enlarged (more is clustered) and the decomposition redone; in the limit everything is one cluster, i.e. a plain
  * Padé exponential per time.
  *
+ * <p>Known limit: ladders that resolve hot excitons have, within each N, equally spaced rates (h·k_cool), whose
+ * modal basis is conditioned like binomial coefficients (‖V‖·‖V⁻¹‖ ≈ 1e15 at Nmax = 20). The growth guard then
+ * clusters almost everything and each delay costs a dense Padé exponential of the big block (tens of ms at 231
+ * states). Correct, but slow.
+ *
  * <p>Many delays are cheap: {@link #onGrid} precomputes the mode factors for a time grid once; each observable trace
  * then costs O(delays × active modes), modes with λt &lt; −745 (underflow) being skipped.
  */
@@ -33,6 +38,8 @@ public final class ExactPropagator {
     private static final double UNDERFLOW = -745;
     /** Starting relative gap, as recommended by Davies & Higham (2003) for their blocking. */
     public static final double DEFAULT_DELTA = 0.1;
+    /** Most doubles of cluster exponentials one grid caches (16 MB). */
+    private static final long CACHE_LIMIT = 2_000_000;
 
     private final int n;
     private final double[][] v;
@@ -43,6 +50,7 @@ public final class ExactPropagator {
     private final int[] singleIndex;
     private final double[] singleLambda;
     private final List<Cluster> clusters;
+    private boolean conservative;
 
     /** A group of (nearly) coincident eigenvalues with its triangular block of B. */
     private record Cluster(int[] members, double[][] block, double muPerS) {
@@ -89,6 +97,7 @@ public final class ExactPropagator {
                 continue;
             }
             best = decompose(q, d);
+            best.conservative = columnsSumToZero(q);
             if (best.growth <= GROWTH_LIMIT) {
                 return best;
             }
@@ -113,7 +122,8 @@ public final class ExactPropagator {
                     rhs -= q[i][k] * v[k][j];
                 }
                 if (cl[i] != cl[j]) {
-                    v[i][j] = rhs / (q[i][i] - q[j][j]);
+                    // rhs is exactly 0 when j cannot reach i; then no division (the eigenvalues may even be equal)
+                    v[i][j] = rhs == 0 ? 0 : rhs / (q[i][i] - q[j][j]);
                 } else {
                     b[i][j] = -rhs;
                 }
@@ -169,28 +179,80 @@ public final class ExactPropagator {
         return new ExactPropagator(n, v, w, delta, growth, singleIndex, singleLambda, List.copyOf(clusters));
     }
 
-    /** Cluster label of each diagonal entry: sorted eigenvalues are chained while neighbours are within δ. */
+    /**
+     * Cluster label of each diagonal entry. Two states share a cluster when their eigenvalues are within relative
+     * gap δ and one can reach the other through the generator (closed transitively). States that cannot reach each
+     * other never need a division by their eigenvalue difference (that entry of V is exactly 0), so they are not
+     * merged; this keeps clusters small on large ladders where many unrelated states have similar lifetimes.
+     */
     private static int[] clusterLabels(double[][] q, double delta) {
         int n = q.length;
-        Integer[] order = new Integer[n];
-        for (int i = 0; i < n; i++) {
-            order[i] = i;
-        }
-        Arrays.sort(order, (x, y) -> Double.compare(q[x][x], q[y][y]));
-        int[] cl = new int[n];
-        int label = 0;
-        for (int k = 0; k < n; k++) {
-            if (k > 0) {
-                double a = q[order[k - 1]][order[k - 1]];
-                double c = q[order[k]][order[k]];
-                boolean close = Math.abs(c - a) <= delta * Math.max(Math.abs(a), Math.abs(c));
-                if (!close) {
-                    label++;
+        long[][] reach = new long[n][(n + 63) / 64];
+        int[] parent = new int[n];
+        for (int j = 0; j < n; j++) {
+            parent[j] = j;
+            for (int k = 0; k < j; k++) {
+                if (q[k][j] != 0) {
+                    reach[j][k >>> 6] |= 1L << (k & 63);
+                    long[] rk = reach[k];
+                    long[] rj = reach[j];
+                    for (int w = 0; w < rk.length; w++) {
+                        rj[w] |= rk[w];
+                    }
                 }
             }
-            cl[order[k]] = label;
         }
-        return cl;
+        for (int j = 0; j < n; j++) {
+            double c = q[j][j];
+            for (int i = 0; i < j; i++) {
+                if ((reach[j][i >>> 6] & (1L << (i & 63))) == 0) {
+                    continue;
+                }
+                double a = q[i][i];
+                if (Math.abs(c - a) <= delta * Math.max(Math.abs(a), Math.abs(c))) {
+                    int ri = find(parent, i);
+                    int rj = find(parent, j);
+                    if (ri != rj) {
+                        parent[Math.max(ri, rj)] = Math.min(ri, rj);
+                    }
+                }
+            }
+        }
+        int[] label = new int[n];
+        int[] byRoot = new int[n];
+        Arrays.fill(byRoot, -1);
+        int next = 0;
+        for (int i = 0; i < n; i++) {
+            int r = find(parent, i);
+            if (byRoot[r] < 0) {
+                byRoot[r] = next++;
+            }
+            label[i] = byRoot[r];
+        }
+        return label;
+    }
+
+    private static int find(int[] parent, int i) {
+        while (parent[i] != i) {
+            parent[i] = parent[parent[i]];
+            i = parent[i];
+        }
+        return i;
+    }
+
+    private static boolean columnsSumToZero(double[][] q) {
+        for (int j = 0; j < q.length; j++) {
+            double s = 0;
+            double scale = 0;
+            for (double[] row : q) {
+                s += row[j];
+                scale += Math.abs(row[j]);
+            }
+            if (Math.abs(s) > 1e-13 * scale) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static double normInf(double[][] a) {
@@ -225,13 +287,21 @@ public final class ExactPropagator {
         return clusters.stream().mapToInt(c -> c.members.length).sum();
     }
 
-    /** p(t) = exp(Qt)·p0, t ≥ 0 in seconds. Entries within their own rounding bound of zero are set to zero. */
+    /**
+     * p(t) = exp(Qt)·p0, t ≥ 0 in seconds. Entries within their own rounding bound of zero are set to zero. For a
+     * conservative generator (columns summing to zero, as every master equation here) state 0 is computed as the
+     * complement of the others, so Σp is kept to rounding even where the modal basis is ill-conditioned.
+     */
     public double[] propagate(double[] p0, double tS) {
         requireTime(tS);
         double[][][] ce = clusterExps(tS);
         double[] y = modal(p0, tS, false, ce);
         double[] yAbs = modal(p0, tS, true, ce);
         double[] p = new double[n];
+        double total = 0;
+        for (double x : p0) {
+            total += x;
+        }
         for (int i = 0; i < n; i++) {
             double s = 0;
             double bound = 0;
@@ -242,6 +312,15 @@ public final class ExactPropagator {
             }
             // a true population is ≥ 0; a negative value inside the rounding bound is rounding, not physics
             p[i] = (s < 0 && -s <= 8 * n * Math.ulp(1.0) * bound) ? 0.0 : s;
+        }
+        if (conservative && n > 1) {
+            // 1ᵀQ = 0, so Σp(t) = Σp(0) exactly; the ground state (index 0, reached by every decay path) takes the
+            // complement, which moves the basis rounding into the largest population where it is relatively smallest
+            double others = 0;
+            for (int i = 1; i < n; i++) {
+                others += p[i];
+            }
+            p[0] = total - others;
         }
         return p;
     }
@@ -371,9 +450,14 @@ public final class ExactPropagator {
                 }
                 singleFactor[j] = f;
                 for (int c = 0; c < clusters.size(); c++) {
-                    clusterFactor[j][c] = clusterExp(clusters.get(c), t);
+                    // large blocks are recomputed per trace instead of cached, to bound memory
+                    clusterFactor[j][c] = cacheable(clusters.get(c), nt) ? clusterExp(clusters.get(c), t) : null;
                 }
             }
+        }
+
+        private static boolean cacheable(Cluster c, int times) {
+            return (long) c.members.length * c.members.length * times <= CACHE_LIMIT;
         }
 
         public double[] timesS() {
@@ -415,6 +499,7 @@ public final class ExactPropagator {
                 }
             }
             double[][] out = new double[no][timesS.length];
+            double[][][] scratch = new double[clusters.size()][][];
             for (int j = 0; j < timesS.length; j++) {
                 double[] f = singleFactor[j];
                 int a = active[j];
@@ -426,6 +511,10 @@ public final class ExactPropagator {
                     }
                     for (int c = 0; c < clusters.size(); c++) {
                         double[][] e = clusterFactor[j][c];
+                        if (e == null && !cacheable(clusters.get(c), timesS.length)) {
+                            e = r == 0 ? clusterExp(clusters.get(c), timesS[j]) : scratch[c];
+                            scratch[c] = e;
+                        }
                         if (e == null) {
                             continue;
                         }

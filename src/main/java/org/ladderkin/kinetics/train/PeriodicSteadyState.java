@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import org.hipparchus.complex.Complex;
+import org.hipparchus.exception.MathIllegalStateException;
 import org.hipparchus.linear.EigenDecompositionNonSymmetric;
 import org.hipparchus.linear.MatrixUtils;
 import org.ladderkin.kinetics.Populations;
@@ -72,15 +73,67 @@ public final class PeriodicSteadyState {
         return p;
     }
 
-    /** |λ₂| of M; 0 for a one-state ladder. Costs one dense nonsymmetric eigen-decomposition. */
+    /**
+     * |λ₂| of M; 0 for a one-state ladder. Costs one dense nonsymmetric eigen-decomposition (Hipparchus); when its QR
+     * iteration does not converge, falls back to {@link #deflatedSpectralRadius()}.
+     */
     public double secondEigenvalueModulus() {
-        Complex[] ev = new EigenDecompositionNonSymmetric(MatrixUtils.createRealMatrix(map)).getEigenvalues();
+        Complex[] ev;
+        try {
+            ev = new EigenDecompositionNonSymmetric(MatrixUtils.createRealMatrix(map)).getEigenvalues();
+        } catch (MathIllegalStateException e) {
+            return deflatedSpectralRadius();
+        }
         double[] mod = new double[ev.length];
         for (int i = 0; i < ev.length; i++) {
             mod[i] = ev[i].norm();
         }
         Arrays.sort(mod);
         return mod.length < 2 ? 0 : mod[mod.length - 2];
+    }
+
+    /**
+     * Spectral radius of M − p_ss·1ᵀ (M with its eigenvalue 1 deflated, the others unchanged because 1ᵀM = 1ᵀ), by
+     * Gelfand's formula ρ = lim ‖A^k‖^{1/k} with k = 2³⁰ reached by 30 normalised squarings; the non-normal constant
+     * enters only as its 2⁻³⁰-th power.
+     */
+    public double deflatedSpectralRadius() {
+        double[] fixed = fixedPoint();
+        int n = map.length;
+        double[][] a = new double[n][n];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                a[i][j] = map[i][j] - fixed[i];
+            }
+        }
+        double logRho = 0;
+        double weight = 1;
+        for (int k = 0; k < 30; k++) {
+            double s = 0;
+            for (double[] row : a) {
+                for (double x : row) {
+                    s = Math.max(s, Math.abs(x));
+                }
+            }
+            if (s == 0) {
+                return 0;
+            }
+            logRho += Math.log(s) * weight;
+            weight /= 2;
+            for (double[] row : a) {
+                for (int j = 0; j < n; j++) {
+                    row[j] /= s;
+                }
+            }
+            a = PadeExponential.multiply(a, a);
+        }
+        double s = 0;
+        for (double[] row : a) {
+            for (double x : row) {
+                s = Math.max(s, Math.abs(x));
+            }
+        }
+        return s == 0 ? 0 : Math.exp(logRho + Math.log(s) * weight);
     }
 
     /** Pulses for a transient to shrink to 1 % given |λ₂| (at least 1). */

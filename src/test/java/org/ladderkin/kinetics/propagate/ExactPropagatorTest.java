@@ -75,7 +75,20 @@ class ExactPropagatorTest {
             worst = Math.max(worst, maxDiff(p.matrix(t), reference(q, t)));
         }
         Reference.check("max |exp(Qt) − reference|, 8-state chain with all rates equal", worst, 0, 1e-13);
-        // closed form for the chain: P(state 0 at t | start in 2) = 1 − e^{−kt}(1 + kt)
+    }
+
+    @Test
+    @CheckedAgainst(source = "derived: chain 2 → 1 → 0 with equal rates k, P₀(t) = 1 − e^{−kt}(1 + kt) (Erlang-2 distribution)",
+            kind = CheckedAgainst.Kind.CLOSED_FORM)
+    void exactlyCoincidentRatesMatchTheErlangClosedForm() {
+        int n = 8;
+        double k = 1e9;
+        double[][] q = new double[n][n];
+        for (int i = 1; i < n; i++) {
+            q[i][i] = -k;
+            q[i - 1][i] = k;
+        }
+        ExactPropagator p = ExactPropagator.of(q);
         double t = 1.3e-9;
         Reference.check("P(0,t) from state 2, equal rates, vs 1 − e^{−kt}(1+kt)", p.propagate(unit(n, 2), t)[0],
                 1 - Math.exp(-k * t) * (1 + k * t), 1e-14);

@@ -1,0 +1,112 @@
+package org.ladderkin.cli;
+
+import java.io.PrintWriter;
+import java.lang.management.ManagementFactory;
+import java.lang.management.MemoryPoolMXBean;
+import java.lang.management.MemoryType;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import java.util.function.DoubleSupplier;
+import org.ladderkin.kinetics.BenchCases;
+import org.ladderkin.kinetics.KineticModel;
+import org.ladderkin.kinetics.LadderKinetics;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code ladderkin bench}: times the engine's four speed cases (the same work as the JMH benchmark
+ * {@code KineticsBenchmark}) and prints milliseconds per case and the peak heap used. A quick check, not a
+ * substitute for JMH: it warms up, then reports the median of repeated runs.
+ */
+@Command(name = "bench", mixinStandardHelpOptions = true,
+        description = {"Time the kinetics engine on its four speed cases (31-state ladder, Nmax = 30; 1000 log delays):",
+            "one trace after one pulse; 40-value <N> sweeps with pulse-train steady state at 1 kHz and 80 MHz;",
+            "the cooling-resolved model at Nmax = 20. Prints ms per case and peak heap used."})
+final class BenchCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Option(names = "--repeats", paramLabel = "N", defaultValue = "15", description = "timed runs per case (default ${DEFAULT-VALUE})")
+    int repeats;
+
+    @Option(names = "--skip-cooling", description = "skip the slow cooling-resolved case")
+    boolean skipCooling;
+
+    @Override
+    public Integer call() {
+        if (repeats < 1 || repeats > 10_000) {
+            throw new IllegalArgumentException("--repeats must be between 1 and 10000, was " + repeats);
+        }
+        PrintWriter out = spec.commandLine().getOut();
+        resetPeaks();
+        KineticModel ladder = BenchCases.ladder31();
+        LadderKinetics built = LadderKinetics.on(ladder, ladder.space(30));
+        out.println("case                                              median ms");
+        row(out, "trace, 31 states, 1000 delays (engine built)", time(() -> BenchCases.traceOn(built, 3).bleach()[0]));
+        row(out, "trace, 31 states, 1000 delays (incl. set-up)", time(() -> BenchCases.singleTrace(ladder).bleach()[0]));
+        row(out, "sweep 40 <N>, steady state at 1 kHz", time(() -> BenchCases.sweep(1e3, false)));
+        row(out, "sweep 40 <N>, steady state at 80 MHz", time(() -> BenchCases.sweep(80e6, false)));
+        row(out, "sweep 40 <N> at 80 MHz, with pulses-to-1%", time(() -> BenchCases.sweep(80e6, true)));
+        KineticModel cooling = BenchCases.cooling21();
+        if (skipCooling) {
+            out.println("cooling-resolved case skipped (--skip-cooling)");
+        } else {
+            // one cold run: this case takes about a minute (see DEVELOPERS notes), so it is not repeated
+            long t0 = System.nanoTime();
+            double check = BenchCases.singleTrace(cooling).bleach()[0];
+            row(out, "cooling-resolved, Nmax=20 (231 states), 1 trace, 1 run", (System.nanoTime() - t0) / 1e6 + 0 * check);
+        }
+        out.printf(Locale.ROOT, "peak heap used: %.1f MB (max heap %.0f MB)%n", peakHeapMb(),
+                Runtime.getRuntime().maxMemory() / 1048576.0);
+        out.flush();
+        return ExitCodes.OK;
+    }
+
+    private static void row(PrintWriter out, String name, double ms) {
+        out.printf(Locale.ROOT, "%-50s %9.3f%n", name, ms);
+    }
+
+    /** Median wall time in ms after warm-up runs. */
+    private double time(DoubleSupplier work) {
+        double sink = 0;
+        long warmEnd = System.nanoTime() + 300_000_000L;
+        int warm = 0;
+        while (warm < 3 || System.nanoTime() < warmEnd && warm < 2000) {
+            sink += work.getAsDouble();
+            warm++;
+        }
+        double[] ms = new double[repeats];
+        for (int i = 0; i < repeats; i++) {
+            long t0 = System.nanoTime();
+            sink += work.getAsDouble();
+            ms[i] = (System.nanoTime() - t0) / 1e6;
+        }
+        if (Double.isNaN(sink)) {
+            throw new IllegalStateException("benchmark produced NaN");
+        }
+        java.util.Arrays.sort(ms);
+        return ms[repeats / 2];
+    }
+
+    private static void resetPeaks() {
+        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
+            if (pool.getType() == MemoryType.HEAP) {
+                pool.resetPeakUsage();
+            }
+        }
+    }
+
+    /** Sum of the heap pools' peak usage since the reset (an upper bound on the live heap at any instant). */
+    private static double peakHeapMb() {
+        long bytes = 0;
+        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
+            if (pool.getType() == MemoryType.HEAP) {
+                bytes += pool.getPeakUsage().getUsed();
+            }
+        }
+        return bytes / 1048576.0;
+    }
+}

@@ -1,0 +1,282 @@
+package org.ladderkin.cli;
+
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+import java.util.concurrent.Callable;
+import org.ladderkin.io.ModelCodec;
+import org.ladderkin.io.ResolvedJson;
+import org.ladderkin.kinetics.KineticModel;
+import org.ladderkin.kinetics.LadderKinetics;
+import org.ladderkin.kinetics.ModelParameters;
+import org.ladderkin.kinetics.Populations;
+import org.ladderkin.kinetics.Trace;
+import org.ladderkin.kinetics.rate.AugerIonisation;
+import org.ladderkin.kinetics.rate.RadiativeDecay;
+import org.ladderkin.kinetics.state.Charge;
+import org.ladderkin.kinetics.train.PulseExcitation;
+import org.ladderkin.kinetics.train.SteadyState;
+import org.ladderkin.units.Dimension;
+import org.ladderkin.units.Quantity;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code ladderkin simulate [MODEL.json] --n-avg 0.1,1,3 [--rep-rate 1kHz] [--delays 0.1ps..1ms:1000log]}: bleach
+ * and PL traces in the periodic steady state of a pulse train (or after one pulse on fresh dots without
+ * {@code --rep-rate}). The model comes from a file or entirely from flags.
+ */
+@Command(name = "simulate", mixinStandardHelpOptions = true,
+        description = {"Band-edge bleach (normalised to one filled level) and PL rate (photons/s per dot) after a pump pulse,",
+            "for each <N>, in the periodic steady state of the pulse train when --rep-rate is given.",
+            "The model is MODEL.json (schema ladderkin.model/1) or built from the model flags (--tau-rad ... --degeneracy)."})
+final class SimulateCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", arity = "0..1", paramLabel = "MODEL.json", description = "model file (omit to build the model from flags)")
+    Path modelFile;
+
+    @Option(names = "--n-avg", split = ",", paramLabel = "N", defaultValue = "1",
+            description = "mean excitons per dot per pulse <N> (with --multiplication-eta: mean absorbed photons), comma list")
+    List<String> nAvg;
+
+    @Option(names = "--rep-rate", paramLabel = "FREQ", description = "pulse repetition rate, e.g. 1kHz; omit for a single pulse on fresh dots")
+    String repRate;
+
+    @Option(names = "--delays", paramLabel = "GRID", defaultValue = "0.1ps..1ms:1000log",
+            description = "delays: FROM..TO:COUNTlog, FROM..TO:COUNTlin or a comma list (default ${DEFAULT-VALUE})")
+    String delays;
+
+    @Option(names = "--format", paramLabel = "csv|json", defaultValue = "csv", description = "output format (default csv)")
+    String format;
+
+    @Option(names = "--multiplication-eta", paramLabel = "ETA",
+            description = "carrier multiplication: probability that one absorbed photon gives two excitons")
+    Double eta;
+
+    @Option(names = "--tau-rad", paramLabel = "TIME", description = "single-exciton radiative lifetime (flag model)")
+    String tauRad;
+
+    @Option(names = "--radiative-scaling", paramLabel = "LAW", defaultValue = "statistical",
+            description = "radiative N-scaling: linear | statistical (default ${DEFAULT-VALUE})")
+    String radiativeScaling;
+
+    @Option(names = "--charged-radiative-factor", paramLabel = "X", defaultValue = "2",
+            description = "k_rad(charged)/k_rad(neutral) (default ${DEFAULT-VALUE})")
+    double chargedRadiativeFactor;
+
+    @Option(names = "--tau-auger2", paramLabel = "TIME", description = "biexciton Auger lifetime (flag model)")
+    String tauAuger2;
+
+    @Option(names = "--auger-scaling", paramLabel = "LAW", defaultValue = "statistical",
+            description = "Auger N-scaling: statistical | pairs | quadratic (default ${DEFAULT-VALUE})")
+    String augerScaling;
+
+    @Option(names = "--tau-trion-negative", paramLabel = "TIME", description = "negative-trion Auger lifetime")
+    String tauTrionNegative;
+
+    @Option(names = "--tau-trion-positive", paramLabel = "TIME", description = "positive-trion Auger lifetime")
+    String tauTrionPositive;
+
+    @Option(names = "--tau-trap", paramLabel = "TIME", description = "trapping lifetime per exciton (off when omitted)")
+    String tauTrap;
+
+    @Option(names = "--tau-cool", paramLabel = "TIME", description = "intraband cooling time per hot exciton (off when omitted)")
+    String tauCool;
+
+    @Option(names = "--charges", split = ",", paramLabel = "CHARGE", description = "excess charges that exist: negative, positive")
+    List<String> charges;
+
+    @Option(names = "--ionisation-probability", paramLabel = "P", defaultValue = "0",
+            description = "probability that an Auger event ejects a carrier (default ${DEFAULT-VALUE})")
+    double ionisationProbability;
+
+    @Option(names = "--ionisation-leaves", paramLabel = "CHARGE", defaultValue = "negative",
+            description = "charge left on the dot after ejection: negative | positive (default ${DEFAULT-VALUE})")
+    String ionisationLeaves;
+
+    @Option(names = "--tau-neutralisation", paramLabel = "TIME", description = "time for a charged dot to lose its excess carrier")
+    String tauNeutralisation;
+
+    @Option(names = "--tau-refresh", paramLabel = "TIME", description = "sample exchange time by stirring or flow")
+    String tauRefresh;
+
+    @Option(names = "--degeneracy", paramLabel = "G", defaultValue = "2", description = "band-edge degeneracy g (default ${DEFAULT-VALUE})")
+    int degeneracy;
+
+    @Option(names = "--nmax", paramLabel = "N", description = "highest exciton number kept (default: automatic, tail < 1e-9)")
+    Integer nMax;
+
+    @Override
+    public Integer call() throws Exception {
+        if (!format.equals("csv") && !format.equals("json")) {
+            throw new IllegalArgumentException("--format must be csv or json, was " + format);
+        }
+        KineticModel model = model();
+        double[] delaysS = DelayGrid.parse(delays);
+        double periodS = Double.NaN;
+        if (repRate != null) {
+            periodS = 1 / positive(repRate, Dimension.FREQUENCY, "--rep-rate");
+        }
+        List<PulseExcitation> pulses = new ArrayList<>();
+        for (String n : nAvg) {
+            double mean;
+            try {
+                mean = Double.parseDouble(n.trim());
+            } catch (NumberFormatException e) {
+                throw new IllegalArgumentException("--n-avg value '" + n + "' is not a number");
+            }
+            if (!(mean >= 0) || mean > 200) {
+                throw new IllegalArgumentException("--n-avg values must be between 0 and 200, was " + n);
+            }
+            pulses.add(eta == null ? new PulseExcitation.Poisson(mean) : new PulseExcitation.Multiplication(mean, eta));
+        }
+        LadderKinetics kinetics = LadderKinetics.forPulses(model, pulses.toArray(PulseExcitation[]::new));
+        List<Trace> traces = new ArrayList<>();
+        List<SteadyState> states = new ArrayList<>();
+        for (PulseExcitation p : pulses) {
+            if (Double.isNaN(periodS)) {
+                traces.add(kinetics.trace(kinetics.applyPulse(Populations.ground(kinetics.space()), p), delaysS));
+                states.add(null);
+            } else {
+                SteadyState ss = kinetics.steadyState(p, periodS, true);
+                traces.add(kinetics.trace(ss.afterPulse(), delaysS));
+                states.add(ss);
+            }
+        }
+        PrintWriter out = spec.commandLine().getOut();
+        if (format.equals("csv")) {
+            writeCsv(out, delaysS, traces);
+        } else {
+            out.println(ResolvedJson.toText(json(kinetics, periodS, delaysS, traces, states)));
+        }
+        out.flush();
+        return ExitCodes.OK;
+    }
+
+    private void writeCsv(PrintWriter out, double[] delaysS, List<Trace> traces) {
+        StringBuilder header = new StringBuilder("delay_ps");
+        for (String n : nAvg) {
+            header.append(",bleach@N=").append(n.trim()).append(",pl@N=").append(n.trim());
+        }
+        out.println(header);
+        StringBuilder row = new StringBuilder();
+        for (int j = 0; j < delaysS.length; j++) {
+            row.setLength(0);
+            row.append(num(delaysS[j] * 1e12));
+            for (Trace t : traces) {
+                row.append(',').append(num(t.bleach()[j])).append(',').append(num(t.photoluminescencePerS()[j]));
+            }
+            out.println(row);
+        }
+    }
+
+    private ObjectNode json(LadderKinetics kinetics, double periodS, double[] delaysS, List<Trace> traces,
+                            List<SteadyState> states) {
+        ObjectNode root = ResolvedJson.object();
+        root.put("schema", "ladderkin.simulation/1");
+        root.put("states", kinetics.space().size());
+        root.put("nMax", kinetics.space().nMax());
+        if (!Double.isNaN(periodS)) {
+            root.put("repetitionRateHz", 1 / periodS);
+        }
+        ArrayNode d = root.putArray("delaysPs");
+        for (double x : delaysS) {
+            d.add(x * 1e12);
+        }
+        ArrayNode series = root.putArray("series");
+        for (int i = 0; i < traces.size(); i++) {
+            ObjectNode s = series.addObject();
+            s.put("nAvg", nAvg.get(i).trim());
+            SteadyState ss = states.get(i);
+            if (ss != null) {
+                ObjectNode o = s.putObject("steadyState");
+                o.put("residualExcitedFractionAtNextPulse", ss.residualExcitedFraction());
+                o.put("chargedFractionAtNextPulse", ss.chargedFraction());
+                o.put("secondEigenvalueModulus", ss.secondEigenvalueModulus());
+                o.put("pulsesToWithinOnePercent", ss.pulsesToOnePercent());
+            }
+            ArrayNode b = s.putArray("bleach");
+            for (double x : traces.get(i).bleach()) {
+                b.add(x);
+            }
+            ArrayNode pl = s.putArray("plPerS");
+            for (double x : traces.get(i).photoluminescencePerS()) {
+                pl.add(x);
+            }
+        }
+        return root;
+    }
+
+    /** 15 significant digits, locale-independent. */
+    static String num(double x) {
+        return String.format(Locale.ROOT, "%.15g", x);
+    }
+
+    private KineticModel model() {
+        boolean anyModelFlag = tauRad != null || tauAuger2 != null;
+        if (modelFile != null) {
+            if (anyModelFlag) {
+                throw new IllegalArgumentException("give either MODEL.json or --tau-rad/--tau-auger2, not both");
+            }
+            ModelParameters p = ModelCodec.read(modelFile).parameters();
+            return nMax == null ? p.toModel() : p.toModel().withFixedNMax(nMax);
+        }
+        if (tauRad == null || tauAuger2 == null) {
+            throw new IllegalArgumentException("without MODEL.json, --tau-rad and --tau-auger2 are required");
+        }
+        Set<Charge> cs = EnumSet.noneOf(Charge.class);
+        if (charges != null) {
+            for (String c : charges) {
+                cs.add(charge(c, "--charges"));
+            }
+        }
+        AugerIonisation ion = ionisationProbability > 0
+                ? new AugerIonisation(ionisationProbability, charge(ionisationLeaves, "--ionisation-leaves"))
+                : AugerIonisation.NONE;
+        double negTrion = rateOf(tauTrionNegative, "--tau-trion-negative");
+        double posTrion = rateOf(tauTrionPositive, "--tau-trion-positive");
+        if (cs.contains(Charge.NEGATIVE) && negTrion == 0 || cs.contains(Charge.POSITIVE) && posTrion == 0) {
+            throw new IllegalArgumentException("charged dots need --tau-trion-negative / --tau-trion-positive for their charges");
+        }
+        ModelParameters p = new ModelParameters(rateOf(tauRad, "--tau-rad"), ModelParameters.radiativeScaling(radiativeScaling),
+                chargedRadiativeFactor >= 0 ? chargedRadiativeFactor : RadiativeDecay.DEFAULT_CHARGED_FACTOR,
+                rateOf(tauAuger2, "--tau-auger2"), ModelParameters.augerScaling(augerScaling), negTrion, posTrion,
+                rateOf(tauTrap, "--tau-trap"), rateOf(tauCool, "--tau-cool"), cs, ion,
+                rateOf(tauNeutralisation, "--tau-neutralisation"), rateOf(tauRefresh, "--tau-refresh"), degeneracy,
+                nMax == null ? 0 : nMax);
+        return p.toModel();
+    }
+
+    private static Charge charge(String text, String flag) {
+        return switch (text.trim()) {
+            case "negative" -> Charge.NEGATIVE;
+            case "positive" -> Charge.POSITIVE;
+            default -> throw new IllegalArgumentException(flag + " must be negative or positive, was " + text);
+        };
+    }
+
+    /** 1/lifetime, or 0 when the flag is absent. */
+    private static double rateOf(String lifetime, String flag) {
+        return lifetime == null ? 0 : 1 / positive(lifetime, Dimension.TIME, flag);
+    }
+
+    private static double positive(String text, Dimension d, String flag) {
+        double x = Quantity.parseSi(text, d);
+        if (!(x > 0) || !Double.isFinite(x)) {
+            throw new IllegalArgumentException(flag + " must be > 0, was " + text);
+        }
+        return x;
+    }
+}
