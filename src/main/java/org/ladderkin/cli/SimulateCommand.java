@@ -65,6 +65,33 @@ final class SimulateCommand implements Callable<Integer> {
             description = "carrier multiplication: probability that one absorbed photon gives two excitons")
     Double eta;
 
+    @Option(names = "--observable", split = ",", paramLabel = "NAME", defaultValue = "bleach,pl",
+            description = "columns to print: bleach, pl, spectrum, charged, temperature (default ${DEFAULT-VALUE})")
+    List<String> observables;
+
+    @Option(names = "--pump", paramLabel = "PHOTON", description = "pump wavelength or photon energy (temperature)")
+    String pump;
+
+    @Option(names = "--first-exciton", paramLabel = "PHOTON", description = "first-exciton peak, wavelength or energy (spectrum, temperature)")
+    String firstExciton;
+
+    @Option(names = "--material", paramLabel = "KEY", description = "material for the dot's heat capacity and sizing curve (temperature, spectrum)")
+    String material;
+
+    @Option(names = "--diameter", paramLabel = "LENGTH", description = "dot diameter, with --material")
+    String diameter;
+
+    @Option(names = "--spectrum", paramLabel = "A..B:N", defaultValue = "",
+            description = "photon energies of the spectrum columns, e.g. 1.9eV..2.3eV:41 (default: E₁S ± 0.25 eV, 51 points)")
+    String spectrumGrid;
+
+    @Option(names = "--line-width", paramLabel = "ENERGY", defaultValue = "100 meV", description = "1S line FWHM (spectrum)")
+    String lineWidth;
+
+    @Option(names = "--biexciton-shift", paramLabel = "ENERGY", defaultValue = "0 meV",
+            description = "red shift of the 1S line in a dot holding a cold exciton (spectrum)")
+    String biexcitonShift;
+
     @Option(names = "--tau-rad", paramLabel = "TIME", description = "single-exciton radiative lifetime (flag model)")
     String tauRad;
 
@@ -145,45 +172,115 @@ final class SimulateCommand implements Callable<Integer> {
         LadderKinetics kinetics = LadderKinetics.forPulses(model, pulses.toArray(PulseExcitation[]::new));
         List<Trace> traces = new ArrayList<>();
         List<SteadyState> states = new ArrayList<>();
-        for (PulseExcitation p : pulses) {
+        List<List<SimulatedObservables.Column>> columns = new ArrayList<>();
+        SimulatedObservables.Inputs extra = extraInputs();
+        for (int i = 0; i < pulses.size(); i++) {
+            PulseExcitation p = pulses.get(i);
+            Populations before;
+            Populations after;
+            SteadyState ss = null;
             if (Double.isNaN(periodS)) {
-                traces.add(kinetics.trace(kinetics.applyPulse(Populations.ground(kinetics.space()), p), delaysS));
-                states.add(null);
+                before = Populations.ground(kinetics.space());
+                after = kinetics.applyPulse(before, p);
             } else {
-                SteadyState ss = kinetics.steadyState(p, periodS, true);
-                traces.add(kinetics.trace(ss.afterPulse(), delaysS));
-                states.add(ss);
+                ss = kinetics.steadyState(p, periodS, true);
+                before = ss.beforePulse();
+                after = ss.afterPulse();
             }
+            traces.add(kinetics.trace(after, delaysS));
+            states.add(ss);
+            columns.add(SimulatedObservables.columns(observables, nAvg.get(i).trim(), kinetics, p, before, after, delaysS, extra));
         }
         PrintWriter out = spec.commandLine().getOut();
         if (format.equals("csv")) {
-            writeCsv(out, delaysS, traces);
+            writeCsv(out, delaysS, columns);
         } else {
-            out.println(ResolvedJson.toText(json(kinetics, periodS, delaysS, traces, states)));
+            out.println(ResolvedJson.toText(json(kinetics, periodS, delaysS, traces, states, columns)));
         }
         out.flush();
         return ExitCodes.OK;
     }
 
-    private void writeCsv(PrintWriter out, double[] delaysS, List<Trace> traces) {
+    private SimulatedObservables.Inputs extraInputs() {
+        double photon = pump == null ? Double.NaN : photonEnergy(pump, "--pump");
+        double first = firstExciton == null ? Double.NaN : photonEnergy(firstExciton, "--first-exciton");
+        double heatCapacity = Double.NaN;
+        if (material != null) {
+            if (diameter == null) {
+                throw new IllegalArgumentException("--material needs --diameter");
+            }
+            var m = org.ladderkin.io.MaterialLibrary.fromHome().material(material);
+            double d = positive(diameter, Dimension.LENGTH, "--diameter");
+            heatCapacity = m.densityKgPerM3().value() * m.specificHeatJPerKgK().value() * m.volumeM3(d);
+            if (Double.isNaN(first) && m.sizing().isPresent()) {
+                first = m.sizing().get().firstExcitonEnergyJ(d);
+            }
+        }
+        double[] energies;
+        if (spectrumGrid.isBlank()) {
+            energies = Double.isNaN(first) ? new double[0] : linspace(first - 0.25 * EV, first + 0.25 * EV, 51);
+        } else {
+            String[] range = spectrumGrid.split("\\.\\.|:");
+            if (range.length != 3) {
+                throw new IllegalArgumentException("--spectrum must look like 1.9eV..2.3eV:41, was " + spectrumGrid);
+            }
+            int count;
+            try {
+                count = Integer.parseInt(range[2].trim());
+            } catch (NumberFormatException e) {
+                throw new IllegalArgumentException("--spectrum point count '" + range[2] + "' is not a whole number");
+            }
+            energies = linspace(photonEnergy(range[0], "--spectrum"), photonEnergy(range[1], "--spectrum"), Math.max(2, count));
+        }
+        return new SimulatedObservables.Inputs(photon, first, heatCapacity, energies,
+                positive(lineWidth, Dimension.ENERGY, "--line-width"),
+                org.ladderkin.units.Quantity.parseSi(biexcitonShift, Dimension.ENERGY));
+    }
+
+    private static final double EV = org.ladderkin.units.PhysicalConstants.ELECTRONVOLT_J;
+
+    private static double[] linspace(double a, double b, int n) {
+        double[] out = new double[n];
+        for (int i = 0; i < n; i++) {
+            out[i] = a + (b - a) * i / (n - 1);
+        }
+        return out;
+    }
+
+    private static double photonEnergy(String text, String flag) {
+        var q = org.ladderkin.units.Quantity.parse(text.trim());
+        if (q.dimension() == Dimension.LENGTH && q.si() > 0) {
+            return org.ladderkin.units.Photon.energyJ(q.si());
+        }
+        if (q.dimension() == Dimension.ENERGY && q.si() > 0) {
+            return q.si();
+        }
+        throw new IllegalArgumentException(flag + " must be a wavelength or photon energy such as 400nm or 3.1eV, was " + text);
+    }
+
+    private void writeCsv(PrintWriter out, double[] delaysS, List<List<SimulatedObservables.Column>> columns) {
         StringBuilder header = new StringBuilder("delay_ps");
-        for (String n : nAvg) {
-            header.append(",bleach@N=").append(n.trim()).append(",pl@N=").append(n.trim());
+        for (List<SimulatedObservables.Column> perN : columns) {
+            for (SimulatedObservables.Column c : perN) {
+                header.append(',').append(c.name().contains(",") ? "\"" + c.name() + "\"" : c.name());
+            }
         }
         out.println(header);
         StringBuilder row = new StringBuilder();
         for (int j = 0; j < delaysS.length; j++) {
             row.setLength(0);
             row.append(num(delaysS[j] * 1e12));
-            for (Trace t : traces) {
-                row.append(',').append(num(t.bleach()[j])).append(',').append(num(t.photoluminescencePerS()[j]));
+            for (List<SimulatedObservables.Column> perN : columns) {
+                for (SimulatedObservables.Column c : perN) {
+                    row.append(',').append(num(c.values()[j]));
+                }
             }
             out.println(row);
         }
     }
 
     private ObjectNode json(LadderKinetics kinetics, double periodS, double[] delaysS, List<Trace> traces,
-                            List<SteadyState> states) {
+                            List<SteadyState> states, List<List<SimulatedObservables.Column>> columns) {
         ObjectNode root = ResolvedJson.object();
         root.put("schema", "ladderkin.simulation/1");
         root.put("states", kinetics.space().size());
@@ -207,13 +304,12 @@ final class SimulateCommand implements Callable<Integer> {
                 o.put("secondEigenvalueModulus", ss.secondEigenvalueModulus());
                 o.put("pulsesToWithinOnePercent", ss.pulsesToOnePercent());
             }
-            ArrayNode b = s.putArray("bleach");
-            for (double x : traces.get(i).bleach()) {
-                b.add(x);
-            }
-            ArrayNode pl = s.putArray("plPerS");
-            for (double x : traces.get(i).photoluminescencePerS()) {
-                pl.add(x);
+            ObjectNode cols = s.putObject("columns");
+            for (SimulatedObservables.Column c : columns.get(i)) {
+                ArrayNode a = cols.putArray(c.name());
+                for (double x : c.values()) {
+                    a.add(x);
+                }
             }
         }
         return root;

@@ -53,6 +53,12 @@ public final class Charts {
             renderer.setSeriesStroke(i, new BasicStroke(1.6f));
         }
         XYPlot plot = new XYPlot(data, xAxis, yAxis, renderer);
+        if (spec.logX()) {
+            decadeTicks((LogAxis) xAxis, data, true);
+        }
+        if (spec.logY()) {
+            decadeTicks((LogAxis) yAxis, data, false);
+        }
         plot.setBackgroundPaint(Color.WHITE);
         plot.setDomainGridlinePaint(new Color(0xdddddd));
         plot.setRangeGridlinePaint(new Color(0xdddddd));
@@ -68,12 +74,57 @@ public final class Charts {
         return g2.getSVGElement();
     }
 
+    /** Ticks at whole decades when the data span two or more: fractional log steps ("3.16E1") read badly. */
+    private static void decadeTicks(LogAxis axis, XYSeriesCollection data, boolean domain) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = 0;
+        for (int s = 0; s < data.getSeriesCount(); s++) {
+            for (int i = 0; i < data.getItemCount(s); i++) {
+                double v = domain ? data.getXValue(s, i) : data.getYValue(s, i);
+                if (v > 0) {
+                    lo = Math.min(lo, v);
+                    hi = Math.max(hi, v);
+                }
+            }
+        }
+        if (hi > 0 && Math.log10(hi / lo) >= 2) {
+            axis.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
+        }
+    }
+
+    /** Plain numbers from 0.001 to 99 999, scientific outside ("2e6"). */
+    static final class ReadableNumberFormat extends java.text.NumberFormat {
+        private final java.text.DecimalFormat plain = new java.text.DecimalFormat("0.###",
+                java.text.DecimalFormatSymbols.getInstance(java.util.Locale.ROOT));
+        private final java.text.DecimalFormat sci = new java.text.DecimalFormat("0.##E0",
+                java.text.DecimalFormatSymbols.getInstance(java.util.Locale.ROOT));
+
+        @Override
+        public StringBuffer format(double number, StringBuffer toAppendTo, java.text.FieldPosition pos) {
+            double a = Math.abs(number);
+            if (a == 0 || (a >= 1e-3 && a < 1e5)) {
+                return plain.format(number, toAppendTo, pos);
+            }
+            return toAppendTo.append(sci.format(number).replace("E", "e"));
+        }
+
+        @Override
+        public StringBuffer format(long number, StringBuffer toAppendTo, java.text.FieldPosition pos) {
+            return format((double) number, toAppendTo, pos);
+        }
+
+        @Override
+        public Number parse(String source, java.text.ParsePosition parsePosition) {
+            return plain.parse(source, parsePosition);
+        }
+    }
+
     private static ValueAxis axis(String label, boolean log) {
         if (log) {
             LogAxis a = new LogAxis(label);
             a.setBase(10);
             a.setSmallestValue(1e-300);
-            a.setNumberFormatOverride(new java.text.DecimalFormat("0.##E0"));
+            a.setNumberFormatOverride(new ReadableNumberFormat());
             return a;
         }
         NumberAxis a = new NumberAxis(label);

@@ -37,7 +37,7 @@ public final class PlanReport {
         List<ChartSpec.Series> pl = new ArrayList<>();
         double[] plNs = scale(p.plDelaysS(), 1e9);
         for (int i = 0; i < plan.fluences().size(); i++) {
-            String name = String.format(Locale.ROOT, "⟨N⟩ = %.3g", plan.fluences().get(i).nProbeAveraged());
+            String name = String.format(Locale.ROOT, "<N> = %.3g", plan.fluences().get(i).nProbeAveraged());
             double[] mdA = scale(p.deltaAOd().get(i), -1e3);
             ta.add(ChartSpec.Series.line(name, ps, mdA));
             pl.add(ChartSpec.Series.line(name, plNs, p.plPerDot().get(i)));
@@ -48,7 +48,7 @@ public final class PlanReport {
         double[] early = p.earlyLate().stream().mapToDouble(EarlyLate.Point::early).toArray();
         double[] late = p.earlyLate().stream().mapToDouble(EarlyLate.Point::late).toArray();
         double[] ratio = p.earlyLate().stream().mapToDouble(EarlyLate.Point::ratio).toArray();
-        charts.add(new ChartSpec("Early/late analysis", "⟨N⟩ (probe-averaged)", "bleach (filled levels) and A/B", true, false,
+        charts.add(new ChartSpec("Early/late analysis", "<N> (probe-averaged)", "bleach (filled levels) and A/B", true, false,
                 List.of(ChartSpec.Series.line("early A", n, early), ChartSpec.Series.line("late B", n, late),
                         ChartSpec.Series.line("A/B", n, ratio))));
         List<ChartSpec.Series> occ = new ArrayList<>();
@@ -59,7 +59,7 @@ public final class PlanReport {
             for (int k = 0; k < d.length; k++) {
                 x[k] = k;
             }
-            occ.add(new ChartSpec.Series(String.format(Locale.ROOT, "⟨N⟩ = %.3g", plan.fluences().get(i).nProbeAveraged()),
+            occ.add(new ChartSpec.Series(String.format(Locale.ROOT, "<N> = %.3g", plan.fluences().get(i).nProbeAveraged()),
                     x, d, true));
         }
         charts.add(new ChartSpec("Excitons per dot after a pulse", "N", "probability", false, false, occ));

@@ -21,7 +21,7 @@ class HeatingTest {
     private static final ThermalMedium TOLUENE = new ThermalMedium(866.9, 157.1 / 92.14e-3, 0.13, 383.75);
 
     @Test
-    @CheckedAgainst(source = "hand calculation with Ioffe NSM Archive CdSe thermal properties (ρ = 5.81 g/cm³, "
+    @CheckedAgainst(source = "hand calculation with the Ioffe NSM Archive CdSe thermal-properties table (ρ = 5.81 g/cm³, "
             + "Cp = 49.41 J/(mol·K)): 4 nm sphere V = 3.3510e-26 m³, C = ρcV = 5.0268e-20 J/K; one 3.1 eV photon, no PL: "
             + "ΔT = 4.9666e-19 J / 5.0268e-20 J/K = 9.880 K", kind = CheckedAgainst.Kind.PUBLISHED)
     void oneDotTemperatureJumpMatchesHandCalculation() {
@@ -32,9 +32,9 @@ class HeatingTest {
     }
 
     @Test
-    @CheckedAgainst(source = "hand calculation with NIST Chemistry WebBook toluene Cp(liquid) = 157.1 J/(mol·K) and "
-            + "density 0.8669 g/cm³ (CRC Handbook, from memory): 1 µM dots = 6.0221e20 m⁻³, 4.9666e-19 J each → "
-            + "299.10 J/m³; ρc = 1.47808e6 J/(m³·K); ΔT = 2.0236e-4 K", kind = CheckedAgainst.Kind.PUBLISHED)
+    @CheckedAgainst(source = "hand calculation with toluene Cp(liquid) = 157.1 J/(mol·K) (NIST Chemistry WebBook, "
+            + "condensed-phase heat capacity table) and density 0.8669 g/cm³ (from memory): 1 µM dots = 6.0221e20 m⁻³, "
+            + "4.9666e-19 J each → 299.10 J/m³; ρc = 1.47808e6 J/(m³·K); ΔT = 2.0236e-4 K", kind = CheckedAgainst.Kind.FROM_MEMORY)
     void perPulseRiseOfTheExcitedVolumeMatchesHandCalculation() {
         double photonJ = 3.1 * PhysicalConstants.ELECTRONVOLT_J;
         double dotsPerM3 = 1e-6 * 1e3 * PhysicalConstants.AVOGADRO_PER_MOL;

@@ -9,7 +9,8 @@ import org.ladderkin.validation.Reference;
 class PhotonTest {
 
     @Test
-    @CheckedAgainst(source = "CODATA 2018 (Tiesinga et al., Rev. Mod. Phys. 93, 025010 (2021)): hc = 1239.841984 eV·nm",
+    @CheckedAgainst(source = "SI Brochure, 9th ed. (BIPM 2019), Table 1 (defining constants h, c, e, exact); CODATA 2018 "
+            + "(Tiesinga et al., Rev. Mod. Phys. 93, 025010 (2021)) hc = 1239.841984 eV·nm",
             kind = CheckedAgainst.Kind.PUBLISHED)
     void photonEnergyOf400nmIs3Point0996eV() {
         Reference.check("photon energy of 400 nm (eV)", Photon.energyEv(400e-9), 1239.841984 / 400, 2e-9);

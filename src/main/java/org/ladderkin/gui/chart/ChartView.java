@@ -52,12 +52,6 @@ public final class ChartView extends JPanel {
         }
     }
 
-    private static boolean spansDecades(LogAxis axis, double decades) {
-        double lo = axis.getLowerBound();
-        double hi = axis.getUpperBound();
-        return lo > 0 && hi > 0 && Math.log10(hi / lo) >= decades;
-    }
-
     private static void applyTheme(JFreeChart chart) {
         Color bg = UIManager.getColor("Ladderkin.chart.background");
         Color plotBg = UIManager.getColor("Ladderkin.chart.plotBackground");
@@ -73,10 +67,6 @@ public final class ChartView extends JPanel {
         plot.setDomainGridlinePaint(grid);
         plot.setRangeGridlinePaint(grid);
         for (var axis : new org.jfree.chart.axis.ValueAxis[] {plot.getDomainAxis(), plot.getRangeAxis()}) {
-            if (axis instanceof LogAxis log && spansDecades(log, 2)) {
-                // ticks at whole decades read better on screen than JFreeChart's fractional log steps
-                log.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
-            }
             axis.setLabelPaint(fg);
             axis.setTickLabelPaint(fg);
             axis.setAxisLinePaint(grid);
