@@ -43,6 +43,7 @@ public final class AtomicFiles {
         Path tmp = Files.createTempFile(dir, "." + absolute.getFileName() + ".", ".tmp");
         boolean moved = false;
         try {
+            keepPermissions(absolute, tmp);
             try (FileChannel channel = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING);
                  OutputStream out = Channels.newOutputStream(channel)) {
                 content.writeTo(out);
@@ -60,6 +61,20 @@ public final class AtomicFiles {
                 Files.deleteIfExists(tmp);
             }
         }
+    }
+
+    /**
+     * The temporary file is created private (rw-------); give the replacement the old file's permissions, or the usual
+     * rw-r--r-- for a new file, so saving does not silently change who can read the user's file.
+     */
+    private static void keepPermissions(Path target, Path tmp) throws IOException {
+        if (!tmp.getFileSystem().supportedFileAttributeViews().contains("posix")) {
+            return;
+        }
+        java.util.Set<java.nio.file.attribute.PosixFilePermission> perms = Files.exists(target)
+                ? Files.getPosixFilePermissions(target)
+                : java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--");
+        Files.setPosixFilePermissions(tmp, perms);
     }
 
     /** Replaces {@code target} with UTF-8 text, or leaves it untouched on failure. */

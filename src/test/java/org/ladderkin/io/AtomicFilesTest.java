@@ -42,6 +42,20 @@ class AtomicFilesTest {
     }
 
     @Test
+    void replacingAFileKeepsItsPermissions(@TempDir Path dir) throws IOException {
+        org.junit.jupiter.api.Assumptions.assumeTrue(dir.getFileSystem().supportedFileAttributeViews().contains("posix"));
+        Path target = dir.resolve("shared.plan.json");
+        Files.writeString(target, "{}");
+        var perms = java.nio.file.attribute.PosixFilePermissions.fromString("rw-rw-r--");
+        Files.setPosixFilePermissions(target, perms);
+        AtomicFiles.writeString(target, "{\"a\": 1}");
+        assertThat(Files.getPosixFilePermissions(target)).isEqualTo(perms);
+        Path fresh = dir.resolve("new.csv");
+        AtomicFiles.writeString(fresh, "x\n");
+        assertThat(Files.getPosixFilePermissions(fresh)).isEqualTo(java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
+    }
+
+    @Test
     void successReplacesTheFileAndCreatesFolders(@TempDir Path dir) throws IOException {
         Path target = dir.resolve("a/b/out.csv");
         AtomicFiles.writeString(target, "x,y\n1,2\n");
