@@ -50,6 +50,9 @@ final class PlanCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        if (outDir != null) {
+            org.ladderkin.report.Charts.warmUpInBackground();
+        }
         PlanInputs inputs = PlanCodec.read(planFile);
         PrintWriter out = spec.commandLine().getOut();
         printSummary(inputs, out);

@@ -87,8 +87,8 @@ public final class DesignSearch {
                           Set<Parameter> goals) {
     }
 
-    private static final int FINEST_PER_DECADE = 20;
-    private static final int[] POINTS_PER_DECADE = {5, 10, 20};
+    private static final int FINEST_PER_DECADE = 10;
+    private static final int[] POINTS_PER_DECADE = {5, 10};
     // at least 6 fluences and a lowest ⟨N⟩ ≤ 0.1: the low-fluence traces are also the photocharging check (common practice)
     private static final int[] COUNTS = {6, 8, 10, 12};
     private static final double[] LOWS = {0.02, 0.05, 0.1};
@@ -103,7 +103,7 @@ public final class DesignSearch {
     private DesignSearch(Context ctx) {
         this.ctx = ctx;
         double top = Math.min(10, ctx.maxN());
-        int nc = 36;
+        int nc = 24;
         candidateN = TimeWindows.logSpaced(0.01, Math.max(top, 0.02), nc);
         delays = TimeWindows.logSpaced(ctx.firstDelayS(), ctx.lastDelayS(),
                 (int) Math.round(Math.log10(ctx.lastDelayS() / ctx.firstDelayS()) * FINEST_PER_DECADE) + 1);

@@ -5,6 +5,7 @@ import java.awt.Color;
 import java.awt.Font;
 import java.awt.Rectangle;
 import java.awt.geom.Ellipse2D;
+import java.util.List;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.LogAxis;
 import org.jfree.chart.axis.NumberAxis;
@@ -65,6 +66,17 @@ public final class Charts {
         JFreeChart chart = new JFreeChart(spec.title(), new Font("SansSerif", Font.BOLD, 13), plot, spec.series().size() > 1);
         chart.setBackgroundPaint(Color.WHITE);
         return chart;
+    }
+
+    /**
+     * Loads the chart and font machinery in the background (the first chart otherwise pays about half a second for
+     * it), so a caller can overlap that with its own computation.
+     */
+    public static void warmUpInBackground() {
+        Thread t = new Thread(() -> svg(new ChartSpec("", "", "", false, false,
+                List.of(ChartSpec.Series.line("", new double[] {1, 2}, new double[] {1, 2}))), 64, 48), "chart-warm-up");
+        t.setDaemon(true);
+        t.start();
     }
 
     /** SVG markup (an {@code <svg>} element) of the chart at the given size in pixels. */
