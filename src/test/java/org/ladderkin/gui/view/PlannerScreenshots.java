@@ -55,7 +55,7 @@ class PlannerScreenshots {
             save(PlannerWindowTest.screenshot(frame, "planner-laser-" + suffix + ".png"));
 
             window.tabbedPane("forms").selectTab("Instruments");
-            window.tabbedPane("charts").selectTab("Time between pulses and detection windows");
+            window.tabbedPane("charts").selectTab("Early/late analysis");
             save(PlannerWindowTest.screenshot(frame, "planner-instruments-" + suffix + ".png"));
 
             window.tabbedPane("forms").selectTab("Sample");
