@@ -248,16 +248,12 @@ final class SimulateCommand implements Callable<Integer> {
     }
 
     private static double photonEnergy(String text, String flag) {
-        var q = org.ladderkin.units.Quantity.parse(text.trim());
-        if (q.dimension() == Dimension.LENGTH && q.si() > 0) {
-            return org.ladderkin.units.Photon.energyJ(q.si());
+        try {
+            return org.ladderkin.units.Photon.parseEnergyJ(text.trim());
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException(flag + ": " + e.getMessage());
         }
-        if (q.dimension() == Dimension.ENERGY && q.si() > 0) {
-            return q.si();
-        }
-        throw new IllegalArgumentException(flag + " must be a wavelength or photon energy such as 400nm or 3.1eV, was " + text);
     }
-
     private void writeCsv(PrintWriter out, double[] delaysS, List<List<SimulatedObservables.Column>> columns) {
         StringBuilder header = new StringBuilder("delay_ps");
         for (List<SimulatedObservables.Column> perN : columns) {

@@ -193,21 +193,13 @@ public final class PlanCodec {
 
     /** A photon given as an energy ("3.1 eV") or a vacuum wavelength ("400 nm"), returned as energy (J). */
     static double photonEnergyJ(Node n) {
-        String text = n.kind() == Node.Kind.STRING ? n.string() : null;
-        if (text != null) {
-            Quantity q;
-            try {
-                q = Quantity.parse(text);
-            } catch (IllegalArgumentException e) {
-                throw n.error(e.getMessage());
-            }
-            if (q.dimension() == Dimension.LENGTH && q.si() > 0) {
-                return Photon.energyJ(q.si());
-            }
-            if (q.dimension() == Dimension.ENERGY && q.si() > 0) {
-                return q.si();
-            }
+        if (n.kind() != Node.Kind.STRING) {
+            throw n.error("expected a photon energy or wavelength such as \"3.1 eV\" or \"400 nm\"");
         }
-        throw n.error("expected a photon energy or wavelength such as \"3.1 eV\" or \"400 nm\"");
+        try {
+            return Photon.parseEnergyJ(n.string());
+        } catch (IllegalArgumentException e) {
+            throw n.error(e.getMessage());
+        }
     }
 }

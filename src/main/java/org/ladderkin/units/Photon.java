@@ -23,6 +23,23 @@ public final class Photon {
         return energyJ(wavelengthM) / PhysicalConstants.ELECTRONVOLT_J;
     }
 
+    /**
+     * Reads a photon written as an energy ("3.1 eV") or a vacuum wavelength ("400 nm") and returns its energy (J).
+     *
+     * @throws QuantityFormatException when the text is neither, naming it
+     */
+    public static double parseEnergyJ(String text) {
+        Quantity q = Quantity.parse(text);
+        if (q.si() > 0 && q.dimension() == Dimension.LENGTH) {
+            return energyJ(q.si());
+        }
+        if (q.si() > 0 && q.dimension() == Dimension.ENERGY) {
+            return q.si();
+        }
+        throw new QuantityFormatException(text, "expected a photon energy or wavelength such as \"3.1 eV\" or \"400 nm\", was '"
+                + text + "'");
+    }
+
     private static void requirePositive(double v, String what, String unit) {
         if (!(v > 0) || Double.isInfinite(v)) {
             throw new IllegalArgumentException(what + " must be > 0 and finite, was " + v + " " + unit);
