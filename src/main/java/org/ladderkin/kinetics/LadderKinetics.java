@@ -12,8 +12,9 @@ import org.ladderkin.kinetics.train.PulseMatrix;
 import org.ladderkin.kinetics.train.SteadyState;
 
 /**
- * The engine facade for one model on one ladder: assembles the between-pulse generator once, decomposes it once
- * (modal, or split at the cooling time for hot-resolved ladders; see {@link PropagatorChoice}), and answers traces, single pulses and pulse-train steady states from that. Caches the
+ * The engine facade for one model on one ladder: assembles the between-pulse generator once, prepares its exact
+ * propagator once (modal, or split at the settle time of hot excitons; see {@link PropagatorChoice}), and answers
+ * traces, single pulses and pulse-train steady states from that. Caches the
  * one-period propagator per period and the mode factors per delay grid, so a sweep over ⟨N⟩ pays for them once.
  * Not thread-safe (the caches); use one instance per thread.
  */

@@ -179,6 +179,31 @@ class CoolingPropagationTest {
     }
 
     @Test
+    void repeatedTracesFromCachedRowsMatchTheFirstUniformizationRun() {
+        KineticModel model = hotModel(12, 0.4e-12, true);
+        LadderKinetics k = engine(model);
+        double[][] obs = {k.bleachObservable(), k.photoluminescenceObservable()};
+        double[] p1 = k.applyPulse(Populations.ground(k.space()), new PulseExcitation.Poisson(1)).probabilities();
+        double[] p2 = k.applyPulse(Populations.ground(k.space()), new PulseExcitation.Poisson(4)).probabilities();
+        var grid = k.propagator().onGrid(BenchCases.DELAYS_S);
+        grid.observe(obs, p1);
+        double[][] cached = grid.observe(obs, p2);
+        double[][] fresh = k.propagator().onGrid(BenchCases.DELAYS_S).observe(obs, p2);
+        double worstBleach = maxDiff(cached[0], fresh[0]);
+        double plScale = 0;
+        for (double x : fresh[1]) {
+            plScale = Math.max(plScale, Math.abs(x));
+        }
+        assertThat(worstBleach).isLessThan(1e-12);
+        // PL is in photons/s per dot: compare relative to its largest value
+        assertThat(maxDiff(cached[1], fresh[1])).isLessThan(1e-12 * plScale);
+        // other observables on the same grid go back to the uniformization run and are still right
+        double[][] other = grid.observe(new double[][] {obs[1]}, p1);
+        double[][] otherFresh = k.propagator().onGrid(BenchCases.DELAYS_S).observe(new double[][] {obs[1]}, p1);
+        assertThat(maxDiff(other[0], otherFresh[0])).isEqualTo(0.0);
+    }
+
+    @Test
     void steadyStateIsThatOfTheDenseOnePeriodMap() {
         KineticModel model = hotModel(8, 0.5e-12, true);
         LadderKinetics k = engine(model);

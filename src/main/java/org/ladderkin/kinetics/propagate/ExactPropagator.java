@@ -24,7 +24,7 @@ import java.util.List;
  * <p>Known limit: ladders that resolve hot excitons have, within each N, equally spaced rates (h·k_cool), whose
  * modal basis is conditioned like binomial coefficients (‖V‖·‖V⁻¹‖ ≈ 1e15 at Nmax = 20). The growth guard then
  * clusters almost everything and each delay costs a dense Padé exponential of the big block (tens of ms at 231
- * states). Correct, but slow.
+ * states). Correct, but slow: the engine uses {@link SettlingPropagator} for such ladders instead.
  *
  * <p>Many delays are cheap: {@link #onGrid} precomputes the mode factors for a time grid once; each observable trace
  * then costs O(delays × active modes), modes with λt &lt; −745 (underflow) being skipped.

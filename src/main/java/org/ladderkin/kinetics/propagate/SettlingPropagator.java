@@ -27,6 +27,7 @@ public final class SettlingPropagator implements Propagator {
     private final ExactPropagator late;
     private final boolean conservative;
     private double[][] settleRows;
+    private Uniformization adjoint;
 
     private SettlingPropagator(double[][] q, int[] settled, double settleTimeS) {
         this.n = q.length;
@@ -171,13 +172,7 @@ public final class SettlingPropagator implements Propagator {
         if (settleRows != null) {
             return settleRows;
         }
-        double[][] qt = new double[n][n];
-        for (int i = 0; i < n; i++) {
-            for (int j = 0; j < n; j++) {
-                qt[j][i] = q[i][j];
-            }
-        }
-        Uniformization adjoint = Uniformization.of(qt);
+        Uniformization adjoint = adjoint();
         double[][] rows = new double[settled.length][];
         double[] e = new double[n];
         for (int a = 0; a < settled.length; a++) {
@@ -199,6 +194,20 @@ public final class SettlingPropagator implements Propagator {
         }
         settleRows = rows;
         return rows;
+    }
+
+    /** P = I + Qᵀ/Λ, for rows of exp(Qt) (same Λ as the forward one, since the diagonal is shared). */
+    private Uniformization adjoint() {
+        if (adjoint == null) {
+            double[][] qt = new double[n][n];
+            for (int i = 0; i < n; i++) {
+                for (int j = 0; j < n; j++) {
+                    qt[j][i] = q[i][j];
+                }
+            }
+            adjoint = Uniformization.of(qt);
+        }
+        return adjoint;
     }
 
     private static boolean columnsSumToZero(double[][] q) {
@@ -227,6 +236,10 @@ public final class SettlingPropagator implements Propagator {
     /**
      * Traces on a fixed grid: one uniformization run from p0 serves every time up to t_s (each is a Poisson-weighted
      * sum over the same vectors P^k·p0) and yields p(t_s); later times come from the modal grid on S.
+     *
+     * <p>Why a second path: a sweep or a fit asks for the same observables again and again with new p0. From the
+     * second such call on, the grid keeps the rows o_rᵀ·exp(Q·t_j) of every early time and the S rows of exp(Q·t_s)
+     * (both by uniformization of Qᵀ, once), so each further trace costs only dot products plus the modal grid on S.
      */
     private final class Grid implements TraceGrid {
 
@@ -237,6 +250,9 @@ public final class SettlingPropagator implements Propagator {
         private final PoissonWindow settleWindow;
         private final TraceGrid lateGrid;
         private final int steps;
+        private final int earlySteps;
+        private double[][] lastObservables;
+        private double[][][] earlyRows;
 
         Grid(double[] timesS) {
             this.timesS = timesS;
@@ -260,6 +276,7 @@ public final class SettlingPropagator implements Propagator {
             settleWindow = lateIndex.length > 0 ? forward.window(settleTimeS) : null;
             lateGrid = lateIndex.length > 0 ? late.onGrid(shifted) : null;
             steps = settleWindow != null ? Math.max(last, settleWindow.last()) : last;
+            earlySteps = last;
         }
 
         @Override
@@ -278,6 +295,23 @@ public final class SettlingPropagator implements Propagator {
                     throw new IllegalArgumentException("observable has " + o.length + " entries, generator " + n);
                 }
             }
+            if (lastObservables != null && java.util.Arrays.deepEquals(lastObservables, observables)) {
+                if (earlyRows == null) {
+                    earlyRows = earlyRows(observables);
+                }
+                return fromRows(observables, p0);
+            }
+            lastObservables = new double[no][];
+            for (int r = 0; r < no; r++) {
+                lastObservables[r] = observables[r].clone();
+            }
+            earlyRows = null;
+            return forward(observables, p0);
+        }
+
+        /** One uniformization run from p0 (no set-up beyond the Poisson windows). */
+        private double[][] forward(double[][] observables, double[] p0) {
+            int no = observables.length;
             double[][] seen = new double[no][steps + 1];
             double[] v = p0.clone();
             double[] next = new double[n];
@@ -320,19 +354,83 @@ public final class SettlingPropagator implements Propagator {
                 }
             }
             if (lateGrid != null) {
-                double[] pS = restrict(atSettle, p0);
-                double[][] oS = new double[no][settled.length];
-                for (int r = 0; r < no; r++) {
-                    for (int a = 0; a < settled.length; a++) {
-                        oS[r][a] = observables[r][settled[a]];
+                observeLate(observables, restrict(atSettle, p0), out);
+            }
+            return out;
+        }
+
+        /** The late times from p_S(t_s) by the modal grid on S. */
+        private void observeLate(double[][] observables, double[] pS, double[][] out) {
+            int no = observables.length;
+            double[][] oS = new double[no][settled.length];
+            for (int r = 0; r < no; r++) {
+                for (int a = 0; a < settled.length; a++) {
+                    oS[r][a] = observables[r][settled[a]];
+                }
+            }
+            double[][] lateTraces = lateGrid.observe(oS, pS);
+            for (int r = 0; r < no; r++) {
+                for (int l = 0; l < lateIndex.length; l++) {
+                    out[r][lateIndex[l]] = lateTraces[r][l];
+                }
+            }
+        }
+
+        /** earlyRows[r][e] = o_rᵀ·exp(Q·t_e) = Σ_k w_e(k)·((Pᵀ)^k·o_r)ᵀ. */
+        private double[][][] earlyRows(double[][] observables) {
+            int no = observables.length;
+            Uniformization adj = adjoint();
+            double[][][] rows = new double[no][earlyIndex.length][n];
+            double[] next = new double[n];
+            for (int r = 0; r < no; r++) {
+                double[] a = observables[r].clone();
+                for (int k = 0; k <= earlySteps; k++) {
+                    for (int e = 0; e < earlyIndex.length; e++) {
+                        double w = earlyWindow[e].weight(k);
+                        if (w != 0) {
+                            double[] row = rows[r][e];
+                            for (int i = 0; i < n; i++) {
+                                row[i] += w * a[i];
+                            }
+                        }
+                    }
+                    if (k < earlySteps) {
+                        adj.step(a, next);
+                        double[] swap = a;
+                        a = next;
+                        next = swap;
                     }
                 }
-                double[][] lateTraces = lateGrid.observe(oS, pS);
-                for (int r = 0; r < no; r++) {
-                    for (int l = 0; l < lateIndex.length; l++) {
-                        out[r][lateIndex[l]] = lateTraces[r][l];
+            }
+            return rows;
+        }
+
+        /** A trace from the cached rows: dot products for the early times, S rows of exp(Q·t_s) for the rest. */
+        private double[][] fromRows(double[][] observables, double[] p0) {
+            int no = observables.length;
+            double[][] out = new double[no][timesS.length];
+            for (int r = 0; r < no; r++) {
+                for (int e = 0; e < earlyIndex.length; e++) {
+                    double[] row = earlyRows[r][e];
+                    double s = 0;
+                    for (int i = 0; i < n; i++) {
+                        s += row[i] * p0[i];
                     }
+                    out[r][earlyIndex[e]] = s;
                 }
+            }
+            if (lateGrid != null) {
+                double[][] rows = settleRows();
+                double[] pS = new double[settled.length];
+                for (int a = 0; a < settled.length; a++) {
+                    double s = 0;
+                    double[] row = rows[a];
+                    for (int i = 0; i < n; i++) {
+                        s += row[i] * p0[i];
+                    }
+                    pS[a] = s;
+                }
+                observeLate(observables, pS, out);
             }
             return out;
         }
