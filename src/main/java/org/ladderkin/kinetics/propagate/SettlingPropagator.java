@@ -168,7 +168,7 @@ public final class SettlingPropagator implements Propagator {
      * The rows of exp(Q·t_s) that belong to S, from uniformization of Qᵀ (|S| runs instead of n). For a conservative
      * Q each column of these rows must hold all but LEAK of the probability, which is checked.
      */
-    private double[][] settleRows() {
+    private synchronized double[][] settleRows() {
         if (settleRows != null) {
             return settleRows;
         }
@@ -197,7 +197,7 @@ public final class SettlingPropagator implements Propagator {
     }
 
     /** P = I + Qᵀ/Λ, for rows of exp(Qt) (same Λ as the forward one, since the diagonal is shared). */
-    private Uniformization adjoint() {
+    private synchronized Uniformization adjoint() {
         if (adjoint == null) {
             double[][] qt = new double[n][n];
             for (int i = 0; i < n; i++) {
@@ -284,8 +284,9 @@ public final class SettlingPropagator implements Propagator {
             return timesS.clone();
         }
 
+        /** Synchronized because of the row cache, so a grid may be shared between threads like the modal one. */
         @Override
-        public double[][] observe(double[][] observables, double[] p0) {
+        public synchronized double[][] observe(double[][] observables, double[] p0) {
             if (p0.length != n) {
                 throw new IllegalArgumentException("state vector has " + p0.length + " entries, generator " + n);
             }
