@@ -161,6 +161,21 @@ class CoolingPropagationTest {
     }
 
     @Test
+    void slowCoolingTakesManyStepsAndStaysExact() {
+        LadderKinetics k = engine(hotModel(8, 500e-12, true));
+        assertThat(k.propagator()).isInstanceOf(SettlingPropagator.class);
+        assertThat(((SettlingPropagator) k.propagator()).stepsToSettle()).isGreaterThan(30_000);
+        ExactPropagator dense = ExactPropagator.of(k.generator());
+        double[] p0 = k.applyPulse(Populations.ground(k.space()), new PulseExcitation.Poisson(2)).probabilities();
+        double worst = 0;
+        for (double t : new double[] {1e-12, 1e-10, 2e-9, 1e-8, 1e-6}) {
+            double[] p = k.propagate(new Populations(k.space(), p0), t).probabilities();
+            worst = Math.max(worst, maxDiff(p, dense.propagate(p0, t)));
+        }
+        assertThat(worst).isLessThan(1e-10);
+    }
+
+    @Test
     void traceOnAGridMatchesSinglePropagations() {
         LadderKinetics k = engine(BenchCases.cooling21());
         Populations after = k.applyPulse(Populations.ground(k.space()), new PulseExcitation.Poisson(3));
