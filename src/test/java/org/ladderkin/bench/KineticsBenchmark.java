@@ -4,7 +4,9 @@ import java.util.concurrent.TimeUnit;
 import org.ladderkin.kinetics.BenchCases;
 import org.ladderkin.kinetics.KineticModel;
 import org.ladderkin.kinetics.LadderKinetics;
+import org.ladderkin.kinetics.Populations;
 import org.ladderkin.kinetics.Trace;
+import org.ladderkin.kinetics.train.PulseExcitation;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
@@ -34,6 +36,7 @@ public class KineticsBenchmark {
     private KineticModel ladder;
     private KineticModel cooling;
     private LadderKinetics coolingBuilt;
+    private Populations coolingAfterPulse;
 
     @Setup
     public void setUp() {
@@ -41,6 +44,7 @@ public class KineticsBenchmark {
         built = LadderKinetics.on(ladder, ladder.space(30));
         cooling = BenchCases.cooling21();
         coolingBuilt = LadderKinetics.on(cooling, cooling.space(cooling.fixedNMax()));
+        coolingAfterPulse = coolingBuilt.applyPulse(Populations.ground(coolingBuilt.space()), new PulseExcitation.Poisson(3));
     }
 
     /** One trace of 1000 log delays after one pulse, engine already built. */
@@ -74,6 +78,12 @@ public class KineticsBenchmark {
     @Benchmark
     public Trace coolingResolvedTraceOnBuiltEngine() {
         return BenchCases.traceOn(coolingBuilt, 3);
+    }
+
+    /** Only the trace (no pulse matrix): the propagator's share of the case above. */
+    @Benchmark
+    public Trace coolingResolvedTraceOnly() {
+        return coolingBuilt.trace(coolingAfterPulse, BenchCases.DELAYS_S);
     }
 
     /** The same including generator assembly, the cold-ladder decomposition and the delay-grid set-up. */
