@@ -3,7 +3,7 @@ package org.ladderkin.kinetics;
 import java.util.Arrays;
 import java.util.HashMap;
 import java.util.Map;
-import org.ladderkin.kinetics.propagate.ExactPropagator;
+import org.ladderkin.kinetics.propagate.Propagator;
 import org.ladderkin.kinetics.rate.GeneratorBuilder;
 import org.ladderkin.kinetics.state.LadderSpace;
 import org.ladderkin.kinetics.train.PeriodicSteadyState;
@@ -12,8 +12,9 @@ import org.ladderkin.kinetics.train.PulseMatrix;
 import org.ladderkin.kinetics.train.SteadyState;
 
 /**
- * The engine facade for one model on one ladder: assembles the between-pulse generator once, decomposes it once
- * ({@link ExactPropagator}), and answers traces, single pulses and pulse-train steady states from that. Caches the
+ * The engine facade for one model on one ladder: assembles the between-pulse generator once, prepares its exact
+ * propagator once (modal, or split at the settle time of hot excitons; see {@link PropagatorChoice}), and answers
+ * traces, single pulses and pulse-train steady states from that. Caches the
  * one-period propagator per period and the mode factors per delay grid, so a sweep over ⟨N⟩ pays for them once.
  * Not thread-safe (the caches); use one instance per thread.
  */
@@ -22,18 +23,18 @@ public final class LadderKinetics {
     private final KineticModel model;
     private final LadderSpace space;
     private final double[][] generator;
-    private final ExactPropagator propagator;
+    private final Propagator propagator;
     private final double[] bleach;
     private final double[] photoluminescence;
     private final Map<Double, double[][]> periodMaps = new HashMap<>();
     private double[] gridTimes;
-    private ExactPropagator.Grid grid;
+    private Propagator.TraceGrid grid;
 
     private LadderKinetics(KineticModel model, LadderSpace space) {
         this.model = model;
         this.space = space;
         this.generator = GeneratorBuilder.build(space, model.processes());
-        this.propagator = ExactPropagator.of(generator);
+        this.propagator = PropagatorChoice.forLadder(space, generator);
         this.bleach = Observables.bleach(space, model.degeneracy());
         this.photoluminescence = Observables.photoluminescence(space, model);
     }
@@ -69,7 +70,8 @@ public final class LadderKinetics {
         return c;
     }
 
-    public ExactPropagator propagator() {
+    /** The exact propagator chosen for this ladder (see {@link PropagatorChoice}). */
+    public Propagator propagator() {
         return propagator;
     }
 

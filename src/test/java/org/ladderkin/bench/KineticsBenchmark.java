@@ -4,7 +4,9 @@ import java.util.concurrent.TimeUnit;
 import org.ladderkin.kinetics.BenchCases;
 import org.ladderkin.kinetics.KineticModel;
 import org.ladderkin.kinetics.LadderKinetics;
+import org.ladderkin.kinetics.Populations;
 import org.ladderkin.kinetics.Trace;
+import org.ladderkin.kinetics.train.PulseExcitation;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
@@ -33,12 +35,16 @@ public class KineticsBenchmark {
     private LadderKinetics built;
     private KineticModel ladder;
     private KineticModel cooling;
+    private LadderKinetics coolingBuilt;
+    private Populations coolingAfterPulse;
 
     @Setup
     public void setUp() {
         ladder = BenchCases.ladder31();
         built = LadderKinetics.on(ladder, ladder.space(30));
         cooling = BenchCases.cooling21();
+        coolingBuilt = LadderKinetics.on(cooling, cooling.space(cooling.fixedNMax()));
+        coolingAfterPulse = coolingBuilt.applyPulse(Populations.ground(coolingBuilt.space()), new PulseExcitation.Poisson(3));
     }
 
     /** One trace of 1000 log delays after one pulse, engine already built. */
@@ -68,10 +74,20 @@ public class KineticsBenchmark {
         return BenchCases.sweep(80e6, true);
     }
 
-    /** Cooling-resolved model, Nmax = 20 (231 states): set-up plus a trace (slow, see the report). */
+    /** Cooling-resolved model, Nmax = 20 (231 states): one trace of 1000 log delays, engine already built. */
     @Benchmark
-    @Measurement(iterations = 1, time = 1)
-    @Warmup(iterations = 0)
+    public Trace coolingResolvedTraceOnBuiltEngine() {
+        return BenchCases.traceOn(coolingBuilt, 3);
+    }
+
+    /** Only the trace (no pulse matrix): the propagator's share of the case above. */
+    @Benchmark
+    public Trace coolingResolvedTraceOnly() {
+        return coolingBuilt.trace(coolingAfterPulse, BenchCases.DELAYS_S);
+    }
+
+    /** The same including generator assembly, the cold-ladder decomposition and the delay-grid set-up. */
+    @Benchmark
     public Trace coolingResolvedTrace() {
         return BenchCases.singleTrace(cooling);
     }

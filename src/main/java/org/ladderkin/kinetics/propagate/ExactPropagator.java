@@ -24,12 +24,12 @@ import java.util.List;
  * <p>Known limit: ladders that resolve hot excitons have, within each N, equally spaced rates (h·k_cool), whose
  * modal basis is conditioned like binomial coefficients (‖V‖·‖V⁻¹‖ ≈ 1e15 at Nmax = 20). The growth guard then
  * clusters almost everything and each delay costs a dense Padé exponential of the big block (tens of ms at 231
- * states). Correct, but slow.
+ * states). Correct, but slow: the engine uses {@link SettlingPropagator} for such ladders instead.
  *
  * <p>Many delays are cheap: {@link #onGrid} precomputes the mode factors for a time grid once; each observable trace
  * then costs O(delays × active modes), modes with λt &lt; −745 (underflow) being skipped.
  */
-public final class ExactPropagator {
+public final class ExactPropagator implements Propagator {
 
     /** Largest accepted ‖V‖∞·‖V⁻¹‖∞ before clusters are widened. */
     public static final double GROWTH_LIMIT = 1e8;
@@ -268,6 +268,7 @@ public final class ExactPropagator {
     }
 
     /** Number of states. */
+    @Override
     public int dimension() {
         return n;
     }
@@ -292,6 +293,7 @@ public final class ExactPropagator {
      * conservative generator (columns summing to zero, as every master equation here) state 0 is computed as the
      * complement of the others, so Σp is kept to rounding even where the modal basis is ill-conditioned.
      */
+    @Override
     public double[] propagate(double[] p0, double tS) {
         requireTime(tS);
         double[][][] ce = clusterExps(tS);
@@ -389,6 +391,7 @@ public final class ExactPropagator {
     }
 
     /** The full propagator matrix exp(Qt). */
+    @Override
     public double[][] matrix(double tS) {
         requireTime(tS);
         double[][] out = new double[n][n];
@@ -410,6 +413,7 @@ public final class ExactPropagator {
     }
 
     /** Precomputes the mode factors at the given times (s, each ≥ 0) for cheap repeated traces. */
+    @Override
     public Grid onGrid(double[] timesS) {
         for (double t : timesS) {
             requireTime(t);
@@ -424,7 +428,7 @@ public final class ExactPropagator {
     }
 
     /** Mode factors of this propagator on a fixed time grid. */
-    public final class Grid {
+    public final class Grid implements TraceGrid {
 
         private final double[] timesS;
         private final int[] active;
@@ -460,6 +464,7 @@ public final class ExactPropagator {
             return (long) c.members.length * c.members.length * times <= CACHE_LIMIT;
         }
 
+        @Override
         public double[] timesS() {
             return timesS.clone();
         }
@@ -468,6 +473,7 @@ public final class ExactPropagator {
          * The traces o_r·p(t_j) for each observable row o_r, starting from p0 at t = 0. Cost: O(n²) per observable
          * for the mode amplitudes, then O(active modes) per time.
          */
+        @Override
         public double[][] observe(double[][] observables, double[] p0) {
             int no = observables.length;
             double[] wp = new double[n];
