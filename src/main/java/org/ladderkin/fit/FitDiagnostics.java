@@ -5,10 +5,14 @@ import java.util.List;
 import java.util.Locale;
 
 /**
- * Findings about the sample and the set-up read from a finished ladder fit, each with what to change: a fast
- * component in the weakest trace beyond what a neutral ladder allows (photocharging: trion Auger decay), and an
- * early-amplitude saturation curve that bends more gently or more sharply than Poisson filling of the band edge
- * (optically thick sample, pump not uniform over the probe, or a fluence calibration that is off).
+ * Findings about the sample and the set-up read from a finished ladder fit, each with what to change: a model that
+ * holds dots charged before each pulse even at the lowest fluence, so that it explains the weakest trace's fast decay by
+ * trion Auger recombination (photocharging); an early-amplitude saturation curve that bends more gently or more sharply
+ * than Poisson filling of the band edge (optically thick sample, pump not uniform over the probe); and a fitted
+ * excitation scale far from the one given (pump spot other than assumed, or photocharging seen through a neutral model).
+ * <p>
+ * A neutral ladder fitted to photocharged data does not leave a clean fast-component residual in the weakest trace:
+ * the fit raises σ until biexcitons mimic the trions. That case shows as a σ far above the value given.
  */
 final class FitDiagnostics {
 
@@ -23,9 +27,9 @@ final class FitDiagnostics {
     }
 
     static List<String> find(Dataset data, LadderBleachModel model, ParameterValues best, FitResult r, double[] n,
-                             List<double[]> curves, double scaleGiven, String scaleKey) {
+                             double scaleGiven, String scaleKey) {
         List<String> out = new ArrayList<>();
-        photocharging(data, model, best, r, n, curves).ifPresent(out::add);
+        photocharging(model, best, n).ifPresent(out::add);
         saturation(data, model, best, r, n).ifPresent(out::add);
         if (!Double.isNaN(scaleGiven)) {
             double ratio = best.get(scaleKey) / scaleGiven;
@@ -33,7 +37,9 @@ final class FitDiagnostics {
                 out.add(String.format(Locale.ROOT, "the fitted excitation scale is %.2g times the value given: %s", ratio,
                         ratio < 1 ? "the dots fill more slowly with fluence than assumed; the pump spot may be larger than "
                                 + "assumed (fluence overestimated) or the sample optically thick at the pump"
-                                : "the dots fill faster than assumed; the pump spot may be smaller than assumed"));
+                                : "the dots fill faster than assumed; the pump spot may be smaller than assumed, or "
+                                + "photocharged dots add a trion decay at every fluence that a neutral ladder can only take for "
+                                + "biexcitons (stir or flow the sample, or lower the repetition rate, and compare)"));
             }
         }
         return out;
@@ -49,8 +55,7 @@ final class FitDiagnostics {
         return i0;
     }
 
-    private static java.util.Optional<String> photocharging(Dataset data, LadderBleachModel model, ParameterValues best,
-                                                            FitResult r, double[] n, List<double[]> curves) {
+    private static java.util.Optional<String> photocharging(LadderBleachModel model, ParameterValues best, double[] n) {
         int i0 = lowest(n);
         double charged = model.chargedFractionBeforePulse(i0, best);
         if (charged > CHARGED_FRACTION) {
@@ -59,60 +64,7 @@ final class FitDiagnostics {
                     + "Auger recombination; stir or flow the sample (or lower the repetition rate) so each pulse meets fresh "
                     + "neutral dots", 100 * charged, n[i0]));
         }
-        int tauIndex = best.indexOf(LadderBleachModel.TAU_AUGER2);
-        if (tauIndex < 0) {
-            return java.util.Optional.empty();
-        }
-        double tau2 = best.value(tauIndex, 0);
-        double t0 = optional(best, LadderBleachModel.TIME_ZERO);
-        double irf = optional(best, LadderBleachModel.IRF_FWHM);
-        Trace t = data.traces().get(i0);
-        double[] d = t.delaysS();
-        double[] y = t.signal();
-        double[] c = curves.get(i0);
-        double b = r.find("baseline", i0).map(ParameterEstimate::value).orElse(0.0);
-        double[] res = r.residuals().get(i0);
-        double s2 = 0;
-        int present = 0;
-        for (double v : res) {
-            if (!Double.isNaN(v)) {
-                s2 += v * v;
-                present++;
-            }
-        }
-        s2 /= Math.max(1, present);
-        double[] early = window(d, y, c, b, t0 + Math.max(2 * irf, 0), t0 + tau2);
-        double[] late = window(d, y, c, b, t0 + 3 * tau2, t0 + 10 * tau2);
-        if (early[2] < 2 || late[2] < 2 || !(Math.abs(early[0]) > 0)) {
-            return java.util.Optional.empty();
-        }
-        double fData = 1 - late[0] / early[0];
-        double fModel = 1 - late[1] / early[1];
-        double se = Math.sqrt(s2 / early[2] + s2 / late[2]) / Math.abs(early[0]);
-        double excess = fData - fModel;
-        if (excess > MIN_EFFECT && excess > SIGNIFICANCE * se) {
-            return java.util.Optional.of(String.format(Locale.ROOT, "photocharging signature: the weakest trace '%s' "
-                    + "(⟨N⟩ = %.2g) loses %.0f%% of its signal between %s and %s, %.0f points more than a neutral ladder "
-                    + "allows at that ⟨N⟩; a fast component at low fluence is the trion Auger decay of charged dots. Stir "
-                    + "or flow the sample (or lower the repetition rate) and re-measure, or add charges to the model",
-                    t.label(), n[i0], 100 * fData, ps(t0 + Math.max(2 * irf, 0)), ps(t0 + 10 * tau2), 100 * excess));
-        }
         return java.util.Optional.empty();
-    }
-
-    /** Mean of data − baseline, mean of curve − baseline, and the count, over delays in [from, to]. */
-    private static double[] window(double[] d, double[] y, double[] c, double b, double from, double to) {
-        double sy = 0;
-        double sc = 0;
-        int k = 0;
-        for (int m = 0; m < d.length; m++) {
-            if (d[m] >= from && d[m] <= to && !Double.isNaN(y[m])) {
-                sy += y[m] - b;
-                sc += c[m] - b;
-                k++;
-            }
-        }
-        return new double[] {k == 0 ? 0 : sy / k, k == 0 ? 0 : sc / k, k};
     }
 
     private static java.util.Optional<String> saturation(Dataset data, LadderBleachModel model, ParameterValues best,
@@ -195,9 +147,5 @@ final class FitDiagnostics {
     private static double optional(ParameterValues p, String key) {
         int i = p.indexOf(key);
         return i < 0 ? 0 : p.value(i, 0);
-    }
-
-    private static String ps(double s) {
-        return String.format(Locale.ROOT, "%.3g ps", s * 1e12);
     }
 }

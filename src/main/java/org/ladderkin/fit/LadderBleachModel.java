@@ -49,7 +49,7 @@ public final class LadderBleachModel implements TraceModel {
     private static final double[] GL_WEIGHTS;
 
     static {
-        var rule = new org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory().legendre(32);
+        var rule = new org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory().legendre(24);
         GL_NODES = new double[rule.getNumberOfPoints()];
         GL_WEIGHTS = new double[rule.getNumberOfPoints()];
         for (int i = 0; i < GL_NODES.length; i++) {
@@ -197,7 +197,7 @@ public final class LadderBleachModel implements TraceModel {
 
     /**
      * (g ⊗ s)(t) with s = bBefore before time zero and the ladder's bleach after it: the step part in closed form
-     * (bBefore·Φ(−τ/σ)), the decay part ∫₀^∞ g(τ − u) b(u) du by 32-point Gauss–Legendre over u ∈ [τ − 8σ, τ + 8σ] ∩ [0, ∞).
+     * (bBefore·Φ(−τ/σ)), the decay part ∫₀^∞ g(τ − u) b(u) du by 24-point Gauss–Legendre over u ∈ [τ − 8σ, τ + 8σ] ∩ [0, ∞).
      */
     private static double[] convolved(LadderKinetics k, Populations after, double bBefore, double[] delaysS, double t0,
                                       double fwhm) {

@@ -99,7 +99,7 @@ public final class LadderFit {
             }
             curves.add(shape);
         }
-        List<String> diagnostics = FitDiagnostics.find(data, model, best, r, n, curves,
+        List<String> diagnostics = FitDiagnostics.find(data, model, best, r, n,
                 Double.isNaN(setup.scaleStart()) || !setup.free().contains(LadderParameter.SCALE) ? Double.NaN : setup.scaleStart(), scaleKey);
         return new Outcome(r, kind, scaleKey, x, n, curves, diagnostics);
     }
