@@ -191,10 +191,17 @@ final class FitCommand implements Callable<Integer> {
         return TraceArguments.apply(data, values, pump, "--fluences");
     }
 
-    private FitProgress progress(PrintWriter err) {
+    /** Model evaluations fill the bar up to the fitter's limit; a start or profile step finished shows its stage. */
+    private static FitProgress progress(PrintWriter err) {
         ProgressBar bar = new ProgressBar(err);
-        AtomicInteger done = new AtomicInteger();
-        return (stage, step, total) -> bar.step(step, total, stage + " " + done.incrementAndGet());
+        AtomicInteger starts = new AtomicInteger();
+        return (stage, step, total) -> {
+            if (stage.equals("evaluation")) {
+                bar.step(Math.min(step, total - 1), total, "fitting: " + step + " model evaluations");
+            } else {
+                bar.step(step, total, stage + " " + step + "/" + total + (stage.equals("start") ? "" : " (" + starts.incrementAndGet() + ")"));
+            }
+        };
     }
 
     private static void summary(PrintWriter out, LadderFit.Outcome outcome) {

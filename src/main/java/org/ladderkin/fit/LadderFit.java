@@ -62,7 +62,7 @@ public final class LadderFit {
                 ? kind == Excitation.Kind.MEAN_OCCUPANCY ? 1 : AUTO_TOP_N[0] / top : setup.scaleStart();
         List<ParameterSpec> specs = specs(setup, scaleKey, scaleStart);
         LadderBleachModel model = LadderBleachModel.forModel(setup.base(), scaleKey, x, setup.periodS());
-        FitProblem problem = new FitProblem(data, model, specs,
+        FitProblem problem = new FitProblem(data, counted(model, progress, FitOptions.defaults().maxEvaluations()), specs,
                 setup.sharedAmplitude() ? LinearTerms.NONE : LinearTerms.AMPLITUDE_AND_BASELINE);
         FitOptions options = FitOptions.defaults().withProgress(progress);
         if (Double.isNaN(setup.scaleStart()) && kind != Excitation.Kind.MEAN_OCCUPANCY && setup.free().contains(LadderParameter.SCALE)) {
@@ -102,6 +102,33 @@ public final class LadderFit {
         List<String> diagnostics = FitDiagnostics.find(data, model, best, r, n,
                 Double.isNaN(setup.scaleStart()) || !setup.free().contains(LadderParameter.SCALE) ? Double.NaN : setup.scaleStart(), scaleKey);
         return new Outcome(r, kind, scaleKey, x, n, curves, diagnostics);
+    }
+
+    /**
+     * The model, telling {@code progress} of each evaluation of the whole series (stage "evaluation"), so a progress
+     * bar moves during one long start and not only between starts.
+     */
+    private static TraceModel counted(LadderBleachModel model, FitProgress progress, int expected) {
+        if (progress == FitProgress.NONE) {
+            return model;
+        }
+        return new TraceModel() {
+            private int evaluations;
+
+            @Override
+            public int traceCount() {
+                return model.traceCount();
+            }
+
+            @Override
+            public double[] predict(int trace, double[] delaysS, ParameterValues p) {
+                if (trace == 0) {
+                    evaluations++;
+                    progress.update("evaluation", evaluations, Math.max(expected, evaluations));
+                }
+                return model.predict(trace, delaysS, p);
+            }
+        };
     }
 
     static List<ParameterSpec> specs(LadderFitSetup setup, String scaleKey, double scaleStart) {

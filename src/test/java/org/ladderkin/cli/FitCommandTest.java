@@ -65,6 +65,26 @@ class FitCommandTest {
         assertThat(html).contains("<svg").contains("tauAuger2Ps").contains("Residuals");
     }
 
+    @Test
+    void planComparisonAndProfileIntervalsAppearInTheResult(@TempDir Path dir) throws Exception {
+        Path csv = simulatedSeries(dir, 5);
+        Path out = dir.resolve("out");
+        MainTest.Run fit = MainTest.run("fit", csv.toString(), "--tau-rad", "20ns", "--tau-auger2", "60ps",
+                "--fluences", "1e13,3e13,1e14,3e14", "--profile", "--free", "scale,tau-auger2,time-zero", "--irf", "0.3ps",
+                "--plan", MainTest.HOME.resolve("experiments-plan/cdse-auger-1khz.plan.json").toString(),
+                "--out", out.toString(), "--format", "json", "--quiet");
+        assertThat(fit.exit()).as(fit.err()).isZero();
+        JsonNode root = new ObjectMapper().readTree(fit.out());
+        JsonNode tau = root.at("/parameters/tauAuger2Ps");
+        assertThat(tau.at("/profile68/lower").asDouble()).isLessThan(tau.get("value").asDouble());
+        assertThat(tau.at("/profile68/upper").asDouble()).isGreaterThan(tau.get("value").asDouble());
+        assertThat(root.at("/parameters/irfFwhmPs/fixed").asBoolean()).isTrue();
+        assertThat(root.at("/parameters/timeZeroPs/fixed").asBoolean()).isFalse();
+        assertThat(root.at("/planComparison/tauAuger2PsPlanned").asDouble()).isPositive();
+        assertThat(root.at("/planComparison/tauAuger2PsFitted").asDouble()).isEqualTo(tau.get("value").asDouble());
+        assertThat(Files.readString(out.resolve("fit-report.html"))).contains("Compared with the plan").contains("profile");
+    }
+
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', value = {
         "non-numeric cell|delay (ps),a,b;1,0.1,0.2;2,zero,0.2;3,0.1,0.1;4,0.1,0.1|series.csv:3",
