@@ -136,6 +136,12 @@ final class FitCommand implements Callable<Integer> {
                 Quantity.parseSi(timeZero, Dimension.TIME), irf == null ? Double.NaN : positive(irf, Dimension.TIME, "--irf"),
                 sharedAmplitude, profile);
         PrintWriter err = spec.commandLine().getErr();
+        if (base.coolingRatePerS() > 0 && !quiet) {
+            // a hot-resolved ladder has hundreds of states at ⟨N⟩ ≈ 5 and every trial of τ₂ rebuilds it
+            err.println("note: the model resolves hot excitons (cooling), which makes every fit step slow (minutes); "
+                    + "for delays beyond a few ps fit without the cooling process");
+            err.flush();
+        }
         LadderFit.Outcome outcome = LadderFit.fit(data, setup, quiet ? FitProgress.NONE : progress(err));
         FitResult r = outcome.result();
         PlanComparison comparison = planFile == null || !r.ok() ? null : PlanComparison.of(planFile, outcome);
