@@ -62,6 +62,13 @@ public record ModelParameters(double radiativeRatePerS, ExcitonScaling radiative
                 biexcitonAugerRatePerS, augerScaling, 0, 0, 0, 0, Set.of(), AugerIonisation.NONE, 0, 0, degeneracy, 0);
     }
 
+    /** A copy with other radiative, biexciton Auger and trapping rates (1/s), e.g. while fitting them. */
+    public ModelParameters withRates(double radiative, double biexcitonAuger, double trapping) {
+        return new ModelParameters(radiative, radiativeScaling, chargedRadiativeFactor, biexcitonAuger, augerScaling,
+                negativeTrionAugerRatePerS, positiveTrionAugerRatePerS, trapping, coolingRatePerS, charges, ionisation,
+                neutralisationRatePerS, refreshRatePerS, degeneracy, nMax);
+    }
+
     /** The kinetic model: one rate law per process that is switched on. */
     public KineticModel toModel() {
         List<RateLaw> laws = new ArrayList<>();

@@ -39,8 +39,9 @@ class DesignStandardErrorTest {
         double sigmaY = ctx.noiseOdPerSqrtS() / Math.sqrt(design.timePerPointS());
         double[] n = design.nValues();
         double[] delays = design.delaysS();
-        LadderBleachModel ladder = new LadderBleachModel((t2, t1) -> model.withTauBiexcitonS(t2).withTauSingleExcitonS(t1)
-                .kineticModel(2), n, period);
+        LadderBleachModel ladder = new LadderBleachModel(List.of("tauAuger2S", "tauSingleS"),
+                v -> model.withTauBiexcitonS(v.get("tauAuger2S")).withTauSingleExcitonS(v.get("tauSingleS")).kineticModel(2),
+                "crossSectionScale", n, period);
         List<ParameterSpec> params = List.of(
                 ParameterSpec.positive("amplitude", "Od", a0),
                 ParameterSpec.positive("crossSectionScale", "", 1),

@@ -1,0 +1,243 @@
+package org.ladderkin.cli;
+
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+import java.util.concurrent.Callable;
+import java.util.concurrent.atomic.AtomicInteger;
+import org.ladderkin.fit.Dataset;
+import org.ladderkin.fit.FitProgress;
+import org.ladderkin.fit.FitResult;
+import org.ladderkin.fit.LadderFit;
+import org.ladderkin.fit.LadderFitSetup;
+import org.ladderkin.fit.LadderFitSetup.LadderParameter;
+import org.ladderkin.fit.ParameterEstimate;
+import org.ladderkin.io.AtomicFiles;
+import org.ladderkin.io.FitResultJson;
+import org.ladderkin.io.MissingValuePolicy;
+import org.ladderkin.io.ResolvedJson;
+import org.ladderkin.io.TableOptions;
+import org.ladderkin.io.TraceArguments;
+import org.ladderkin.io.TraceSidecarCodec;
+import org.ladderkin.io.TraceTableReader;
+import org.ladderkin.kinetics.ModelParameters;
+import org.ladderkin.report.FitReport;
+import org.ladderkin.units.Dimension;
+import org.ladderkin.units.Quantity;
+import org.ladderkin.units.Units;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code ladderkin fit DATA... --model MODEL.json --fluences 1e13,3e13,... --out DIR}: a global fit of a measured
+ * fluence series with the exciton ladder, shared parameters free or held, per-trace amplitude and baseline.
+ */
+@Command(name = "fit", mixinStandardHelpOptions = true,
+        description = {"Global fit of a transient-absorption fluence series with the exciton ladder.",
+            "DATA: delimited tables, a delay column (unit in the header, e.g. 'delay (ps)') and one column per trace,",
+            "or one file per trace. Each trace's excitation comes from --fluences (in column order) or --traces-json.",
+            "Writes DIR/fit-report.html and DIR/fit-result.json with --out; --format json prints the result."})
+final class FitCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(arity = "1..*", paramLabel = "DATA", description = "trace tables (CSV/TSV)")
+    List<Path> dataFiles;
+
+    @Option(names = "--model", paramLabel = "MODEL.json", description = "model file (omit to build the model from the model flags)")
+    Path modelFile;
+
+    @Mixin
+    ModelOptions modelOptions;
+
+    @Option(names = "--fluences", split = ",", paramLabel = "X",
+            description = "excitation per trace in column order: photon fluence (1e13 photons/cm²; bare numbers are read as "
+                    + "set by --bare), pulse energy (2nJ) or energy fluence (0.3mJ/cm², needs --pump)")
+    List<String> fluences;
+
+    @Option(names = "--bare", paramLabel = "photons-per-cm2|n-avg", defaultValue = "photons-per-cm2",
+            description = "how bare numbers in --fluences are read (default ${DEFAULT-VALUE})")
+    String bare;
+
+    @Option(names = "--pump", paramLabel = "PHOTON", description = "pump wavelength or photon energy (needed for energy fluences)")
+    String pump;
+
+    @Option(names = "--traces-json", paramLabel = "FILE", description = "per-trace metadata file (schema ladderkin.traces/1) instead of --fluences")
+    Path sidecar;
+
+    @Option(names = "--cross-section", paramLabel = "AREA", description = "start for σ (e.g. 5e-15cm2); default: a few starts")
+    String crossSection;
+
+    @Option(names = "--rep-rate", paramLabel = "FREQ", description = "pulse repetition rate (fit in the pulse-train steady state)")
+    String repRate;
+
+    @Option(names = "--free", split = ",", paramLabel = "NAME", defaultValue = "scale,tau-auger2",
+            description = "shared parameters to fit: scale, tau-auger2, tau-rad, tau-trap, time-zero, irf (default ${DEFAULT-VALUE}); "
+                    + "the others are held at the model's values")
+    List<String> free;
+
+    @Option(names = "--time-zero", paramLabel = "TIME", defaultValue = "0ps", description = "time zero (start when freed)")
+    String timeZero;
+
+    @Option(names = "--irf", paramLabel = "TIME", description = "Gaussian IRF FWHM (start when freed); no IRF when omitted")
+    String irf;
+
+    @Option(names = "--shared-amplitude", description = "one amplitude for all traces and no baselines (keeps the saturation curve in the fit)")
+    boolean sharedAmplitude;
+
+    @Option(names = "--profile", description = "profile-likelihood 68% intervals for τ₂ and the scale")
+    boolean profile;
+
+    @Option(names = "--delay-unit", paramLabel = "UNIT", description = "delay unit when the header names none (e.g. ps)")
+    String delayUnit;
+
+    @Option(names = "--plan", paramLabel = "PLAN.json", description = "campaign plan to compare the fit with")
+    Path planFile;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "output folder (created if missing)")
+    Path outDir;
+
+    @Option(names = "--format", paramLabel = "text|json", defaultValue = "text", description = "standard output (default ${DEFAULT-VALUE})")
+    String format;
+
+    @Option(names = "--quiet", description = "no progress bar")
+    boolean quiet;
+
+    @Override
+    public Integer call() throws Exception {
+        if (!format.equals("text") && !format.equals("json")) {
+            throw new IllegalArgumentException("--format must be text or json, was " + format);
+        }
+        if (outDir != null) {
+            org.ladderkin.report.Charts.warmUpInBackground();
+        }
+        Dataset data = metadata(TraceTableReader.readAll(dataFiles, new TableOptions(
+                delayUnit == null ? null : Units.of(delayUnit.trim()), MissingValuePolicy.DROP)));
+        ModelParameters base = modelOptions.parameters(modelFile);
+        Set<LadderParameter> freed = EnumSet.noneOf(LadderParameter.class);
+        for (String f : free) {
+            if (!f.isBlank()) {
+                freed.add(LadderParameter.of(f));
+            }
+        }
+        LadderFitSetup setup = new LadderFitSetup(base, repRate == null ? Double.NaN : 1 / positive(repRate, Dimension.FREQUENCY, "--rep-rate"),
+                freed, crossSection == null ? Double.NaN : positive(crossSection, Dimension.AREA, "--cross-section"),
+                Quantity.parseSi(timeZero, Dimension.TIME), irf == null ? Double.NaN : positive(irf, Dimension.TIME, "--irf"),
+                sharedAmplitude, profile);
+        PrintWriter err = spec.commandLine().getErr();
+        if (base.coolingRatePerS() > 0 && !quiet) {
+            // a hot-resolved ladder has hundreds of states at ⟨N⟩ ≈ 5 and every trial of τ₂ rebuilds it
+            err.println("note: the model resolves hot excitons (cooling), which makes every fit step slow (minutes); "
+                    + "for delays beyond a few ps fit without the cooling process");
+            err.flush();
+        }
+        LadderFit.Outcome outcome = LadderFit.fit(data, setup, quiet ? FitProgress.NONE : progress(err));
+        FitResult r = outcome.result();
+        PlanComparison comparison = planFile == null || !r.ok() ? null : PlanComparison.of(planFile, outcome);
+        ObjectNode json = FitResultJson.of(data, outcome, comparison == null ? null : comparison.json());
+        PrintWriter out = spec.commandLine().getOut();
+        if (outDir != null) {
+            Files.createDirectories(outDir);
+            ResolvedJson.write(outDir.resolve("fit-result.json"), json);
+            AtomicFiles.writeString(outDir.resolve("fit-report.html"),
+                    FitReport.html(data, outcome, comparison == null ? List.of() : comparison.rows()));
+        }
+        if (format.equals("json")) {
+            out.print(ResolvedJson.toText(json));
+        } else {
+            summary(out, outcome);
+            if (outDir != null) {
+                out.println("wrote " + outDir.resolve("fit-report.html") + " and fit-result.json");
+            }
+        }
+        out.flush();
+        if (!r.ok()) {
+            err.println("ladderkin fit: " + r.message());
+            err.flush();
+            return ExitCodes.BAD_INPUT;
+        }
+        return ExitCodes.OK;
+    }
+
+    private Dataset metadata(Dataset data) {
+        if (sidecar != null) {
+            if (fluences != null) {
+                throw new IllegalArgumentException("give either --traces-json or --fluences, not both");
+            }
+            return TraceSidecarCodec.apply(sidecar, data);
+        }
+        if (fluences == null) {
+            if (data.traces().stream().allMatch(t -> t.metadata().excitation().isPresent())) {
+                return data;
+            }
+            throw new IllegalArgumentException("give each trace's excitation with --fluences (in column order: "
+                    + String.join(", ", data.labels()) + ") or --traces-json");
+        }
+        List<String> values = new ArrayList<>();
+        for (String f : fluences) {
+            String v = f.trim();
+            boolean number = v.matches("[-+]?[0-9.]+([eE][-+]?[0-9]+)?");
+            values.add(!number ? v : switch (bare) {
+                case "photons-per-cm2" -> v + " photons/cm²";
+                case "n-avg" -> v;
+                default -> throw new IllegalArgumentException("--bare must be photons-per-cm2 or n-avg, was " + bare);
+            });
+        }
+        return TraceArguments.apply(data, values, pump, "--fluences");
+    }
+
+    /** Model evaluations fill the bar up to the fitter's limit; a start or profile step finished shows its stage. */
+    private static FitProgress progress(PrintWriter err) {
+        ProgressBar bar = new ProgressBar(err);
+        AtomicInteger starts = new AtomicInteger();
+        return (stage, step, total) -> {
+            if (stage.equals("evaluation")) {
+                bar.step(Math.min(step, total - 1), total, "fitting: " + step + " model evaluations");
+            } else {
+                bar.step(step, total, stage + " " + step + "/" + total + (stage.equals("start") ? "" : " (" + starts.incrementAndGet() + ")"));
+            }
+        };
+    }
+
+    private static void summary(PrintWriter out, LadderFit.Outcome outcome) {
+        FitResult r = outcome.result();
+        out.println("Fit: " + r.status().name().toLowerCase(Locale.ROOT) + (r.message().isEmpty() ? "" : " — " + r.message()));
+        if (!r.ok()) {
+            return;
+        }
+        for (ParameterEstimate e : r.estimates()) {
+            if (!e.shared() || e.key().equals("amplitude") || e.key().equals("baseline")) {
+                continue;
+            }
+            FitResultJson.TradeKey t = FitResultJson.trade(e.key());
+            out.println(String.format(Locale.ROOT, "  %-16s %-12.5g %s", t.key(), e.value() * t.factor(),
+                    e.fixed() ? "(fixed)" : "± " + String.format(Locale.ROOT, "%.3g", e.stdError() * t.factor())));
+        }
+        out.println(String.format(Locale.ROOT, "  reduced chi²     %.4g over %d points", r.reducedChiSquare(), r.points()));
+        for (String d : outcome.diagnostics()) {
+            out.println("! " + d);
+        }
+        for (String w : r.warnings()) {
+            out.println("warning: " + w);
+        }
+    }
+
+    private static double positive(String text, Dimension d, String flag) {
+        double x = Quantity.parseSi(text, d);
+        if (!(x > 0) || !Double.isFinite(x)) {
+            throw new IllegalArgumentException(flag + " must be > 0, was " + text);
+        }
+        return x;
+    }
+}

@@ -1,0 +1,144 @@
+package org.ladderkin.io;
+
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.List;
+import java.util.Map;
+import org.ladderkin.fit.Dataset;
+import org.ladderkin.fit.FitResult;
+import org.ladderkin.fit.LadderFit;
+import org.ladderkin.fit.ParameterEstimate;
+import org.ladderkin.fit.ProfileInterval;
+import org.ladderkin.units.Units;
+
+/**
+ * The result of a ladder fit as JSON (schema {@code ladderkin.fit-result/1}): every shared parameter keyed by name
+ * with its trade unit ({@code tauAuger2Ps}, {@code crossSectionCm2}, {@code tauRadNs}) holding {@code value},
+ * {@code stdError} (null when unavailable) and {@code fixed}; per-trace ⟨N⟩, amplitude and baseline; fit statistics,
+ * correlations, diagnostics and warnings.
+ */
+public final class FitResultJson {
+
+    /** Schema name. */
+    public static final String SCHEMA = "ladderkin.fit-result/1";
+
+    /** Internal SI key → the key and factor used in files. */
+    private static final Map<String, TradeKey> TRADE = Map.of(
+            "crossSectionM2", new TradeKey("crossSectionCm2", 1 / Units.of("cm²").factorToSi()),
+            "occupancyPerJ", new TradeKey("occupancyPerNj", Units.of("nJ").factorToSi()),
+            "tauAuger2S", new TradeKey("tauAuger2Ps", 1 / Units.of("ps").factorToSi()),
+            "tauRadS", new TradeKey("tauRadNs", 1 / Units.of("ns").factorToSi()),
+            "tauTrapS", new TradeKey("tauTrapPs", 1 / Units.of("ps").factorToSi()),
+            "timeZeroS", new TradeKey("timeZeroPs", 1 / Units.of("ps").factorToSi()),
+            "irfFwhmS", new TradeKey("irfFwhmPs", 1 / Units.of("ps").factorToSi()));
+
+    private FitResultJson() {
+    }
+
+    /** A parameter's key in files, and the factor from its SI value. */
+    public record TradeKey(String key, double factor) {
+    }
+
+    /** The file key and factor of the internal key {@code siKey} (unchanged for pure numbers). */
+    public static TradeKey trade(String siKey) {
+        return TRADE.getOrDefault(siKey, new TradeKey(siKey, 1));
+    }
+
+    /** The JSON tree of {@code outcome}. */
+    public static ObjectNode of(Dataset data, LadderFit.Outcome outcome, ObjectNode planComparison) {
+        FitResult r = outcome.result();
+        ObjectNode root = ResolvedJson.object();
+        root.put("schema", SCHEMA);
+        root.put("status", r.status().name().toLowerCase(java.util.Locale.ROOT));
+        root.put("message", r.message());
+        ArrayNode files = root.putArray("dataFiles");
+        data.sourceFiles().forEach(files::add);
+        root.put("excitationGivenAs", switch (outcome.kind()) {
+            case PHOTON_FLUENCE_PER_M2 -> "photonFluence";
+            case PULSE_ENERGY_J -> "pulseEnergy";
+            case MEAN_OCCUPANCY -> "meanOccupancy";
+        });
+        ObjectNode params = root.putObject("parameters");
+        for (ParameterEstimate e : r.estimates()) {
+            if (!e.shared() || e.key().equals("amplitude") || e.key().equals("baseline")) {
+                continue;
+            }
+            TradeKey t = trade(e.key());
+            ObjectNode p = params.putObject(t.key());
+            p.put("value", e.value() * t.factor());
+            putNumber(p, "stdError", e.stdError() * t.factor());
+            p.put("fixed", e.fixed());
+            r.profile(e.key()).ifPresent(pi -> addProfile(p, pi, t.factor()));
+        }
+        ArrayNode traces = root.putArray("traces");
+        for (int i = 0; i < data.size(); i++) {
+            ObjectNode t = traces.addObject();
+            t.put("label", data.traces().get(i).label());
+            if (outcome.meanN().length > i) {
+                t.put("nAvg", outcome.meanN()[i]);
+            }
+            int trace = i;
+            r.find("amplitude", i).ifPresent(e -> estimate(t.putObject("amplitude"), e));
+            r.find("baseline", i).ifPresent(e -> estimate(t.putObject("baseline"), e));
+            if (r.autocorrelation().size() > i) {
+                ArrayNode a = t.putArray("residualAutocorrelation");
+                for (double v : r.autocorrelation().get(trace)) {
+                    a.add(v);
+                }
+            }
+        }
+        ObjectNode stats = root.putObject("statistics");
+        putNumber(stats, "chiSquare", r.chiSquare());
+        putNumber(stats, "reducedChiSquare", r.reducedChiSquare());
+        stats.put("points", r.points());
+        stats.put("freeParameters", r.freeParameters());
+        putNumber(stats, "aic", r.aic());
+        putNumber(stats, "bic", r.bic());
+        stats.put("iterations", r.iterations());
+        stats.put("evaluations", r.evaluations());
+        stats.put("startsTried", r.startsTried());
+        stats.put("startsFailed", r.startsFailed());
+        ObjectNode corr = root.putObject("correlation");
+        ArrayNode keys = corr.putArray("keys");
+        r.correlationKeys().forEach(k -> keys.add(trade(k).key()));
+        ArrayNode rows = corr.putArray("matrix");
+        for (double[] row : r.correlation()) {
+            ArrayNode a = rows.addArray();
+            for (double v : row) {
+                a.add(v);
+            }
+        }
+        strings(root.putArray("diagnostics"), outcome.diagnostics());
+        strings(root.putArray("warnings"), r.warnings());
+        if (planComparison != null) {
+            root.set("planComparison", planComparison);
+        }
+        return root;
+    }
+
+    private static void addProfile(ObjectNode p, ProfileInterval pi, double factor) {
+        ObjectNode o = p.putObject("profile68");
+        o.put("lower", pi.lower() * factor);
+        o.put("upper", pi.upper() * factor);
+        o.put("lowerOpen", pi.lowerOpen());
+        o.put("upperOpen", pi.upperOpen());
+    }
+
+    private static void estimate(ObjectNode o, ParameterEstimate e) {
+        o.put("value", e.value());
+        putNumber(o, "stdError", e.stdError());
+    }
+
+    /** NaN is not JSON: it is written as null. */
+    private static void putNumber(ObjectNode o, String key, double v) {
+        if (Double.isFinite(v)) {
+            o.put(key, v);
+        } else {
+            o.putNull(key);
+        }
+    }
+
+    private static void strings(ArrayNode a, List<String> values) {
+        values.forEach(a::add);
+    }
+}

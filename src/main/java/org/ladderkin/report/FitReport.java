@@ -1,0 +1,110 @@
+package org.ladderkin.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.ladderkin.fit.Dataset;
+import org.ladderkin.fit.FitResult;
+import org.ladderkin.fit.LadderFit;
+import org.ladderkin.fit.ParameterEstimate;
+import org.ladderkin.fit.Trace;
+import org.ladderkin.io.FitResultJson;
+
+/**
+ * The HTML report of a ladder fit: data with the fitted curves on a log delay axis, residuals, the parameter table
+ * with standard errors (and profile intervals when asked), per-trace values, diagnostics, warnings, and the
+ * comparison with the plan when one was given.
+ */
+public final class FitReport {
+
+    private FitReport() {
+    }
+
+    /**
+     * @param planRows rows (quantity, plan, fit, note) comparing with the plan, or empty
+     */
+    public static String html(Dataset data, LadderFit.Outcome outcome, List<List<String>> planRows) {
+        FitResult r = outcome.result();
+        HtmlPage page = new HtmlPage("Global fit of a fluence series");
+        page.paragraph("Data: " + String.join(", ", data.sourceFiles()) + " — " + data.size() + " traces, fitted with the "
+                + "exciton ladder (shared parameters across the series).");
+        page.paragraph("Status: " + r.status().name().toLowerCase(Locale.ROOT) + (r.message().isEmpty() ? "" : " — " + r.message()));
+        if (!r.ok()) {
+            return page.render();
+        }
+        page.heading(2, "Diagnostics");
+        page.bullets(outcome.diagnostics().isEmpty() ? List.of("no photocharging signature and no unusual saturation found")
+                : outcome.diagnostics());
+        page.heading(2, "Shared parameters");
+        List<List<String>> rows = new ArrayList<>();
+        for (ParameterEstimate e : r.estimates()) {
+            if (!e.shared() || e.key().equals("amplitude") || e.key().equals("baseline")) {
+                continue;
+            }
+            FitResultJson.TradeKey t = FitResultJson.trade(e.key());
+            String profile = r.profile(e.key()).map(p -> num(p.lower() * t.factor()) + (p.lowerOpen() ? " (open)" : "") + " … "
+                    + num(p.upper() * t.factor()) + (p.upperOpen() ? " (open)" : "")).orElse("");
+            rows.add(List.of(t.key(), num(e.value() * t.factor()), e.fixed() ? "fixed" : num(e.stdError() * t.factor()), profile));
+        }
+        page.table(List.of("parameter", "value", "standard error", "68% profile interval"), rows);
+        page.paragraph(String.format(Locale.ROOT, "χ²/dof = %.4g over %d points, %d free parameters; AIC %.6g, BIC %.6g. "
+                + "Standard errors are scaled by the reduced χ².", r.reducedChiSquare(), r.points(), r.freeParameters(), r.aic(), r.bic()));
+        page.heading(2, "Traces");
+        List<List<String>> traceRows = new ArrayList<>();
+        for (int i = 0; i < data.size(); i++) {
+            int trace = i;
+            double[] acf = r.autocorrelation().get(i);
+            traceRows.add(List.of(data.traces().get(i).label(), num(outcome.meanN()[i]),
+                    r.find("amplitude", i).map(e -> num(e.value()) + " ± " + num(e.stdError())).orElse("shared"),
+                    r.find("baseline", i).map(e -> num(e.value()) + " ± " + num(e.stdError())).orElse("—"),
+                    acf.length == 0 ? "—" : String.format(Locale.ROOT, "%.2f", acf[0]), String.valueOf(trace + 1)));
+        }
+        page.table(List.of("trace", "⟨N⟩ (fit)", "amplitude", "baseline", "residual autocorrelation, lag 1", "#"), traceRows);
+        page.charts(charts(data, outcome), 760, 420);
+        if (!r.warnings().isEmpty()) {
+            page.heading(2, "Warnings");
+            page.bullets(r.warnings());
+        }
+        if (!planRows.isEmpty()) {
+            page.heading(2, "Compared with the plan");
+            page.table(List.of("quantity", "plan", "fit", "note"), planRows);
+        }
+        return page.render();
+    }
+
+    /** Data with fitted curves, and residuals, on a log delay axis (delays after time zero only). */
+    static List<ChartSpec> charts(Dataset data, LadderFit.Outcome outcome) {
+        List<ChartSpec.Series> fits = new ArrayList<>();
+        List<ChartSpec.Series> res = new ArrayList<>();
+        double t0 = outcome.result().find("timeZeroS", -1).map(ParameterEstimate::value).orElse(0.0);
+        for (int i = 0; i < data.size(); i++) {
+            Trace t = data.traces().get(i);
+            double[] d = t.delaysS();
+            double[] y = t.signal();
+            double[] c = outcome.curves().get(i);
+            double[] rr = outcome.result().residuals().get(i);
+            List<double[]> kept = new ArrayList<>();
+            int used = 0; // residuals are listed for the points used, missing ones skipped
+            for (int m = 0; m < d.length; m++) {
+                if (Double.isNaN(y[m])) {
+                    continue;
+                }
+                if (d[m] - t0 > 0) {
+                    kept.add(new double[] {(d[m] - t0) * 1e12, y[m], c[m], rr[used]});
+                }
+                used++;
+            }
+            double[] x = kept.stream().mapToDouble(v -> v[0]).toArray();
+            String name = t.label() + String.format(Locale.ROOT, " (⟨N⟩ %.2g)", outcome.meanN()[i]);
+            fits.add(new ChartSpec.Series(name, x, kept.stream().mapToDouble(v -> v[1]).toArray(), true));
+            fits.add(ChartSpec.Series.line(name + " fit", x, kept.stream().mapToDouble(v -> v[2]).toArray()));
+            res.add(ChartSpec.Series.line(name, x, kept.stream().mapToDouble(v -> v[3]).toArray()));
+        }
+        return List.of(new ChartSpec("Data and fit", "delay after time zero (ps)", "signal (file units)", true, false, fits),
+                new ChartSpec("Residuals (data − fit)", "delay after time zero (ps)", "residual (file units)", true, false, res));
+    }
+
+    private static String num(double v) {
+        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.4g", v) : "unavailable";
+    }
+}
