@@ -96,7 +96,7 @@ final class FitCommand implements Callable<Integer> {
     @Option(names = "--shared-amplitude", description = "one amplitude for all traces and no baselines (keeps the saturation curve in the fit)")
     boolean sharedAmplitude;
 
-    @Option(names = "--profile", description = "profile-likelihood 68% intervals for τ₂ and the scale")
+    @Option(names = "--profile", description = "profile-likelihood 68%% intervals for τ₂ and the scale")
     boolean profile;
 
     @Option(names = "--delay-unit", paramLabel = "UNIT", description = "delay unit when the header names none (e.g. ps)")
