@@ -14,12 +14,35 @@ import org.ladderkin.units.Dimension;
  */
 public final class PlanForms {
 
+    /** Material keys of the library under {@code ladderkin.home}, empty when it cannot be read. */
+    private static final List<String> LIBRARY_MATERIALS = libraryKeys(true);
+    /** Matrix keys of the library, empty when it cannot be read. */
+    private static final List<String> LIBRARY_MATRICES = libraryKeys(false);
+
+    /**
+     * A pick list of the library's keys; a plain text field when the library is unavailable (the plan reader still
+     * checks the key and names the file, line and field).
+     */
+    private static FieldSpec libraryChoice(String label, String path, List<String> keys, String help) {
+        return keys.isEmpty() ? FieldSpec.text(label, path, false, help) : FieldSpec.choice(label, path, keys, help);
+    }
+
+    private static List<String> libraryKeys(boolean materials) {
+        try {
+            org.ladderkin.io.MaterialLibrary library = org.ladderkin.io.MaterialLibrary.fromHome();
+            return materials ? library.materials().stream().map(m -> m.key()).sorted().toList()
+                    : library.matrices().stream().map(m -> m.key()).sorted().toList();
+        } catch (RuntimeException e) {
+            return List.of();
+        }
+    }
+
     /** Sample section: a plain table of (label, JSON path, kind) so a schema change is a one-line edit. */
     public static final List<FieldSpec> SAMPLE = List.of(
             FieldSpec.text("Title", "title", false, "one line naming the campaign"),
             FieldSpec.text("Lab", "lab", true, "who runs the campaign"),
             FieldSpec.text("Sample name", "sample.name", false, "your name for the batch"),
-            FieldSpec.text("Material", "sample.material", false, "material key in the library, e.g. CdSe"),
+            libraryChoice("Material", "sample.material", LIBRARY_MATERIALS, "material from the library (see 'ladderkin materials')"),
             FieldSpec.optionalQuantity("Diameter", "sample.diameter", Dimension.LENGTH,
                     "core diameter; give either this or the first-exciton peak"),
             FieldSpec.optionalQuantity("First-exciton peak", "sample.firstExcitonPeak", Dimension.LENGTH,
@@ -37,7 +60,7 @@ public final class PlanForms {
             FieldSpec.optionalQuantity("Cross-section measured at", "sample.crossSection.at", Dimension.LENGTH,
                     "wavelength where your cross-section holds"),
             FieldSpec.quantity("Path length", "sample.pathLength", Dimension.LENGTH, "optical path length of the cell or film"),
-            FieldSpec.text("Matrix", "sample.matrix", false, "solvent or film host, e.g. toluene"),
+            libraryChoice("Matrix", "sample.matrix", LIBRARY_MATRICES, "solvent or film host from the library"),
             FieldSpec.choice("Refresh", "sample.refresh.mode", List.of("static", "stirred", "flowing"),
                     "how the excited volume is renewed between pulses"),
             FieldSpec.optionalQuantity("Flow rate", "sample.refresh.flowRate", Dimension.VOLUMETRIC_FLOW,

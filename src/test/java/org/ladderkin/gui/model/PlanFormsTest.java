@@ -28,6 +28,16 @@ class PlanFormsTest {
     }
 
     @Test
+    void materialAndMatrixArePickedFromTheLibrary() {
+        var fields = new PlanEditor().fields();
+        FieldSpec material = fields.stream().filter(f -> f.path().toString().equals("sample.material")).findFirst().orElseThrow();
+        FieldSpec matrix = fields.stream().filter(f -> f.path().toString().equals("sample.matrix")).findFirst().orElseThrow();
+        assertThat(material.kind()).isEqualTo(FieldSpec.Kind.CHOICE);
+        assertThat(material.choices()).contains("CdSe", "PbSe", "InP").isSorted();
+        assertThat(matrix.choices()).contains("toluene", "tetrachloroethylene");
+    }
+
+    @Test
     void fieldPathsAreUnique() {
         List<String> paths = new PlanEditor().fields().stream().map(f -> f.path().toString()).toList();
         assertThat(paths).doesNotHaveDuplicates();
