@@ -53,4 +53,13 @@ public final class Observables {
         }
         return o;
     }
+
+    /** 1 for every state that is excited or charged: what a pulse train leaves for the next pulse. */
+    public static double[] excitedOrCharged(LadderSpace space) {
+        double[] o = new double[space.size()];
+        for (int s = 0; s < o.length; s++) {
+            o[s] = space.excitons(s) > 0 || space.charge(s).charged() ? 1 : 0;
+        }
+        return o;
+    }
 }

@@ -6,6 +6,7 @@ import java.util.Locale;
 import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
 import org.ladderkin.kinetics.KineticModel;
 import org.ladderkin.kinetics.LadderKinetics;
+import org.ladderkin.kinetics.Observables;
 import org.ladderkin.kinetics.rate.RateLaw;
 import org.ladderkin.kinetics.rate.SampleRefresh;
 import org.ladderkin.kinetics.train.PeriodicSteadyState;
@@ -27,7 +28,7 @@ public final class PulseTrainRisks {
     /** Fraction of dots excited or charged just before a pulse, in the periodic steady state. */
     public static double residualBeforePulse(LadderKinetics kinetics, PulseExcitation pulse, double periodS) {
         SteadyState ss = kinetics.steadyState(pulse, periodS, false);
-        return ss.beforePulse().expectation(excitedOrCharged(kinetics));
+        return ss.beforePulse().expectation(Observables.excitedOrCharged(kinetics.space()));
     }
 
     /**
@@ -66,21 +67,31 @@ public final class PulseTrainRisks {
         return -1;
     }
 
-    /** Charged fraction before each of the first {@code pulses} pulses, starting from unexcited neutral dots. */
-    public static double[] chargedBuildUp(LadderKinetics kinetics, PulseExcitation pulse, double periodS, int pulses) {
+    /**
+     * Fractions before each of the first pulses, starting from unexcited neutral dots.
+     *
+     * @param excitedOrCharged dots still excited or charged
+     * @param charged          dots charged
+     */
+    public record BuildUp(double[] excitedOrCharged, double[] charged) {
+    }
+
+    /** The approach to the steady state over the first {@code pulses} pulses, from one run of the one-period map. */
+    public static BuildUp buildUp(LadderKinetics kinetics, PulseExcitation pulse, double periodS, int pulses) {
         PeriodicSteadyState train = kinetics.pulseTrain(pulse, periodS);
-        double[] charged = org.ladderkin.kinetics.Observables.charged(kinetics.space());
+        double[] residualRow = Observables.excitedOrCharged(kinetics.space());
+        double[] chargedRow = Observables.charged(kinetics.space());
         List<double[]> states = train.buildUp(pulses);
-        double[] out = new double[pulses];
+        double[] residual = new double[pulses];
+        double[] charged = new double[pulses];
         for (int k = 0; k < pulses; k++) {
-            double s = 0;
             double[] p = states.get(k);
             for (int i = 0; i < p.length; i++) {
-                s += charged[i] * p[i];
+                residual[k] += residualRow[i] * p[i];
+                charged[k] += chargedRow[i] * p[i];
             }
-            out[k] = s;
         }
-        return out;
+        return new BuildUp(residual, charged);
     }
 
     /** The model with its sample refresh replaced by {@code ratePerS} (none when 0). */
@@ -133,14 +144,5 @@ public final class PulseTrainRisks {
         return new Risk("photocharging", Verdict.against(charged, limit, 0.5), charged, limit, "fraction",
                 String.format(Locale.ROOT, "%.3g of the dots are charged in the steady state (limit %.3g); stir or flow the "
                         + "sample, or lower the fluence or repetition rate", charged, limit));
-    }
-
-    private static double[] excitedOrCharged(LadderKinetics kinetics) {
-        var space = kinetics.space();
-        double[] o = new double[space.size()];
-        for (int s = 0; s < o.length; s++) {
-            o[s] = space.excitons(s) > 0 || space.charge(s).charged() ? 1 : 0;
-        }
-        return o;
     }
 }

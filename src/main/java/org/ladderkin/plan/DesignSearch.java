@@ -135,11 +135,6 @@ public final class DesignSearch {
         return new Result(best, naive, ctx.goals(), evaluated);
     }
 
-    /** Expected relative standard errors of a given design. */
-    public static Design evaluate(Context ctx, double[] nValues, int pointsPerDecade) {
-        return new DesignSearch(ctx).evaluate(nValues, pointsPerDecade);
-    }
-
     private Design evaluate(double[] nValues, int pointsPerDecade) {
         int step = FINEST_PER_DECADE / pointsPerDecade;
         List<Integer> delayIdx = new ArrayList<>();

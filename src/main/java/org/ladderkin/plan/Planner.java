@@ -192,7 +192,8 @@ public final class Planner {
             double rate = laser.repetitionRateHz() / d;
             LadderKinetics kin = LadderKinetics.forPulses(km, pulse);
             SteadyState ss = kin.steadyState(pulse, 1 / rate, false);
-            double residual = PulseTrainRisks.residualBeforePulse(kin, pulse, 1 / rate);
+            // the same steady state gives the residual: no second solve
+            double residual = ss.beforePulse().expectation(org.ladderkin.kinetics.Observables.excitedOrCharged(kin.space()));
             Excitation ex = Excitation.of(atMax.sample(), new Pulse(energyTop, atMax.pulse().wavelengthM(), rate),
                     atMax.geometry().pump(), atMax.geometry().probe(), true);
             HeatBudget heat = heatAt(km, ex, nTop, 1 / rate);
@@ -248,21 +249,9 @@ public final class Planner {
         PeriodicSteadyState train = kin.pulseTrain(strongest, period);
         int pulses = PeriodicSteadyState.pulsesToOnePercent(train.secondEigenvalueModulus());
         int shown = Math.max(10, Math.min(200, pulses * 2));
-        double[] excitedOrCharged = new double[shown];
-        double[] charged = PulseTrainRisks.chargedBuildUp(kin, strongest, period, shown);
-        List<double[]> states = train.buildUp(shown);
-        var space = kin.space();
-        for (int p = 0; p < shown; p++) {
-            double s = 0;
-            for (int st = 0; st < space.size(); st++) {
-                if (space.excitons(st) > 0 || space.charge(st).charged()) {
-                    s += states.get(p)[st];
-                }
-            }
-            excitedOrCharged[p] = s;
-        }
+        PulseTrainRisks.BuildUp buildUp = PulseTrainRisks.buildUp(kin, strongest, period, shown);
         return new Predictions(taDelays, List.of(dA), plDelays, List.of(pl), List.of(el), List.of(occupancy),
-                excitedOrCharged, charged, pulses);
+                buildUp.excitedOrCharged(), buildUp.charged(), pulses);
     }
 
     private static DelayPlan delayPlan(Instrument inst, ModelAssumptions model, DesignSearch.Result design, int fluenceCount,

@@ -69,7 +69,7 @@ class PulseTrainRisksTest {
             Reference.checkRelative("charged fraction before a pulse, T = " + period * 1e6 + " µs",
                     kin.steadyState(pulse, period, false).chargedFraction(), expected, 1e-4);
         }
-        double[] buildUp = PulseTrainRisks.chargedBuildUp(kin, pulse, 1e-6, 40);
+        double[] buildUp = PulseTrainRisks.buildUp(kin, pulse, 1e-6, 40).charged();
         assertThat(buildUp[0]).isZero();
         for (int i = 1; i < buildUp.length; i++) {
             assertThat(buildUp[i]).isGreaterThanOrEqualTo(buildUp[i - 1] - 1e-15);

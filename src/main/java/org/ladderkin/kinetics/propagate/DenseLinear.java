@@ -76,4 +76,23 @@ public final class DenseLinear {
         }
         return out;
     }
+
+    /**
+     * Whether every column of a generator sums to zero within rounding (1e-13 of the column's absolute sum), i.e. it
+     * conserves probability.
+     */
+    static boolean columnsSumToZero(double[][] q) {
+        for (int j = 0; j < q.length; j++) {
+            double s = 0;
+            double scale = 0;
+            for (double[] row : q) {
+                s += row[j];
+                scale += Math.abs(row[j]);
+            }
+            if (Math.abs(s) > 1e-13 * scale) {
+                return false;
+            }
+        }
+        return true;
+    }
 }

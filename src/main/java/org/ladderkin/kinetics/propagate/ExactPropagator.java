@@ -97,7 +97,7 @@ public final class ExactPropagator implements Propagator {
                 continue;
             }
             best = decompose(q, d);
-            best.conservative = columnsSumToZero(q);
+            best.conservative = DenseLinear.columnsSumToZero(q);
             if (best.growth <= GROWTH_LIMIT) {
                 return best;
             }
@@ -238,21 +238,6 @@ public final class ExactPropagator implements Propagator {
             i = parent[i];
         }
         return i;
-    }
-
-    private static boolean columnsSumToZero(double[][] q) {
-        for (int j = 0; j < q.length; j++) {
-            double s = 0;
-            double scale = 0;
-            for (double[] row : q) {
-                s += row[j];
-                scale += Math.abs(row[j]);
-            }
-            if (Math.abs(s) > 1e-13 * scale) {
-                return false;
-            }
-        }
-        return true;
     }
 
     private static double normInf(double[][] a) {

@@ -39,7 +39,7 @@ public final class SettlingPropagator implements Propagator {
             }
         }
         this.late = ExactPropagator.of(sub);
-        this.conservative = columnsSumToZero(q) && groundFeedsNothing(q);
+        this.conservative = DenseLinear.columnsSumToZero(q) && groundFeedsNothing(q);
     }
 
     /**
@@ -237,21 +237,6 @@ public final class SettlingPropagator implements Propagator {
     private static boolean groundFeedsNothing(double[][] q) {
         for (double[] row : q) {
             if (row[0] != 0) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    private static boolean columnsSumToZero(double[][] q) {
-        for (int j = 0; j < q.length; j++) {
-            double s = 0;
-            double scale = 0;
-            for (double[] row : q) {
-                s += row[j];
-                scale += Math.abs(row[j]);
-            }
-            if (Math.abs(s) > 1e-13 * scale) {
                 return false;
             }
         }
