@@ -35,6 +35,10 @@ final class BenchCommand implements Callable<Integer> {
     @Option(names = "--skip-cooling", description = "skip the cooling-resolved case")
     boolean skipCooling;
 
+    @Option(names = "--planner", paramLabel = "PLAN.json",
+            description = "also time the desktop planner's update after an edit on this plan (prediction and chart build)")
+    java.nio.file.Path plannerPlan;
+
     @Override
     public Integer call() {
         if (repeats < 1 || repeats > 10_000) {
@@ -57,6 +61,11 @@ final class BenchCommand implements Callable<Integer> {
             LadderKinetics hot = LadderKinetics.on(cooling, cooling.space(cooling.fixedNMax()));
             row(out, "cooling trace, 231 states (engine built)", time(() -> BenchCases.traceOn(hot, 3).bleach()[0]));
             row(out, "cooling trace, 231 states (incl. set-up)", time(() -> BenchCases.singleTrace(cooling).bleach()[0]));
+        }
+        if (plannerPlan != null) {
+            PlannerUpdateBench update = new PlannerUpdateBench(org.ladderkin.io.PlanCodec.read(plannerPlan));
+            row(out, "planner update after an edit (prediction)", time(update::predict));
+            row(out, "planner update after an edit (incl. chart build)", time(update::predictAndBuildCharts));
         }
         out.printf(Locale.ROOT, "peak heap used: %.1f MB (max heap %.0f MB)%n", peakHeapMb(),
                 Runtime.getRuntime().maxMemory() / 1048576.0);

@@ -46,7 +46,7 @@ public final class SampleCodec {
     }
 
     /** The folder relative paths in a document are taken from. */
-    static Path baseDir(Path file) {
+    public static Path baseDir(Path file) {
         Path parent = file.toAbsolutePath().getParent();
         return parent == null ? Path.of(".") : parent;
     }

@@ -50,11 +50,35 @@ public final class PlannerApp {
                 }
                 frame.setVisible(true);
                 frame.offerRecovery();
+                frame.editor().lastValid().ifPresent(PlannerApp::warmUpInBackground);
             });
         } catch (InvocationTargetException e) {
             Throwable cause = e.getCause();
             throw cause instanceof RuntimeException r ? r : new IllegalStateException(cause);
         }
         closed.await();
+    }
+
+    /** Predictions computed after start-up so the compiler has done its work before the user's first edit. */
+    private static final int WARM_UP_PREDICTIONS = 8;
+
+    /**
+     * Runs the planner's prediction a few times on a low-priority daemon thread: a cold JVM needs about a second for
+     * the first prediction and a warm one a few tens of milliseconds, and the first edit should already feel warm.
+     */
+    private static void warmUpInBackground(org.ladderkin.plan.PlanInputs plan) {
+        Thread t = new Thread(() -> {
+            PlannerPrediction source = new PlannerPrediction();
+            for (int i = 0; i < WARM_UP_PREDICTIONS && !Thread.currentThread().isInterrupted(); i++) {
+                try {
+                    source.predict(plan);
+                } catch (RuntimeException e) {
+                    return; // the window shows the real error when it computes the same plan
+                }
+            }
+        }, "ladderkin-warm-up");
+        t.setDaemon(true);
+        t.setPriority(Thread.MIN_PRIORITY);
+        t.start();
     }
 }

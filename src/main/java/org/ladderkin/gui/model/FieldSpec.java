@@ -22,7 +22,8 @@ import org.ladderkin.units.QuantityFormatException;
  * @param path      where the value lives in the plan document
  * @param kind      how text maps to JSON
  * @param dimension what a quantity measures (for {@link Kind#QUANTITY} and {@link Kind#QUANTITY_LIST}), else null
- * @param choices   allowed words (for {@link Kind#CHOICE} and {@link Kind#KEY_SET}), else empty
+ * @param choices   allowed words (for {@link Kind#CHOICE} and {@link Kind#KEY_SET}), file-name extensions offered
+ *                  for {@link Kind#FILE}, else empty
  * @param optional  a blank field removes the key from the document instead of storing ""
  * @param help      one sentence for the tooltip
  */
@@ -44,7 +45,12 @@ public record FieldSpec(String label, JsonPath path, Kind kind, Dimension dimens
         /** One word from {@link #choices()}, stored as a string. */
         CHOICE,
         /** A set of words from {@link #choices()}, stored as an array of strings; text is comma-separated. */
-        KEY_SET
+        KEY_SET,
+        /**
+         * A data file the plan refers to (a spectrum, an IRF), stored as a string: relative to the plan file's folder,
+         * or absolute. Its contents are checked by the plan reader, which names the file and line.
+         */
+        FILE
     }
 
     public FieldSpec {
@@ -91,6 +97,11 @@ public record FieldSpec(String label, JsonPath path, Kind kind, Dimension dimens
         return new FieldSpec(label, JsonPath.of(path), Kind.CHOICE, null, choices, false, help);
     }
 
+    /** An optional data file; {@code choices} holds the file-name extensions a chooser offers (e.g. "csv"). */
+    public static FieldSpec file(String label, String path, List<String> extensions, String help) {
+        return new FieldSpec(label, JsonPath.of(path), Kind.FILE, null, extensions, true, help);
+    }
+
     public static FieldSpec keySet(String label, String path, List<String> choices, String help) {
         return new FieldSpec(label, JsonPath.of(path), Kind.KEY_SET, null, choices, false, help);
     }
@@ -126,7 +137,7 @@ public record FieldSpec(String label, JsonPath path, Kind kind, Dimension dimens
         }
         JsonNodeFactory f = JsonNodeFactory.instance;
         return Optional.of(switch (kind) {
-            case TEXT, QUANTITY, FRACTION, CHOICE -> TextNode.valueOf(t);
+            case TEXT, QUANTITY, FRACTION, CHOICE, FILE -> TextNode.valueOf(t);
             case QUANTITY_LIST, KEY_SET -> {
                 ArrayNode a = f.arrayNode();
                 splitList(t).forEach(a::add);
@@ -154,7 +165,7 @@ public record FieldSpec(String label, JsonPath path, Kind kind, Dimension dimens
         }
         try {
             switch (kind) {
-                case TEXT -> { }
+                case TEXT, FILE -> { }
                 case QUANTITY -> positiveOrZero(Quantity.parse(t, dimension));
                 case QUANTITY_LIST -> {
                     for (String part : splitList(t)) {
@@ -216,6 +227,7 @@ public record FieldSpec(String label, JsonPath path, Kind kind, Dimension dimens
             case INTEGER_LIST -> "\"1, 2, 5\"";
             case CHOICE, KEY_SET -> choices.get(0);
             case TEXT -> "a name";
+            case FILE -> "\"spectrum.csv\"";
         };
     }
 

@@ -4,6 +4,7 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.fasterxml.jackson.databind.node.TextNode;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -18,6 +19,7 @@ import java.util.concurrent.CopyOnWriteArrayList;
 import org.ladderkin.io.AtomicFiles;
 import org.ladderkin.io.InputException;
 import org.ladderkin.io.ResolvedJson;
+import org.ladderkin.io.SampleCodec;
 import org.ladderkin.io.SourceLocation;
 import org.ladderkin.io.json.JsonTree;
 import org.ladderkin.plan.PlanInputs;
@@ -155,6 +157,28 @@ public final class PlanEditor {
         return Optional.of(where + check.problem());
     }
 
+    /** The folder relative data-file paths start at: the plan file's folder, or the working folder when untitled. */
+    public Path baseDir() {
+        return file == null ? Path.of("").toAbsolutePath() : SampleCodec.baseDir(file);
+    }
+
+    /**
+     * The text a file field stores for a chosen file: relative to the plan's folder when the plan has a file and the
+     * chosen file lies on the same file-system root, else absolute (an untitled plan has no folder yet).
+     */
+    public String fileFieldText(Path chosen) {
+        Path absolute = chosen.toAbsolutePath().normalize();
+        return file == null ? absolute.toString() : relativeTo(baseDir(), absolute);
+    }
+
+    private static String relativeTo(Path base, Path absolute) {
+        if (!absolute.isAbsolute() || base.getRoot() == null || !base.getRoot().equals(absolute.getRoot())) {
+            return absolute.toString();
+        }
+        // forward slashes keep the plan portable between systems; Path.of reads them everywhere
+        return base.relativize(absolute).toString().replace(java.io.File.separatorChar, '/');
+    }
+
     public boolean canUndo() {
         return history.canUndo();
     }
@@ -241,14 +265,48 @@ public final class PlanEditor {
         saveAs(file);
     }
 
-    /** Saves to {@code target}, atomically, and makes it the current file. */
+    /**
+     * Saves to {@code target}, atomically, and makes it the current file. Data files the plan names by a relative
+     * path (spectrum, IRF) are re-expressed relative to the new folder, so a plan saved elsewhere still finds them.
+     */
     public void saveAs(Path target) throws IOException {
-        String text = text();
+        ObjectNode toSave = rebased(SampleCodec.baseDir(target.toAbsolutePath().normalize()));
+        String text = ResolvedJson.toText(toSave);
         AtomicFiles.writeString(target, text);
+        boolean pathsChanged = !text.equals(text());
+        document = toSave;
         file = target.toAbsolutePath().normalize();
         savedText = text;
         history.boundary();
+        recheck();
+        if (pathsChanged) {
+            // Undo steps recorded earlier keep their old relative paths; the reader names such a file as missing.
+            fire(Change.REPLACED, null);
+        }
         fire(Change.SAVED, null);
+    }
+
+    /** The document with every relative data-file path re-expressed from {@code newBase}. */
+    private ObjectNode rebased(Path newBase) {
+        ObjectNode copy = document.deepCopy();
+        Path oldBase = baseDir();
+        if (newBase.equals(oldBase)) {
+            return copy;
+        }
+        for (FieldSpec f : fields()) {
+            String given = f.read(copy);
+            if (f.kind() != FieldSpec.Kind.FILE || given.isBlank()) {
+                continue;
+            }
+            try {
+                if (!Path.of(given).isAbsolute()) {
+                    f.path().set(copy, TextNode.valueOf(relativeTo(newBase, oldBase.resolve(given).normalize())));
+                }
+            } catch (java.nio.file.InvalidPathException e) {
+                // not a path at all: saved as typed; the reader reports it at the field
+            }
+        }
+        return copy;
     }
 
     /**
@@ -291,7 +349,8 @@ public final class PlanEditor {
     }
 
     private void recheck() {
-        check = PlanCheck.of(text(), displayName());
+        // the full path, so the reader resolves relative data-file paths from the plan's folder
+        check = PlanCheck.of(text(), file == null ? displayName() : file.toString());
         if (check.valid()) {
             lastValid = check.inputs();
         }

@@ -55,8 +55,9 @@ public final class PlanForms {
                     "\"first-exciton\" or a wavelength such as \"400 nm\""),
             FieldSpec.optionalQuantity("Concentration", "sample.concentration", Dimension.CONCENTRATION,
                     "dot concentration, if known instead of the absorbance"),
-            FieldSpec.text("Absorption spectrum", "sample.absorptionSpectrum", true,
-                    "CSV file wavelength_nm,absorbance (relative to the plan's folder) that scales σ to the pump wavelength"),
+            FieldSpec.file("Absorption spectrum", "sample.absorptionSpectrum", List.of("csv", "tsv", "txt"),
+                    "measured spectrum (CSV wavelength_nm,absorbance) that scales σ to the pump wavelength; "
+                            + "choose or drop a file, kept relative to the plan's folder"),
             FieldSpec.optionalQuantity("Cross-section", "sample.crossSection.value", Dimension.AREA,
                     "your measured absorption cross-section, overriding the material's law"),
             FieldSpec.optionalQuantity("Cross-section measured at", "sample.crossSection.at", Dimension.LENGTH,

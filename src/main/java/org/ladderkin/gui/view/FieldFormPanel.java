@@ -6,14 +6,20 @@ import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
+import java.awt.datatransfer.DataFlavor;
+import java.awt.datatransfer.UnsupportedFlavorException;
+import javax.swing.JButton;
 import javax.swing.JCheckBox;
+import javax.swing.JFileChooser;
 import javax.swing.JComboBox;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JTextField;
+import javax.swing.TransferHandler;
 import javax.swing.event.DocumentEvent;
 import javax.swing.event.DocumentListener;
+import javax.swing.filechooser.FileNameExtensionFilter;
 import net.miginfocom.swing.MigLayout;
 import org.ladderkin.gui.model.FieldSpec;
 import org.ladderkin.gui.model.PlanEditor;
@@ -64,7 +70,7 @@ final class FieldFormPanel extends JPanel {
                 label.setLabelFor(b.component());
                 label.setToolTipText(f.help());
                 add(label);
-                add(b.component());
+                add(b.container());
                 bindings.add(b);
             }
         }
@@ -107,6 +113,7 @@ final class FieldFormPanel extends JPanel {
         return switch (f.kind()) {
             case CHOICE -> new ChoiceBinding(f);
             case KEY_SET -> new KeySetBinding(f);
+            case FILE -> new FileBinding(f);
             default -> new TextBinding(f);
         };
     }
@@ -128,6 +135,11 @@ final class FieldFormPanel extends JPanel {
         FieldSpec field();
 
         JComponent component();
+
+        /** What the form lays out (the component, or a panel holding it and its buttons). */
+        default JComponent container() {
+            return component();
+        }
 
         void show(String text);
     }
@@ -183,6 +195,122 @@ final class FieldFormPanel extends JPanel {
             if (!text.getText().equals(value)) {
                 text.setText(value);
             }
+        }
+    }
+
+    /**
+     * A data-file field: the path as text, a button that opens a file chooser in the plan's folder, and file drops
+     * onto the field or the button. The chosen file is stored relative to the plan's folder (see
+     * {@link PlanEditor#fileFieldText}); the plan reader then checks its contents.
+     */
+    private final class FileBinding implements Binding {
+        private final TextBinding text;
+        private final JPanel panel = new JPanel(new MigLayout("insets 0, gap 4", "[grow, fill][]"));
+
+        FileBinding(FieldSpec field) {
+            this.text = new TextBinding(field);
+            JButton browse = new JButton("Choose…");
+            browse.setName(field.path() + ":choose");
+            browse.setToolTipText("choose a file, or drop one on the field");
+            browse.addActionListener(e -> choose());
+            TransferHandler drop = new FileDropHandler(this::accept);
+            text.component().setTransferHandler(drop);
+            browse.setTransferHandler(drop);
+            panel.setOpaque(false);
+            panel.add(text.component());
+            panel.add(browse);
+        }
+
+        private void choose() {
+            JFileChooser chooser = new JFileChooser(editor.baseDir().toFile());
+            List<String> extensions = field().choices();
+            if (!extensions.isEmpty()) {
+                chooser.setFileFilter(new FileNameExtensionFilter(field().label() + " (" + extensions.stream()
+                        .map(x -> "*." + x).collect(java.util.stream.Collectors.joining(", ")) + ")",
+                        extensions.toArray(String[]::new)));
+            }
+            if (chooser.showOpenDialog(panel) == JFileChooser.APPROVE_OPTION) {
+                accept(chooser.getSelectedFile().toPath());
+            }
+        }
+
+        private void accept(java.nio.file.Path chosen) {
+            String value = editor.fileFieldText(chosen);
+            text.show(value);
+            editFinished();
+        }
+
+        @Override
+        public FieldSpec field() {
+            return text.field();
+        }
+
+        @Override
+        public JComponent component() {
+            return text.component();
+        }
+
+        @Override
+        public JComponent container() {
+            return panel;
+        }
+
+        @Override
+        public void show(String value) {
+            text.show(value);
+        }
+    }
+
+    /** Accepts one dropped file and hands it on; text drops still reach the field's own editing. */
+    private static final class FileDropHandler extends TransferHandler {
+        private final java.util.function.Consumer<java.nio.file.Path> target;
+        private final TransferHandler textHandler = new JTextField().getTransferHandler();
+
+        FileDropHandler(java.util.function.Consumer<java.nio.file.Path> target) {
+            this.target = target;
+        }
+
+        @Override
+        public boolean canImport(TransferSupport support) {
+            if (support.isDataFlavorSupported(DataFlavor.javaFileListFlavor)) {
+                return true;
+            }
+            return support.getComponent() instanceof JTextField && textHandler.canImport(support);
+        }
+
+        @Override
+        public boolean importData(TransferSupport support) {
+            if (!support.isDataFlavorSupported(DataFlavor.javaFileListFlavor)) {
+                return support.getComponent() instanceof JTextField && textHandler.importData(support);
+            }
+            try {
+                @SuppressWarnings("unchecked")
+                List<java.io.File> files = (List<java.io.File>) support.getTransferable()
+                        .getTransferData(DataFlavor.javaFileListFlavor);
+                if (files.size() != 1) {
+                    return false;
+                }
+                target.accept(files.get(0).toPath());
+                return true;
+            } catch (UnsupportedFlavorException | java.io.IOException e) {
+                return false;
+            }
+        }
+
+        @Override
+        public int getSourceActions(JComponent c) {
+            return textHandler.getSourceActions(c);
+        }
+
+        @Override
+        public void exportToClipboard(JComponent c, java.awt.datatransfer.Clipboard clip, int action) {
+            // copy and cut in the field behave as in any text field
+            textHandler.exportToClipboard(c, clip, action);
+        }
+
+        @Override
+        public void exportAsDrag(JComponent c, java.awt.event.InputEvent e, int action) {
+            textHandler.exportAsDrag(c, e, action);
         }
     }
 

@@ -223,4 +223,68 @@ class PlanEditorTest {
         assertThat(editor.text(REP_RATE)).isEqualTo("3 kHz");
         assertThat(editor.file()).contains(planFile);
     }
+
+    static final FieldSpec SPECTRUM = field("sample.absorptionSpectrum");
+
+    /** An invented demo spectrum (not a measurement). */
+    static void writeSpectrum(Path file) throws Exception {
+        Files.createDirectories(file.getParent());
+        Files.writeString(file, "wavelength_nm,absorbance\n350,1.2\n400,0.9\n500,0.5\n550,0.35\n600,0.1\n");
+    }
+
+    @Test
+    void aChosenSpectrumIsStoredRelativeToThePlansFolderAndReadFromThere() throws Exception {
+        Path spectrum = dir.resolve("spectra/batch-7.csv");
+        writeSpectrum(spectrum);
+        String text = editor.fileFieldText(spectrum);
+        assertThat(text).isEqualTo("spectra/batch-7.csv");
+        editor.edit(SPECTRUM, text);
+        // the reader resolves the path from the plan's folder, not from wherever the planner was started
+        assertThat(editor.check().valid()).as(String.valueOf(editor.check().problem())).isTrue();
+        assertThat(editor.lastValid().orElseThrow().sample().spec().spectrum()).isPresent();
+    }
+
+    @Test
+    void aMissingSpectrumIsMarkedOnItsFieldWithTheResolvedPath() {
+        editor.edit(SPECTRUM, "spectra/none.csv");
+        assertThat(editor.problem(SPECTRUM)).hasValueSatisfying(p -> assertThat(p)
+                .contains("spectrum file not found").contains(dir.resolve("spectra/none.csv").toString()));
+    }
+
+    @Test
+    void anUntitledPlanStoresAChosenFileAbsolutely() throws Exception {
+        editor.newPlan();
+        Path spectrum = dir.resolve("abs.csv");
+        assertThat(editor.fileFieldText(spectrum)).isEqualTo(spectrum.toAbsolutePath().normalize().toString());
+    }
+
+    @Test
+    void saveAsToAnotherFolderKeepsRelativeDataFilesPointingAtTheSameFile() throws Exception {
+        Path spectrum = dir.resolve("spectra/batch-7.csv");
+        writeSpectrum(spectrum);
+        editor.edit(SPECTRUM, "spectra/batch-7.csv");
+        Path elsewhere = dir.resolve("campaigns/2026/plan.json");
+        Files.createDirectories(elsewhere.getParent());
+        events.clear();
+        editor.saveAs(elsewhere);
+        assertThat(editor.text(SPECTRUM)).isEqualTo("../../spectra/batch-7.csv");
+        assertThat(events).containsExactly("REPLACED null", "SAVED null");
+        assertThat(editor.isDirty()).isFalse();
+        assertThat(editor.check().valid()).isTrue();
+        PlanEditor reopened = new PlanEditor();
+        reopened.open(elsewhere);
+        assertThat(reopened.check().valid()).as(String.valueOf(reopened.check().problem())).isTrue();
+        assertThat(reopened.text(SPECTRUM)).isEqualTo("../../spectra/batch-7.csv");
+    }
+
+    @Test
+    void saveInTheSameFolderLeavesPathsAsTyped() throws Exception {
+        Path spectrum = dir.resolve("abs.csv");
+        writeSpectrum(spectrum);
+        editor.edit(SPECTRUM, "./abs.csv");
+        events.clear();
+        editor.saveAs(dir.resolve("copy.plan.json"));
+        assertThat(editor.text(SPECTRUM)).isEqualTo("./abs.csv");
+        assertThat(events).containsExactly("SAVED null");
+    }
 }
