@@ -44,6 +44,9 @@ final class BenchCommand implements Callable<Integer> {
         if (repeats < 1 || repeats > 10_000) {
             throw new IllegalArgumentException("--repeats must be between 1 and 10000, was " + repeats);
         }
+        // read the plan first: a bad file should fail before a minute of timing
+        PlannerUpdateBench update = plannerPlan == null ? null
+                : new PlannerUpdateBench(org.ladderkin.io.PlanCodec.read(plannerPlan));
         PrintWriter out = spec.commandLine().getOut();
         resetPeaks();
         KineticModel ladder = BenchCases.ladder31();
@@ -62,8 +65,7 @@ final class BenchCommand implements Callable<Integer> {
             row(out, "cooling trace, 231 states (engine built)", time(() -> BenchCases.traceOn(hot, 3).bleach()[0]));
             row(out, "cooling trace, 231 states (incl. set-up)", time(() -> BenchCases.singleTrace(cooling).bleach()[0]));
         }
-        if (plannerPlan != null) {
-            PlannerUpdateBench update = new PlannerUpdateBench(org.ladderkin.io.PlanCodec.read(plannerPlan));
+        if (update != null) {
             row(out, "planner update after an edit (prediction)", time(update::predict));
             row(out, "planner update after an edit (incl. chart build)", time(update::predictAndBuildCharts));
         }
