@@ -23,7 +23,8 @@ import picocli.CommandLine.Spec;
 @Command(name = "bench", mixinStandardHelpOptions = true,
         description = {"Time the kinetics engine on its four speed cases (31-state ladder, Nmax = 30; 1000 log delays):",
             "one trace after one pulse; 40-value <N> sweeps with pulse-train steady state at 1 kHz and 80 MHz;",
-            "the cooling-resolved model at Nmax = 20. Prints ms per case and peak heap used."})
+            "the cooling-resolved model at Nmax = 20. With --planner PLAN.json also the desktop planner's update after",
+            "an edit (prediction, and prediction plus chart build). Prints ms per case and peak heap used."})
 final class BenchCommand implements Callable<Integer> {
 
     @Spec

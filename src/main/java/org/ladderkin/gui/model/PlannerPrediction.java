@@ -53,6 +53,11 @@ public final class PlannerPrediction implements PredictionSource {
                 p.heat().steadyRiseK()), "ΔT = P_heat/(4πκL)·Ein(2R²/w²), P_heat = absorbed power × heat share (" + p.heat().model() + ")"));
         out.add(new Prediction.DerivedNumber("residual excitation at the next pulse", String.format(Locale.ROOT, "%.3g",
                 p.chosenRate().residual()), "fixed point of the one-period map M = exp(QT)·E, fraction excited or charged"));
+        out.add(new Prediction.DerivedNumber("steady-state charged fraction", String.format(Locale.ROOT, "%.3g",
+                p.chosenRate().charged()), String.format(Locale.ROOT, "charged states' weight in the fixed point of the "
+                + "one-period map before a pulse, at the highest fluence and %s (limit %.3g)",
+                Quantity.formatBest(p.chosenRate().repetitionRateHz(), Dimension.FREQUENCY, 3),
+                p.inputs().limits().maxChargedFraction())));
         out.add(new Prediction.DerivedNumber("pulses to steady state", String.valueOf(p.predictions().pulsesToSteadyState()),
                 "⌈ln 0.01 / ln|λ₂|⌉ with λ₂ the second eigenvalue of the one-period map"));
         return List.copyOf(out);
