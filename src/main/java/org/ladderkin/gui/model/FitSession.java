@@ -473,10 +473,13 @@ public final class FitSession implements AutoCloseable {
         fire();
     }
 
-    /** Recomputes the plan's curves in the background, unless a fit holds the runner. */
+    /**
+     * Recomputes the plan's curves in the background, unless a fit holds the runner. The old curves stay on show
+     * until the new ones arrive (a fraction of a second; no flicker while the plan is typed).
+     */
     private void requestPreview() {
-        preview = null;
         if (runProblem().isPresent()) {
+            preview = null;
             previewProblem = "";
             previewGeneration = -1;
             return;

@@ -144,6 +144,49 @@ class FitViewWindowTest {
     }
 
     @Test
+    void droppedFilesAreLoadedAndCancelStopsARunningFit() {
+        window.tabbedPane("centre").selectTab("Measured data & fit");
+        boolean imported = GuiActionRunner.execute(() -> {
+            FitPanel panel = frame.fitPanel();
+            java.awt.datatransfer.Transferable files = new java.awt.datatransfer.Transferable() {
+                @Override
+                public java.awt.datatransfer.DataFlavor[] getTransferDataFlavors() {
+                    return new java.awt.datatransfer.DataFlavor[] {java.awt.datatransfer.DataFlavor.javaFileListFlavor};
+                }
+
+                @Override
+                public boolean isDataFlavorSupported(java.awt.datatransfer.DataFlavor flavor) {
+                    return flavor.equals(java.awt.datatransfer.DataFlavor.javaFileListFlavor);
+                }
+
+                @Override
+                public Object getTransferData(java.awt.datatransfer.DataFlavor flavor) {
+                    return java.util.List.of(csv.toFile());
+                }
+            };
+            return panel.getTransferHandler().importData(new javax.swing.TransferHandler.TransferSupport(panel, files));
+        });
+        assertThat(imported).isTrue();
+        window.table("fit:excitations").requireRowCount(FitDemoSeries.MEAN_N.length);
+        waitFor("the plan's curves", () -> GuiActionRunner.execute(() -> frame.fitSession().hasPreview()));
+
+        // Fit and Cancel in one event-thread step: the fit is certainly still running when Cancel is pressed
+        boolean cancelWasEnabled = GuiActionRunner.execute(() -> {
+            window.button("fit:run").target().doClick();
+            boolean enabled = window.button("fit:cancel").target().isEnabled();
+            window.button("fit:cancel").target().doClick();
+            return enabled;
+        });
+        assertThat(cancelWasEnabled).isTrue();
+        assertThat(GuiActionRunner.execute(() -> frame.fitSession().state())).isEqualTo(FitSession.RunState.CANCELLED);
+        window.button("fit:cancel").requireDisabled();
+        window.button("fit:run").requireEnabled();
+        assertThat(window.label("fit:status").text()).isEqualTo("fit cancelled");
+        assertThat(GuiActionRunner.execute(() -> window.progressBar("fit:progress").target().getString())).isEqualTo("cancelled");
+        window.button("fit:push").requireDisabled();
+    }
+
+    @Test
     void aBadTraceFileIsReportedInOneLineAndNothingIsLoaded() throws Exception {
         Path bad = dir.resolve("bad.csv");
         Files.writeString(bad, "delay (ps),a\n1,0.1\n1,0.2\n3,0.1\n");
