@@ -18,7 +18,9 @@ import org.ladderkin.units.Quantity;
  * Which fitted values go into the plan ("Use fitted values in the plan") and which do not, with the reason. Only
  * values whose meaning in the plan is exactly what the fit measured are written:
  * <ul>
- * <li>τ₂ → {@code model.biexcitonLifetime}: the same biexciton Auger lifetime in both.</li>
+ * <li>τ₂ → {@code model.biexcitonLifetime}: the same biexciton Auger lifetime in both. (Unless the plan gives trion
+ * lifetimes, it derives them from τ₂, so they follow the new value; the fit held them at the plan's old ones. Trions
+ * only matter through rare Auger ionisation, so the difference stays far below the fit's error.)</li>
  * <li>τ_rad → {@code model.singleExcitonLifetime} only when the plan's PL quantum yield is 1 and trapping was held.
  * The plan's τ₁ is the TOTAL single-exciton lifetime: it splits into radiative QY/τ₁ and trapping (1 − QY)/τ₁.
  * The fit varies the radiative rate alone with trapping held, so τ_rad equals τ₁ only when there is no trapping;

@@ -18,9 +18,13 @@ import org.ladderkin.plan.PlanInputs;
  * data of the fit view's tests and of the demo file {@code experiments-plan/fh-cdse-ta-series.csv} (invented data of
  * the fictional Fernhollow Ultrafast Spectroscopy Group). The "true" sample differs from the plan on purpose — τ₂ is
  * {@link #TAU2_FACTOR} times and σ {@link #SIGMA_FACTOR} times the plan's — so a fit has something to find.
- * Regenerate the demo file with
- * {@code mvn -B -q test-compile exec:java -Dexec.classpathScope=test -Dexec.mainClass=org.ladderkin.gui.model.FitDemoSeries}
- * or by running {@link #main} from an IDE (working directory: the project folder).
+ * Regenerate the demo file (and its sidecar) from the project folder with
+ * <pre>
+ * mvn -B -q test-compile dependency:build-classpath -Dmdep.outputFile=target/cp.txt -Dmdep.includeScope=test
+ * java -Dladderkin.home=. -cp target/test-classes:target/classes:$(cat target/cp.txt) org.ladderkin.gui.model.FitDemoSeries
+ * </pre>
+ * {@code FitSessionTest.theDemoSeriesNextToTheDemoPlanLoadsAndFits} checks that the file still fits to the τ₂ it was
+ * made with.
  */
 public final class FitDemoSeries {
 
