@@ -206,7 +206,8 @@ class FitViewWindowTest {
         GuiActionRunner.execute(() -> tabs.setSelectedIndex(tabs.indexOfTab(title)));
     }
 
-    private static void waitFor(String what, BooleanSupplier condition) {
+    /** Waits up to two minutes: fits run on a shared, possibly busy machine (a guard, not a speed requirement). */
+    static void waitFor(String what, BooleanSupplier condition) {
         Pause.pause(new Condition(what) {
             @Override
             public boolean test() {
