@@ -262,6 +262,42 @@ class FitSessionTest {
     }
 
     @Test
+    void withQuantumYieldOneTauRadIsTheSingleExcitonLifetimeAndIsWritten() {
+        editor.edit(PushBack.field("model.plQuantumYield"), "1");
+        session.setPlan(editor.lastValid().orElseThrow());
+        session.load(List.of(csv));
+        session.setFree(LadderParameter.TAU_RAD, true);
+        session.run();
+        waitFor("the fit", () -> session.state() != FitSession.RunState.RUNNING);
+        assertThat(session.state()).as(session.message()).isEqualTo(FitSession.RunState.DONE);
+        PushBack p = session.pushBack();
+        assertThat(p.edits()).extracting(e -> e.getKey().path().toString()).contains("model.singleExcitonLifetime");
+        assertThat(p.notes()).noneMatch(n -> n.startsWith("τ_rad"));
+        double tauRad = session.outcome().orElseThrow().result().estimate("tauRadS").value();
+        String written = p.edits().stream().filter(e -> e.getKey().path().toString().equals("model.singleExcitonLifetime"))
+                .findFirst().orElseThrow().getValue();
+        assertThat(Quantity.parse(written).si() / tauRad).isCloseTo(1, org.assertj.core.data.Offset.offset(1e-3));
+    }
+
+    @Test
+    void withPulseEnergiesTheScaleIsNotSigmaAndIsNotWritten() {
+        session.load(List.of(csv));
+        for (int i = 0; i < session.traceCount(); i++) {
+            // any common factor will do: the fit frees ⟨N⟩ per joule
+            session.setExcitation(i, String.format(java.util.Locale.ROOT, "%.4g nJ", 10 * FitDemoSeries.MEAN_N[i]));
+        }
+        session.run();
+        waitFor("the fit", () -> session.state() != FitSession.RunState.RUNNING);
+        assertThat(session.state()).as(session.message()).isEqualTo(FitSession.RunState.DONE);
+        PushBack p = session.pushBack();
+        assertThat(p.edits()).extracting(e -> e.getKey().path().toString()).containsExactly("model.biexcitonLifetime");
+        assertThat(p.notes()).anyMatch(n -> n.startsWith("σ is not written: with pulse energies"));
+        assertThat(session.parameterRows()).anyMatch(r -> r.name().startsWith("⟨N⟩ per pulse energy") && r.value().endsWith("per nJ"));
+        ParameterEstimate tau = session.outcome().orElseThrow().result().estimate("tauAuger2S");
+        assertThat(Math.abs(tau.value() - series.tau2S())).isLessThan(4 * tau.stdError());
+    }
+
+    @Test
     void nothingIsPushedBeforeAFit() {
         assertThat(session.pushBack().edits()).isEmpty();
         assertThat(session.pushBack().notes()).containsExactly("run a fit first");
