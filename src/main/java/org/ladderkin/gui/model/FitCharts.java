@@ -48,11 +48,6 @@ public final class FitCharts {
         };
     }
 
-    /** The label of an internal key in the table, e.g. "τ₂ (biexciton Auger)". */
-    public static String nameOf(String key) {
-        return trade(key).name();
-    }
-
     /** Traces as points; with an outcome, its curves as lines. */
     static ChartSpec overlay(Dataset data, LadderFit.Outcome outcome, boolean fitted) {
         List<ChartSpec.Series> series = new ArrayList<>();

@@ -5,7 +5,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
-import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
@@ -67,7 +66,6 @@ public final class FitSession implements AutoCloseable {
     private double progress;
     private String stage = "";
     private String message = "";
-    private long fitGeneration = -1;
     private FitView fitted;
 
     private FitView preview;
@@ -275,7 +273,7 @@ public final class FitSession implements AutoCloseable {
         stage = "starting";
         message = "fitting " + withExcitation.size() + " traces";
         fitted = null;
-        fitGeneration = runner.submit(p -> {
+        runner.submit(p -> {
             PlanFitBasis basis = basis(inputs);
             LadderFitSetup setup = new LadderFitSetup(basis.base(), train ? basis.periodS() : Double.NaN, freed,
                     planScale(kindOf(withExcitation), basis), 0, Double.NaN, false, false);
@@ -306,7 +304,6 @@ public final class FitSession implements AutoCloseable {
             return;
         }
         runner.cancel();
-        fitGeneration = -1;
         state = RunState.CANCELLED;
         message = "fit cancelled";
         stage = "";
@@ -416,7 +413,6 @@ public final class FitSession implements AutoCloseable {
         if (state != RunState.RUNNING) {
             return;
         }
-        fitGeneration = -1;
         var r = value.outcome().result();
         state = r.ok() ? RunState.DONE : RunState.FAILED;
         fitted = r.ok() ? value : null;
@@ -432,7 +428,6 @@ public final class FitSession implements AutoCloseable {
         if (state != RunState.RUNNING) {
             return;
         }
-        fitGeneration = -1;
         state = RunState.FAILED;
         fitted = null;
         progress = 0;
@@ -452,7 +447,6 @@ public final class FitSession implements AutoCloseable {
     private void stopFit() {
         if (state == RunState.RUNNING) {
             runner.cancel();
-            fitGeneration = -1;
         }
     }
 
@@ -591,10 +585,5 @@ public final class FitSession implements AutoCloseable {
         for (Listener l : listeners) {
             l.sessionChanged();
         }
-    }
-
-    /** Convenience for views: an entry of {@link PlanEditor#editAll}. */
-    static Map.Entry<FieldSpec, String> entry(FieldSpec f, String text) {
-        return Map.entry(f, text);
     }
 }
