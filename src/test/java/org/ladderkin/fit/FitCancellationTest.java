@@ -64,7 +64,17 @@ class FitCancellationTest {
         Dataset data = series();
         Thread worker = new Thread(() -> {
             try {
-                LadderFit.fit(data, setup(), (stage, done, total) -> started.countDown());
+                LadderFit.fit(data, setup(), (stage, done, total) -> {
+                    if (started.getCount() > 0) {
+                        started.countDown();
+                        // hold the fit here until the interrupt arrives, so it cannot finish first on a busy machine
+                        try {
+                            new CountDownLatch(1).await(30, TimeUnit.SECONDS);
+                        } catch (InterruptedException e) {
+                            Thread.currentThread().interrupt();
+                        }
+                    }
+                });
             } catch (Throwable t) {
                 thrown.set(t);
             }
