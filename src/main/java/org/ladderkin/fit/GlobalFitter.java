@@ -3,6 +3,7 @@ package org.ladderkin.fit;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.CancellationException;
 import org.hipparchus.exception.MathRuntimeException;
 import org.hipparchus.linear.Array2DRowRealMatrix;
 import org.hipparchus.linear.EigenDecompositionSymmetric;
@@ -19,7 +20,9 @@ import org.hipparchus.optim.nonlinear.vector.leastsquares.LevenbergMarquardtOpti
  * tried and the lowest χ² kept. Standard errors come from the covariance (JᵀJ)⁻¹ of the full problem (nonlinear and
  * linear parameters) scaled by the reduced χ², formed in the internal coordinates and carried back to the physical
  * ones by the delta method. Nothing here throws for bad data or a misbehaving model: such fits come back
- * {@link FitResult.Status#FAILED} with a message.
+ * {@link FitResult.Status#FAILED} with a message. A fit is cancelled by interrupting the thread it runs on: every model
+ * evaluation checks the thread's interrupt flag first and the fit then ends with a {@link CancellationException}
+ * (the flag is left set, so the caller's thread still knows it was interrupted).
  */
 public final class GlobalFitter {
 
@@ -78,6 +81,8 @@ public final class GlobalFitter {
                 }
                 options.progress().update("start", i + 1, starts.size());
                 continue;
+            } catch (CancellationException e) {
+                throw e;
             } catch (Projection.FitFailure e) {
                 failure = e.getMessage();
             } catch (MathRuntimeException e) {
@@ -101,6 +106,18 @@ public final class GlobalFitter {
             return assemble(best, problem, options, starts.size(), failed, warnings);
         } catch (Projection.FitFailure e) {
             return FitResult.failed(e.getMessage(), starts.size(), warnings);
+        }
+    }
+
+    /**
+     * Ends the fit when its thread has been interrupted. Called before every model evaluation, so a cancelled fit
+     * stops within one evaluation of the series.
+     *
+     * @throws CancellationException when the current thread's interrupt flag is set
+     */
+    static void checkCancelled() {
+        if (Thread.currentThread().isInterrupted()) {
+            throw new CancellationException("fit cancelled");
         }
     }
 

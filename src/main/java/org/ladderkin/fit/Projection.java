@@ -226,6 +226,7 @@ final class Projection {
     }
 
     private double[] predict(int i, ParameterValues p) {
+        GlobalFitter.checkCancelled();
         double[] f = problem.model().predict(i, delays[i], p);
         if (f == null || f.length != delays[i].length) {
             throw new FitFailure("model returned " + (f == null ? "nothing" : f.length + " values") + " for trace '"

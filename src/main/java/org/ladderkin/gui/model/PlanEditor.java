@@ -122,6 +122,7 @@ public final class PlanEditor {
             all.addAll(PlanForms.instrument(document, i));
         }
         all.addAll(PlanForms.GOALS_AND_LIMITS);
+        all.addAll(PlanForms.MODEL);
         return all;
     }
 
@@ -213,6 +214,40 @@ public final class PlanEditor {
         document = next;
         recheck();
         fire(Change.EDIT, path);
+    }
+
+    /**
+     * Sets several fields at once as ONE undo step (e.g. fitted values pushed into the plan): one undo restores every
+     * field, one redo sets them all again. Texts are stored as typed and checked per field, as in {@link #edit}.
+     * Listeners hear {@link Change#REPLACED} because several fields changed.
+     */
+    public void editAll(List<Map.Entry<FieldSpec, String>> edits) {
+        if (edits.isEmpty()) {
+            return;
+        }
+        String before = text();
+        ObjectNode next = document.deepCopy();
+        boolean problemChanged = false;
+        for (Map.Entry<FieldSpec, String> e : edits) {
+            FieldSpec field = e.getKey();
+            String path = field.path().toString();
+            Optional<String> typed = field.check(e.getValue());
+            problemChanged |= !Objects.equals(typedProblems.get(path), typed.orElse(null));
+            typed.ifPresentOrElse(p -> typedProblems.put(path, p), () -> typedProblems.remove(path));
+            field.toJson(e.getValue()).ifPresentOrElse(v -> field.path().set(next, v), () -> field.path().remove(next));
+        }
+        if (ResolvedJson.toText(next).equals(before)) {
+            if (problemChanged) {
+                fire(Change.REPLACED, null);
+            }
+            return;
+        }
+        history.boundary();
+        history.beforeEdit(before, null);
+        history.boundary();
+        document = next;
+        recheck();
+        fire(Change.REPLACED, null);
     }
 
     /** Ends a run of typing in one field: the next edit is a new undo step. */

@@ -101,6 +101,40 @@ public final class PlanForms {
                     "highest tolerated fraction of dots still excited at the next pulse"),
             FieldSpec.quantity("Beam time", "limits.beamTime", Dimension.TIME, "measurement time available"));
 
+    /**
+     * The optional {@code model} section: values that replace the ones the planner derives from the material. Blank
+     * means "derive it"; the fit view writes τ₂ (and, where the mapping is exact, τ₁ and σ) here.
+     */
+    public static final List<FieldSpec> MODEL = List.of(
+            FieldSpec.optionalQuantity("Single-exciton lifetime τ₁", "model.singleExcitonLifetime", Dimension.TIME,
+                    "total single-exciton decay (radiative and trapping); blank: from the material library"),
+            FieldSpec.fraction("PL quantum yield", "model.plQuantumYield", true,
+                    "splits τ₁ into radiative QY/τ₁ and trapping (1 − QY)/τ₁; blank: the default"),
+            FieldSpec.optionalQuantity("Biexciton lifetime τ₂", "model.biexcitonLifetime", Dimension.TIME,
+                    "biexciton Auger lifetime; blank: Auger volume scaling of the material"),
+            optionalChoice("Auger scaling", "model.augerScaling", List.of("statistical", "pairs", "quadratic"),
+                    "how Auger rates grow with the number of excitons; blank: statistical"),
+            optionalChoice("Radiative scaling", "model.radiativeScaling", List.of("linear", "statistical"),
+                    "how radiative rates grow with the number of excitons; blank: statistical"),
+            FieldSpec.optionalQuantity("Negative-trion lifetime", "model.negativeTrionLifetime", Dimension.TIME,
+                    "Auger lifetime of X⁻; blank: from the material or 4·τ₂"),
+            FieldSpec.optionalQuantity("Positive-trion lifetime", "model.positiveTrionLifetime", Dimension.TIME,
+                    "Auger lifetime of X⁺; blank: from 1/τ₂ = 2/τ_X− + 2/τ_X+"),
+            FieldSpec.fraction("Auger ionisation probability", "model.ionisationProbability", true,
+                    "chance that an Auger event ejects a carrier; blank: the default"),
+            FieldSpec.optionalQuantity("Photocharge lifetime", "model.photochargeLifetime", Dimension.TIME,
+                    "how long an ejected charge stays away; blank: the default"),
+            FieldSpec.optionalQuantity("Cooling time", "model.coolingTime", Dimension.TIME,
+                    "intraband cooling time, used for delay windows; blank: the default"));
+
+    /** A pick list with a blank first entry that removes the key. */
+    private static FieldSpec optionalChoice(String label, String path, List<String> choices, String help) {
+        List<String> withBlank = new ArrayList<>();
+        withBlank.add("");
+        withBlank.addAll(choices);
+        return new FieldSpec(label, JsonPath.of(path), FieldSpec.Kind.CHOICE, null, withBlank, true, help);
+    }
+
     private PlanForms() {
     }
 

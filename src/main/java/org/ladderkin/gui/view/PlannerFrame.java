@@ -46,6 +46,7 @@ import org.ladderkin.gui.app.GuiPrefs;
 import org.ladderkin.gui.app.Theme;
 import org.ladderkin.gui.chart.ChartExport;
 import org.ladderkin.gui.model.Autosaver;
+import org.ladderkin.gui.model.FitSession;
 import org.ladderkin.gui.model.PlanEditor;
 import org.ladderkin.gui.model.PlanForms;
 import org.ladderkin.gui.model.Prediction;
@@ -87,6 +88,10 @@ public final class PlannerFrame extends JFrame {
     private final FieldFormPanel laserForm;
     private final FieldFormPanel instrumentsForm;
     private final FieldFormPanel goalsForm;
+    private final FieldFormPanel modelForm;
+    private final FitSession fitSession = new FitSession(SwingUtilities::invokeLater);
+    private final FitPanel fitPanel;
+    private final JTabbedPane centreTabs = new JTabbedPane();
     private final ChartsPanel charts = new ChartsPanel();
     private final RiskTable risks = new RiskTable();
     private final DerivedPanel derived = new DerivedPanel();
@@ -123,6 +128,9 @@ public final class PlannerFrame extends JFrame {
         laserForm = new FieldFormPanel(editor, List.of(new FieldFormPanel.Section("", PlanForms.LASER)));
         instrumentsForm = new FieldFormPanel(editor, instrumentSections());
         goalsForm = new FieldFormPanel(editor, List.of(new FieldFormPanel.Section("", PlanForms.GOALS_AND_LIMITS)));
+        modelForm = new FieldFormPanel(editor, List.of(new FieldFormPanel.Section(
+                "Values that replace the ones derived from the material (blank: derived)", PlanForms.MODEL)));
+        fitPanel = new FitPanel(fitSession, editor, prefs::lastDirectory, prefs::lastDirectory);
 
         JTabbedPane forms = new JTabbedPane();
         forms.setName("forms");
@@ -131,6 +139,7 @@ public final class PlannerFrame extends JFrame {
         forms.addTab("Laser & geometry", scroll(laserForm));
         forms.addTab("Instruments", scroll(instrumentsForm));
         forms.addTab("Goals & limits", scroll(goalsForm));
+        forms.addTab("Model", scroll(modelForm));
 
         JTabbedPane lower = new JTabbedPane();
         lower.setName("lower");
@@ -141,7 +150,10 @@ public final class PlannerFrame extends JFrame {
         lower.setPreferredSize(new java.awt.Dimension(760, 190));
         JSplitPane centre = new JSplitPane(JSplitPane.VERTICAL_SPLIT, charts, lower);
         centre.setResizeWeight(0.72);
-        mainSplit = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, forms, centre);
+        centreTabs.setName("centre");
+        centreTabs.addTab("Prediction", centre);
+        centreTabs.addTab("Measured data & fit", fitPanel);
+        mainSplit = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, forms, centreTabs);
         mainSplit.setResizeWeight(0);
 
         JPanel content = new JPanel(new BorderLayout());
@@ -175,6 +187,16 @@ public final class PlannerFrame extends JFrame {
     /** The prediction shown, or null before the first one arrives. */
     public Prediction prediction() {
         return prediction;
+    }
+
+    /** The fit view's state. */
+    public FitSession fitSession() {
+        return fitSession;
+    }
+
+    /** The fit view. */
+    FitPanel fitPanel() {
+        return fitPanel;
     }
 
     /** How many predictions have been shown. */
@@ -237,6 +259,7 @@ public final class PlannerFrame extends JFrame {
             }
         }
         if (change != PlanEditor.Change.SAVED) {
+            editor.lastValid().ifPresent(fitSession::setPlan);
             editor.lastValid().ifPresent(inputs -> {
                 editNanos = System.nanoTime();
                 requested = inputs;
@@ -414,6 +437,7 @@ public final class PlannerFrame extends JFrame {
         rememberBounds();
         autosaveTimer.stop();
         recompute.close();
+        fitSession.close();
         try {
             autosaver.discard();
         } catch (IOException e) {
@@ -502,6 +526,19 @@ public final class PlannerFrame extends JFrame {
         getRootPane().getActionMap().put("redo", redoAction);
         bar.add(edit);
 
+        JMenu fitMenu = new JMenu("Fit");
+        fitMenu.setMnemonic(KeyEvent.VK_I);
+        fitMenu.add(action("Load Traces…", KeyStroke.getKeyStroke(KeyEvent.VK_L, menuKey), () -> {
+            showFitView();
+            fitPanel.loadTracesWithChooser();
+        })).setName("menu:fit-load");
+        fitMenu.add(action("Run Fit", KeyStroke.getKeyStroke(KeyEvent.VK_R, menuKey), () -> {
+            showFitView();
+            fitPanel.runFit();
+        })).setName("menu:fit-run");
+        fitMenu.add(action("Cancel Fit", null, fitSession::cancel)).setName("menu:fit-cancel");
+        bar.add(fitMenu);
+
         JMenu view = new JMenu("View");
         view.setMnemonic(KeyEvent.VK_V);
         ButtonGroup themes = new ButtonGroup();
@@ -515,6 +552,10 @@ public final class PlannerFrame extends JFrame {
         }
         bar.add(view);
         return bar;
+    }
+
+    private void showFitView() {
+        centreTabs.setSelectedComponent(fitPanel);
     }
 
     private void rebuildRecentMenu() {
@@ -561,7 +602,7 @@ public final class PlannerFrame extends JFrame {
     }
 
     private List<FieldFormPanel> forms() {
-        return List.of(sampleForm, laserForm, instrumentsForm, goalsForm);
+        return List.of(sampleForm, laserForm, instrumentsForm, goalsForm, modelForm);
     }
 
     private List<FieldFormPanel.Section> instrumentSections() {

@@ -65,6 +65,15 @@ class PlannerScreenshots {
             window.tabbedPane("lower").selectTab("Derived numbers");
             save(PlannerWindowTest.screenshot(frame, "planner-invalid-field-" + suffix + ".png"));
             GuiActionRunner.execute(() -> frame.editor().undo());
+
+            // the fit tab with the demo series fitted
+            window.tabbedPane("centre").selectTab("Measured data & fit");
+            GuiActionRunner.execute(() -> frame.fitPanel().loadFiles(java.util.List.of(
+                    PlannerWindowTest.HOME.resolve("experiments-plan/fh-cdse-ta-series.csv"))));
+            GuiActionRunner.execute(() -> frame.fitPanel().runFit());
+            FitViewWindowTest.waitFor("the fit", () -> GuiActionRunner.execute(() -> frame.fitSession().state())
+                    == org.ladderkin.gui.model.FitSession.RunState.DONE);
+            save(PlannerWindowTest.screenshot(frame, "planner-fit-" + suffix + ".png"));
         } finally {
             if (window != null) {
                 window.cleanUp();

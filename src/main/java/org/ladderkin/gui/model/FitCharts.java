@@ -1,0 +1,156 @@
+package org.ladderkin.gui.model;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.ladderkin.fit.Dataset;
+import org.ladderkin.fit.FitResult;
+import org.ladderkin.fit.LadderFit;
+import org.ladderkin.fit.ParameterEstimate;
+import org.ladderkin.fit.Trace;
+import org.ladderkin.report.ChartSpec;
+
+/**
+ * What the fit view draws, as plain data: the traces as points over model curves and the residuals on a log delay
+ * axis (delays after time zero only, as in the fit report), the parameter table in trade units and the diagnostics.
+ */
+public final class FitCharts {
+
+    private FitCharts() {
+    }
+
+    /**
+     * One row of the parameter table.
+     *
+     * @param name   what the parameter is, e.g. "τ₂ (biexciton Auger)"
+     * @param value  value with its unit, e.g. "41.3 ps"
+     * @param error  "± 1.2 ps", "" when held, "± unavailable" when the fit could not give one
+     * @param free   whether the fit varied it
+     */
+    public record ParameterRow(String name, String value, String error, boolean free) {
+    }
+
+    /** A trade unit: how a key is named and shown. */
+    private record Trade(String name, String unit, double factor) {
+    }
+
+    private static Trade trade(String key) {
+        return switch (key) {
+            case "crossSectionM2" -> new Trade("σ at the pump (scale)", "cm²", 1e4);
+            case "occupancyPerJ" -> new Trade("⟨N⟩ per pulse energy (scale)", "per nJ", 1e-9);
+            case "occupancyScale" -> new Trade("factor on the given ⟨N⟩ (scale)", "", 1);
+            case "tauAuger2S" -> new Trade("τ₂ (biexciton Auger)", "ps", 1e12);
+            case "tauRadS" -> new Trade("τ_rad (radiative)", "ns", 1e9);
+            case "tauTrapS" -> new Trade("τ_trap (trapping)", "ns", 1e9);
+            case "timeZeroS" -> new Trade("time zero", "ps", 1e12);
+            case "irfFwhmS" -> new Trade("IRF FWHM", "ps", 1e12);
+            default -> new Trade(key, "", 1);
+        };
+    }
+
+    /** Traces as points; with an outcome, its curves as lines. */
+    static ChartSpec overlay(Dataset data, LadderFit.Outcome outcome, boolean fitted) {
+        List<ChartSpec.Series> series = new ArrayList<>();
+        String title = outcome == null ? "Measured traces" : fitted ? "Measured traces and the fit" : "Measured traces over the plan's model";
+        if (data != null) {
+            double t0 = timeZero(outcome);
+            for (int i = 0; i < data.size(); i++) {
+                Trace t = data.traces().get(i);
+                List<double[]> kept = kept(t, outcome, i, t0);
+                double[] x = column(kept, 0);
+                String name = name(t, outcome, i);
+                series.add(new ChartSpec.Series(name, x, column(kept, 1), true));
+                if (outcome != null) {
+                    series.add(ChartSpec.Series.line(name + (fitted ? " fit" : " plan"), x, column(kept, 2)));
+                }
+            }
+        }
+        return new ChartSpec(title, "delay after time zero (ps)", "signal (file units)", true, false, series);
+    }
+
+    /** Data minus curve per trace; empty without an outcome. */
+    static ChartSpec residuals(Dataset data, LadderFit.Outcome outcome, boolean fitted) {
+        List<ChartSpec.Series> series = new ArrayList<>();
+        if (data != null && outcome != null) {
+            double t0 = timeZero(outcome);
+            for (int i = 0; i < data.size(); i++) {
+                Trace t = data.traces().get(i);
+                List<double[]> kept = kept(t, outcome, i, t0);
+                series.add(ChartSpec.Series.line(name(t, outcome, i), column(kept, 0), column(kept, 3)));
+            }
+        }
+        return new ChartSpec(fitted ? "Residuals (data − fit)" : "Residuals (data − plan's model)",
+                "delay after time zero (ps)", "residual (file units)", true, false, series);
+    }
+
+    /** Rows for the shared parameters (amplitudes and baselines are per trace and left out). */
+    static List<ParameterRow> rows(LadderFit.Outcome outcome) {
+        List<ParameterRow> rows = new ArrayList<>();
+        for (ParameterEstimate e : outcome.result().estimates()) {
+            if (!e.shared() || e.key().equals("amplitude") || e.key().equals("baseline")) {
+                continue;
+            }
+            Trade t = trade(e.key());
+            String unit = t.unit().isEmpty() ? "" : " " + t.unit();
+            String error = e.fixed() ? "" : Double.isFinite(e.stdError()) ? "± " + num(e.stdError() * t.factor()) + unit : "± unavailable";
+            rows.add(new ParameterRow(t.name(), num(e.value() * t.factor()) + unit, error, !e.fixed()));
+        }
+        return List.copyOf(rows);
+    }
+
+    /** Status, fit quality, diagnostics and warnings, one line each. */
+    static List<String> diagnostics(LadderFit.Outcome outcome, boolean fitted) {
+        FitResult r = outcome.result();
+        List<String> lines = new ArrayList<>();
+        if (!fitted) {
+            lines.add("Before a fit: the plan's model at each trace's excitation; only amplitude and baseline per trace are solved.");
+        }
+        if (!r.message().isEmpty()) {
+            lines.add(r.message());
+        }
+        lines.add(String.format(Locale.ROOT, "χ²/dof = %.4g over %d points, %d free parameters (amplitudes and baselines included)",
+                r.reducedChiSquare(), r.points(), r.freeParameters()));
+        lines.addAll(outcome.diagnostics());
+        for (String w : r.warnings()) {
+            lines.add("warning: " + w);
+        }
+        return List.copyOf(lines);
+    }
+
+    private static double timeZero(LadderFit.Outcome outcome) {
+        return outcome == null ? 0 : outcome.result().find("timeZeroS", -1).map(ParameterEstimate::value).orElse(0.0);
+    }
+
+    /** Rows {x (ps), y, curve, residual} of the present points after time zero. */
+    private static List<double[]> kept(Trace t, LadderFit.Outcome outcome, int i, double t0) {
+        double[] d = t.delaysS();
+        double[] y = t.signal();
+        double[] c = outcome == null ? null : outcome.curves().get(i);
+        double[] rr = outcome == null ? null : outcome.result().residuals().get(i);
+        List<double[]> kept = new ArrayList<>();
+        int used = 0; // residuals are listed for the points used, missing ones skipped
+        for (int m = 0; m < d.length; m++) {
+            if (Double.isNaN(y[m])) {
+                continue;
+            }
+            if (d[m] - t0 > 0) {
+                kept.add(new double[] {(d[m] - t0) * 1e12, y[m], c == null ? Double.NaN : c[m], rr == null ? Double.NaN : rr[used]});
+            }
+            used++;
+        }
+        return kept;
+    }
+
+    private static double[] column(List<double[]> rows, int c) {
+        return rows.stream().mapToDouble(v -> v[c]).toArray();
+    }
+
+    private static String name(Trace t, LadderFit.Outcome outcome, int i) {
+        return outcome == null || outcome.meanN().length == 0 ? t.label()
+                : t.label() + String.format(Locale.ROOT, " (⟨N⟩ %.2g)", outcome.meanN()[i]);
+    }
+
+    static String num(double v) {
+        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.4g", v) : "unavailable";
+    }
+}

@@ -1,0 +1,450 @@
+package org.ladderkin.gui.view;
+
+import java.awt.Color;
+import java.awt.Component;
+import java.awt.datatransfer.DataFlavor;
+import java.io.File;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.function.Consumer;
+import java.util.function.Supplier;
+import javax.swing.AbstractCellEditor;
+import javax.swing.JButton;
+import javax.swing.JCheckBox;
+import javax.swing.JFileChooser;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JProgressBar;
+import javax.swing.JScrollPane;
+import javax.swing.JSplitPane;
+import javax.swing.JTable;
+import javax.swing.JTextArea;
+import javax.swing.JTextField;
+import javax.swing.TransferHandler;
+import javax.swing.UIManager;
+import javax.swing.event.DocumentEvent;
+import javax.swing.event.DocumentListener;
+import javax.swing.filechooser.FileNameExtensionFilter;
+import javax.swing.table.AbstractTableModel;
+import javax.swing.table.DefaultTableCellRenderer;
+import javax.swing.table.TableCellEditor;
+import net.miginfocom.swing.MigLayout;
+import org.ladderkin.fit.LadderFitSetup.LadderParameter;
+import org.ladderkin.gui.chart.ChartView;
+import org.ladderkin.gui.model.FitCharts;
+import org.ladderkin.gui.model.FitSession;
+import org.ladderkin.gui.model.PlanEditor;
+import org.ladderkin.gui.model.PushBack;
+import org.ladderkin.units.Dimension;
+import org.ladderkin.units.Quantity;
+
+/**
+ * The "Measured data &amp; fit" view: load traces (file chooser or drag and drop), type each trace's excitation, choose
+ * the freed parameters, run or cancel the fit with a progress bar, see the traces over the plan's model or the fit,
+ * the residuals, the parameter table and diagnostics, and push the fitted values into the plan. State lives in the
+ * {@link FitSession}; this panel lays out, forwards and redraws.
+ */
+public final class FitPanel extends JPanel {
+
+    /** Parameters offered as checkboxes; the IRF width needs a start value the view does not ask for. */
+    private static final List<LadderParameter> OFFERED = List.of(LadderParameter.SCALE, LadderParameter.TAU_AUGER2,
+            LadderParameter.TAU_RAD, LadderParameter.TAU_TRAP, LadderParameter.TIME_ZERO);
+
+    private final FitSession session;
+    private final PlanEditor editor;
+    private final Supplier<Optional<Path>> lastDirectory;
+    private final Consumer<Path> directoryUsed;
+
+    private final JButton load = new JButton("Load traces…");
+    private final JButton fit = new JButton("Fit");
+    private final JButton cancel = new JButton("Cancel");
+    private final JProgressBar progress = new JProgressBar(0, 1000);
+    private final JButton push = new JButton("Use fitted values in the plan");
+    private final JLabel status = new JLabel(" ");
+    private final ExcitationModel excitationModel = new ExcitationModel();
+    private final JTable excitations = new JTable(excitationModel);
+    private final Map<LadderParameter, JCheckBox> freeBoxes = new EnumMap<>(LadderParameter.class);
+    private final JCheckBox pulseTrain = new JCheckBox("Pulse-train steady state at the plan's rate");
+    private final ChartView overlay;
+    private final ChartView residuals;
+    private final ParameterModel parameterModel = new ParameterModel();
+    private final JTable parameters = new JTable(parameterModel);
+    private final JTextArea diagnostics = new JTextArea(6, 30);
+    private String pushNote = "";
+
+    /**
+     * @param session       the fit state
+     * @param editor        the plan the fitted values go into
+     * @param lastDirectory where the file chooser opens
+     * @param directoryUsed told the folder of loaded files
+     */
+    public FitPanel(FitSession session, PlanEditor editor, Supplier<Optional<Path>> lastDirectory, Consumer<Path> directoryUsed) {
+        super(new MigLayout("insets 6, fill", "[grow]", "[][][grow]"));
+        this.session = session;
+        this.editor = editor;
+        this.lastDirectory = lastDirectory;
+        this.directoryUsed = directoryUsed;
+        setName("fit");
+        overlay = new ChartView(session.overlayChart());
+        overlay.setName("fit:overlay");
+        residuals = new ChartView(session.residualChart());
+        residuals.setName("fit:residuals");
+
+        load.setName("fit:load");
+        fit.setName("fit:run");
+        cancel.setName("fit:cancel");
+        progress.setName("fit:progress");
+        progress.setStringPainted(true);
+        push.setName("fit:push");
+        status.setName("fit:status");
+        load.addActionListener(e -> loadChosen());
+        fit.addActionListener(e -> runFit());
+        cancel.addActionListener(e -> session.cancel());
+        push.addActionListener(e -> pushBack());
+        fit.setToolTipText("Fit the loaded traces (Ctrl+R)");
+
+        JPanel toolbar = new JPanel(new MigLayout("insets 0", "[][]16[][][180!]16[]"));
+        toolbar.add(load);
+        toolbar.add(fit);
+        toolbar.add(cancel);
+        toolbar.add(progress, "growx");
+        toolbar.add(push);
+
+        excitations.setName("fit:excitations");
+        excitations.setFillsViewportHeight(true);
+        excitations.getColumnModel().getColumn(1).setCellRenderer(new ExcitationRenderer());
+        excitations.getColumnModel().getColumn(1).setCellEditor(new ExcitationEditor());
+        excitations.putClientProperty("terminateEditOnFocusLost", Boolean.TRUE);
+
+        JPanel freePanel = new JPanel(new MigLayout("insets 0, wrap 2", "[][]"));
+        for (LadderParameter p : OFFERED) {
+            JCheckBox box = new JCheckBox(label(p));
+            box.setName("fit:free:" + p.key());
+            box.addActionListener(e -> session.setFree(p, box.isSelected()));
+            freeBoxes.put(p, box);
+            freePanel.add(box);
+        }
+        pulseTrain.setName("fit:pulse-train");
+        pulseTrain.setToolTipText("Off: one pulse on fresh dots. On: the periodic steady state at the plan's chosen repetition rate.");
+        pulseTrain.addActionListener(e -> session.setPulseTrain(pulseTrain.isSelected()));
+
+        parameters.setName("fit:parameters");
+        parameters.setFillsViewportHeight(true);
+        int[] widths = {170, 110, 110, 40};
+        for (int c = 0; c < widths.length; c++) {
+            parameters.getColumnModel().getColumn(c).setPreferredWidth(widths[c]);
+        }
+        diagnostics.setName("fit:diagnostics");
+        diagnostics.setEditable(false);
+        diagnostics.setLineWrap(true);
+        diagnostics.setWrapStyleWord(true);
+
+        JPanel left = new JPanel(new MigLayout("insets 0, fill, wrap 1", "[grow, fill]",
+                // rows: excitations, free parameters, pulse mode, parameter table, diagnostics
+                "[]2[120:160, grow 30]8[]2[]4[]8[]2[110:140, grow 30]8[]2[80:120, grow 40]"));
+        left.add(new JLabel("Excitation per trace: pulse energy, photon fluence or ⟨N⟩"));
+        left.add(new JScrollPane(excitations), "grow");
+        left.add(new JLabel("Free parameters (the rest are held at the plan's values)"));
+        left.add(freePanel);
+        left.add(pulseTrain);
+        left.add(new JLabel("Parameters"));
+        left.add(new JScrollPane(parameters), "grow");
+        left.add(new JLabel("Diagnostics"));
+        left.add(new JScrollPane(diagnostics), "grow");
+
+        JSplitPane charts = new JSplitPane(JSplitPane.VERTICAL_SPLIT, overlay, residuals);
+        charts.setResizeWeight(0.68);
+        JSplitPane body = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, charts);
+        body.setResizeWeight(0);
+        body.setDividerLocation(460);
+
+        add(toolbar, "growx, wrap");
+        add(status, "wmin 0, growx, wrap");
+        add(body, "grow");
+        setTransferHandler(new TraceDropHandler());
+        session.addListener(this::sessionChanged);
+        sessionChanged();
+    }
+
+    // ---- what the frame and tests use ---------------------------------------------------------------------------
+
+    /** Starts a fit, or says in the status line why it cannot start. */
+    public void runFit() {
+        if (excitations.isEditing()) {
+            excitations.getCellEditor().stopCellEditing();
+        }
+        session.run();
+    }
+
+    /** Loads trace files (errors go to the status line). */
+    public void loadFiles(List<Path> files) {
+        if (files.isEmpty()) {
+            return;
+        }
+        if (session.load(files).isEmpty()) {
+            Path parent = files.get(0).toAbsolutePath().getParent();
+            if (parent != null) {
+                directoryUsed.accept(parent);
+            }
+        }
+    }
+
+    // ---- user actions -------------------------------------------------------------------------------------------
+
+    /** Asks for trace files with a file chooser and loads them. */
+    public void loadTracesWithChooser() {
+        loadChosen();
+    }
+
+    private void loadChosen() {
+        JFileChooser chooser = new JFileChooser(lastDirectory.get().map(Path::toFile).orElse(null));
+        chooser.setMultiSelectionEnabled(true);
+        chooser.setFileFilter(new FileNameExtensionFilter("Trace tables (*.csv, *.tsv, *.txt, *.dat)", "csv", "tsv", "txt", "dat"));
+        if (chooser.showOpenDialog(this) == JFileChooser.APPROVE_OPTION) {
+            List<Path> files = new ArrayList<>();
+            for (File f : chooser.getSelectedFiles()) {
+                files.add(f.toPath());
+            }
+            if (files.isEmpty() && chooser.getSelectedFile() != null) {
+                files.add(chooser.getSelectedFile().toPath());
+            }
+            loadFiles(files);
+        }
+    }
+
+    private void pushBack() {
+        PushBack p = session.applyTo(editor);
+        List<String> written = new ArrayList<>();
+        for (var e : p.edits()) {
+            written.add(e.getKey().label() + " = " + e.getValue());
+        }
+        pushNote = (written.isEmpty() ? "Nothing written into the plan." : "Written into the plan as one step (Edit ▸ Undo takes it back): "
+                + String.join("; ", written) + ".") + (p.notes().isEmpty() ? "" : "\n" + String.join("\n", p.notes()));
+        sessionChanged();
+    }
+
+    // ---- redraw -------------------------------------------------------------------------------------------------
+
+    private void sessionChanged() {
+        FitSession.RunState state = session.state();
+        boolean running = state == FitSession.RunState.RUNNING;
+        Optional<String> blocked = session.runProblem();
+        load.setEnabled(true);
+        fit.setEnabled(!running && blocked.isEmpty());
+        fit.setToolTipText(blocked.map(b -> "Cannot fit yet: " + b).orElse("Fit the loaded traces (Ctrl+R)"));
+        cancel.setEnabled(running);
+        progress.setValue((int) Math.round(1000 * session.progress()));
+        progress.setString(running ? session.stage() : state.name().toLowerCase(java.util.Locale.ROOT));
+        PushBack p = session.pushBack();
+        push.setEnabled(!p.edits().isEmpty());
+        push.setToolTipText("<html>" + escape(String.join("<br>", pushLines(p))) + "</html>");
+
+        String line = !session.loadProblem().isEmpty() ? "⚠ " + session.loadProblem()
+                : blocked.isPresent() && session.traceCount() > 0 && !running ? "⚠ " + blocked.get() : session.message();
+        status.setText(line.isEmpty() ? " " : line);
+        status.setToolTipText(line.isEmpty() ? null : line);
+        Color fail = UIManager.getColor("Ladderkin.verdict.fail");
+        status.setForeground(line.startsWith("⚠") && fail != null ? fail : UIManager.getColor("Label.foreground"));
+
+        if (!excitations.isEditing()) {
+            excitationModel.fireTableDataChanged();
+        }
+        for (var e : freeBoxes.entrySet()) {
+            e.getValue().setSelected(session.free().contains(e.getKey()));
+        }
+        pulseTrain.setSelected(session.pulseTrain());
+        session.planRepetitionRateHz().ifPresent(hz -> pulseTrain.setText("Pulse-train steady state at "
+                + Quantity.formatBest(hz, Dimension.FREQUENCY, 3) + " (the plan's rate)"));
+        overlay.show(session.overlayChart());
+        residuals.show(session.residualChart());
+        parameterModel.rows = session.parameterRows();
+        parameterModel.fireTableDataChanged();
+        List<String> lines = new ArrayList<>(session.diagnostics());
+        if (!session.previewProblem().isEmpty()) {
+            lines.add(0, session.previewProblem());
+        }
+        if (!pushNote.isEmpty()) {
+            lines.add(pushNote);
+        }
+        diagnostics.setText(String.join("\n", lines));
+        diagnostics.setCaretPosition(0);
+    }
+
+    private static List<String> pushLines(PushBack p) {
+        List<String> lines = new ArrayList<>();
+        for (var e : p.edits()) {
+            lines.add("writes " + e.getKey().path() + " = " + e.getValue());
+        }
+        lines.addAll(p.notes());
+        return lines;
+    }
+
+    private static String label(LadderParameter p) {
+        return switch (p) {
+            case SCALE -> "scale (σ, ⟨N⟩ per J or factor)";
+            case TAU_AUGER2 -> "τ₂ (biexciton Auger)";
+            case TAU_RAD -> "τ_rad (radiative)";
+            case TAU_TRAP -> "τ_trap (trapping)";
+            case TIME_ZERO -> "time zero";
+            case IRF -> "IRF FWHM";
+        };
+    }
+
+    private static String escape(String s) {
+        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("&lt;br&gt;", "<br>");
+    }
+
+    // ---- tables -------------------------------------------------------------------------------------------------
+
+    /** Trace label and its editable excitation text. */
+    private final class ExcitationModel extends AbstractTableModel {
+        @Override
+        public int getRowCount() {
+            return session.traceCount();
+        }
+
+        @Override
+        public int getColumnCount() {
+            return 2;
+        }
+
+        @Override
+        public String getColumnName(int c) {
+            return c == 0 ? "Trace" : "Excitation";
+        }
+
+        @Override
+        public Object getValueAt(int r, int c) {
+            return c == 0 ? session.label(r) : session.excitationText(r);
+        }
+
+        @Override
+        public boolean isCellEditable(int r, int c) {
+            return c == 1;
+        }
+
+        @Override
+        public void setValueAt(Object value, int r, int c) {
+            session.setExcitation(r, value == null ? "" : value.toString());
+        }
+    }
+
+    /** Marks an unusable excitation with the error colour and gives the reason as tooltip. */
+    private final class ExcitationRenderer extends DefaultTableCellRenderer {
+        @Override
+        public Component getTableCellRendererComponent(JTable table, Object value, boolean selected, boolean focus, int row, int col) {
+            Optional<String> problem = session.excitationProblem(row);
+            super.getTableCellRendererComponent(table, problem.isPresent() ? "⚠ " + value : value, selected, focus, row, col);
+            Color fail = UIManager.getColor("Ladderkin.verdict.fail");
+            setForeground(problem.isPresent() && fail != null ? fail : selected ? table.getSelectionForeground() : table.getForeground());
+            setToolTipText(problem.orElse("e.g. 2 nJ, 1e13 photons/cm², 0.3 mJ/cm² (with the pump in a sidecar) or 0.5 (⟨N⟩)"));
+            return this;
+        }
+    }
+
+    /** A text field that checks the excitation as the user types (outline and tooltip), committing on Enter. */
+    private final class ExcitationEditor extends AbstractCellEditor implements TableCellEditor {
+        private final JTextField field = new JTextField();
+        private int row;
+
+        ExcitationEditor() {
+            field.setName("fit:excitation-editor");
+            field.addActionListener(e -> stopCellEditing());
+            field.getDocument().addDocumentListener(new DocumentListener() {
+                @Override
+                public void insertUpdate(DocumentEvent e) {
+                    check();
+                }
+
+                @Override
+                public void removeUpdate(DocumentEvent e) {
+                    check();
+                }
+
+                @Override
+                public void changedUpdate(DocumentEvent e) {
+                    check();
+                }
+            });
+        }
+
+        private void check() {
+            if (row >= session.traceCount()) {
+                return;
+            }
+            Optional<String> problem = session.checkExcitation(row, field.getText());
+            field.putClientProperty("JComponent.outline", problem.isPresent() ? "error" : null);
+            field.setToolTipText(problem.orElse(null));
+        }
+
+        @Override
+        public Object getCellEditorValue() {
+            return field.getText();
+        }
+
+        @Override
+        public Component getTableCellEditorComponent(JTable table, Object value, boolean selected, int r, int c) {
+            row = r;
+            field.setText(value == null ? "" : value.toString());
+            check();
+            return field;
+        }
+    }
+
+    /** Parameter, value, standard error, free or held. */
+    private static final class ParameterModel extends AbstractTableModel {
+        private static final String[] COLUMNS = {"Parameter", "Value", "Standard error", ""};
+        private List<FitCharts.ParameterRow> rows = List.of();
+
+        @Override
+        public int getRowCount() {
+            return rows.size();
+        }
+
+        @Override
+        public int getColumnCount() {
+            return COLUMNS.length;
+        }
+
+        @Override
+        public String getColumnName(int c) {
+            return COLUMNS[c];
+        }
+
+        @Override
+        public Object getValueAt(int r, int c) {
+            FitCharts.ParameterRow row = rows.get(r);
+            return switch (c) {
+                case 0 -> row.name();
+                case 1 -> row.value();
+                case 2 -> row.error();
+                default -> row.free() ? "free" : "held";
+            };
+        }
+    }
+
+    /** Loads trace tables dropped on the panel. */
+    private final class TraceDropHandler extends TransferHandler {
+        @Override
+        public boolean canImport(TransferSupport support) {
+            return support.isDataFlavorSupported(DataFlavor.javaFileListFlavor);
+        }
+
+        @Override
+        public boolean importData(TransferSupport support) {
+            try {
+                @SuppressWarnings("unchecked")
+                List<File> files = (List<File>) support.getTransferable().getTransferData(DataFlavor.javaFileListFlavor);
+                loadFiles(files.stream().map(File::toPath).toList());
+                return session.loadProblem().isEmpty();
+            } catch (java.awt.datatransfer.UnsupportedFlavorException | IOException e) {
+                return false;
+            }
+        }
+    }
+}
