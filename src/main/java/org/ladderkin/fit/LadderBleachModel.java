@@ -76,6 +76,9 @@ public final class LadderBleachModel implements TraceModel {
     /** The measured response's sample times minus its centroid (s), and its density there (1/s). */
     private final double[] irfOffsetsS;
     private final double[] irfDensityPerS;
+    /** Past this τ (s) the measured convolution is skipped; the ladder grid's spacing (s). */
+    private final double irfReachS;
+    private final double irfGridStepS;
     private double[] cachedKinetic;
     private double cachedTopN;
     private LadderKinetics cached;
@@ -105,6 +108,8 @@ public final class LadderBleachModel implements TraceModel {
         if (measuredIrf == null) {
             irfOffsetsS = null;
             irfDensityPerS = null;
+            irfReachS = Double.NaN;
+            irfGridStepS = Double.NaN;
         } else {
             double c = measuredIrf.centroidS();
             irfOffsetsS = measuredIrf.timesS();
@@ -112,6 +117,8 @@ public final class LadderBleachModel implements TraceModel {
                 irfOffsetsS[j] -= c;
             }
             irfDensityPerS = measuredIrf.densityPerS();
+            irfReachS = Math.max(irfOffsetsS[irfOffsetsS.length - 1], IRF_REACH * measuredIrf.rmsWidthS());
+            irfGridStepS = measuredIrf.fwhmS() / IRF_GRID_PER_FWHM;
         }
         this.kineticKeys = List.copyOf(kineticKeys);
         this.ladder = ladder;
@@ -310,8 +317,8 @@ public final class LadderBleachModel implements TraceModel {
     /**
      * (g ⊗ s)(τ) with g the measured response, read as piecewise linear between its samples, centred on its centroid:
      * the step part bBefore·∫_τ^∞ g exactly, the decay part ∫ g(x) b(τ − x) dx over x &lt; τ by two-point
-     * Gauss–Legendre on each segment between samples, cut at x = τ, so the integrand is smooth on every piece and the
-     * result moves smoothly with t₀.
+     * Gauss–Legendre on each segment between samples (split into pieces of at most FWHM/{@value #IRF_GRID_PER_FWHM}·2),
+     * cut at x = τ, so the integrand is smooth on every piece and the result moves smoothly with t₀.
      * <p>
      * The ladder is evaluated once per call, on one sorted list of distinct times: a uniform grid in u = τ − x of
      * spacing FWHM/{@value #IRF_GRID_PER_FWHM} from 0 to the largest u needed, where b is read by four-point
@@ -323,7 +330,7 @@ public final class LadderBleachModel implements TraceModel {
         double[] x = irfOffsetsS;
         double[] g = irfDensityPerS;
         int segments = x.length - 1;
-        double reach = Math.max(x[segments], IRF_REACH * measuredIrf.rmsWidthS());
+        double reach = irfReachS;
         double centroid = measuredIrf.centroidS();
         int n = delaysS.length;
         double[] tau = new double[n];
@@ -337,7 +344,7 @@ public final class LadderBleachModel implements TraceModel {
                 uMax = Math.max(uMax, tau[m] - x[0]);
             }
         }
-        int cells = uMax > 0 ? Math.max(3, (int) Math.ceil(uMax / (measuredIrf.fwhmS() / IRF_GRID_PER_FWHM))) : 0;
+        int cells = uMax > 0 ? Math.max(3, (int) Math.ceil(uMax / irfGridStepS)) : 0;
         double h = cells > 0 ? uMax / cells : 0;
         double[] times = new double[(cells > 0 ? cells + 1 : 0) + direct];
         int c = 0;
@@ -364,15 +371,19 @@ public final class LadderBleachModel implements TraceModel {
             } else if (tau[m] > x[0]) {
                 double sum = 0;
                 for (int j = 0; j < segments && x[j] < tau[m]; j++) {
-                    double lo = x[j];
-                    double hi = Math.min(x[j + 1], tau[m]);
-                    double mid = (lo + hi) / 2;
-                    double half = (hi - lo) / 2 * GL2;
+                    double end = Math.min(x[j + 1], tau[m]);
                     double slope = (g[j + 1] - g[j]) / (x[j + 1] - x[j]);
-                    double x1 = mid - half;
-                    double x2 = mid + half;
-                    sum += (hi - lo) / 2 * ((g[j] + slope * (x1 - lo)) * cubic(grid, h, tau[m] - x1)
-                            + (g[j] + slope * (x2 - lo)) * cubic(grid, h, tau[m] - x2));
+                    // pieces no longer than two grid steps, so a coarsely sampled response still meets b smoothly
+                    int pieces = (int) Math.ceil((end - x[j]) / (2 * irfGridStepS));
+                    double width = (end - x[j]) / pieces;
+                    for (int q = 0; q < pieces; q++) {
+                        double mid = x[j] + (q + 0.5) * width;
+                        double half = width / 2 * GL2;
+                        double x1 = mid - half;
+                        double x2 = mid + half;
+                        sum += width / 2 * ((g[j] + slope * (x1 - x[j])) * cubic(grid, h, tau[m] - x1)
+                                + (g[j] + slope * (x2 - x[j])) * cubic(grid, h, tau[m] - x2));
+                    }
                 }
                 out[m] = bBefore * measuredIrf.areaAfter(tau[m] + centroid) + sum;
             } else {

@@ -99,6 +99,45 @@ class MeasuredIrfFitTest {
     }
 
     @Test
+    void aPiecewiseLinearResponseMatchesAdaptiveQuadratureOfTheUnconvolvedModel() {
+        // an asymmetric response that is exactly piecewise linear, so only the model's quadrature and interpolation differ
+        MeasuredIrf irf = new MeasuredIrf(new double[] {-150e-15, -100e-15, 0, 200e-15, 350e-15},
+                new double[] {0, 0.2, 1, 0.1, 0}, "triangle");
+        double c = irf.centroidS();
+        double[] t = irf.timesS();
+        double[] g = irf.densityPerS();
+        ModelParameters fast = ModelParameters.simple(1 / 20e-9, RadiativeScaling.STATISTICAL, 1 / 0.5e-12, AugerScaling.STATISTICAL, 2);
+        double[] n = {3};
+        // a 2 ns period leaves a bleach from earlier pulses, so the step part before time zero is not zero
+        LadderBleachModel measured = LadderBleachModel.forModel(fast, "scale", n, 2e-9, irf);
+        LadderBleachModel bare = LadderBleachModel.forModel(fast, "scale", n, 2e-9);
+        ParameterValues p = ParameterValues.shared(List.of("scale"), new double[] {1});
+        var integrator = new org.hipparchus.analysis.integration.IterativeLegendreGaussIntegrator(5, 1e-11, 1e-14);
+        double[] taus = {-0.3e-12, -0.12e-12, -0.02e-12, 0, 0.03e-12, 0.1e-12, 0.25e-12, 0.4e-12, 1e-12, 3e-12};
+        double[] model = measured.predict(0, taus, p);
+        for (int m = 0; m < taus.length; m++) {
+            double tau = taus[m];
+            double reference = 0;
+            for (int j = 0; j + 1 < t.length; j++) {
+                int seg = j;
+                double lo = t[j] - c;
+                double hi = t[j + 1] - c;
+                // the unconvolved signal jumps at x = τ: integrate the two sides apart
+                double[] cuts = tau > lo && tau < hi ? new double[] {lo, tau, hi} : new double[] {lo, hi};
+                for (int k = 0; k + 1 < cuts.length; k++) {
+                    reference += integrator.integrate(100000, x -> {
+                        double gx = g[seg] + (g[seg + 1] - g[seg]) * (x + c - t[seg]) / (t[seg + 1] - t[seg]);
+                        double u = tau - x;
+                        // exactly at the jump the quadrature never samples; either side is fine
+                        return gx * bare.predict(0, new double[] {u}, p)[0];
+                    }, cuts[k], cuts[k + 1]);
+                }
+            }
+            assertThat(model[m]).as("τ = %g s", tau).isCloseTo(reference, org.assertj.core.data.Offset.offset(2e-6));
+        }
+    }
+
+    @Test
     void aNoisySeriesMadeWithATailedIrfGivesBackTauAuger2AndTimeZero() {
         MeasuredIrf irf = exponentialTail(60e-15, 150e-15, 10e-15);
         double tau2 = 2e-12;
