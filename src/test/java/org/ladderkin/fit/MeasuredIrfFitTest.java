@@ -181,6 +181,61 @@ class MeasuredIrfFitTest {
         assertThat(r.reducedChiSquare() / (noise * noise)).isBetween(0.8, 1.25);
     }
 
+    /**
+     * Whatever the response looks like, where its file puts zero and in which units it counts must not matter: the
+     * centroid is time zero and the area is one. Far before the response the signal is what earlier pulses left; far
+     * after it, the unconvolved signal.
+     */
+    @org.junit.jupiter.params.ParameterizedTest(name = "seed {0}")
+    @org.junit.jupiter.params.provider.ValueSource(longs = {1, 2, 3, 4, 5, 6, 7, 8})
+    void shiftingOrScalingTheFileChangesNothing(long seed) {
+        SplittableRandom rng = new SplittableRandom(seed);
+        int n = 6 + rng.nextInt(60);
+        double sigma = (30 + 150 * rng.nextDouble()) * 1e-15;
+        double tail = (5 + 300 * rng.nextDouble()) * 1e-15;
+        double span = 6 * sigma + 8 * tail;
+        double[] t = new double[n];
+        double[] g = new double[n];
+        double lam = 1 / tail;
+        double power = 0.8 + 0.4 * rng.nextDouble();
+        for (int i = 0; i < n; i++) {
+            // uneven spacing, as a scan with a non-linear stage readout gives
+            t[i] = -3 * sigma + span * Math.pow(i / (double) (n - 1), power);
+            g[i] = Math.exp(lam / 2 * (lam * sigma * sigma - 2 * t[i]))
+                    * org.hipparchus.special.Erf.erfc((lam * sigma * sigma - t[i]) / (Math.sqrt(2) * sigma));
+        }
+        g[0] = 0;
+        g[n - 1] = 0;
+        MeasuredIrf irf = new MeasuredIrf(t, g, "random");
+        double shift = (rng.nextDouble() - 0.5) * 1e-9;
+        double[] shifted = irf.timesS();
+        double[] scaled = irf.densityPerS();
+        for (int i = 0; i < n; i++) {
+            shifted[i] += shift;
+            scaled[i] *= 1e6;
+        }
+        MeasuredIrf moved = new MeasuredIrf(shifted, scaled, "moved");
+        double[] delays = delaysAcrossZero();
+        double[] nAvg = {2};
+        ParameterValues p = ParameterValues.shared(List.of("scale", "timeZeroS"), new double[] {1, 0.1e-12});
+        double[] a = LadderBleachModel.forModel(LadderSeries.BASE, "scale", nAvg, 20e-9, irf).predict(0, delays, p);
+        double[] b = LadderBleachModel.forModel(LadderSeries.BASE, "scale", nAvg, 20e-9, moved).predict(0, delays, p);
+        double[] bare = LadderBleachModel.forModel(LadderSeries.BASE, "scale", nAvg, 20e-9).predict(0, delays, p);
+        double before = bare[0];
+        double c = irf.centroidS();
+        double reach = Math.max(t[n - 1] - c, 50 * irf.rmsWidthS());
+        for (int m = 0; m < delays.length; m++) {
+            double tau = delays[m] - 0.1e-12;
+            // a 0.5 ns shift costs the offsets about 1e-7 fs of rounding: far below the 1e-9 asked
+            assertThat(b[m]).as("delay %g s", delays[m]).isCloseTo(a[m], org.assertj.core.data.Offset.offset(1e-9 * Math.abs(before) + 1e-9));
+            if (tau <= t[0] - c) {
+                assertThat(a[m]).isEqualTo(before);
+            } else if (tau >= reach) {
+                assertThat(a[m]).isCloseTo(bare[m], org.assertj.core.data.Offset.offset(1e-12));
+            }
+        }
+    }
+
     @Test
     void theWidthOfAMeasuredIrfIsNotAFitParameter() {
         MeasuredIrf irf = sampledGaussian(0.3e-12, 0, 10e-15);

@@ -42,6 +42,19 @@ class PlanIrfFileTest {
     }
 
     @Test
+    void aTcspcInstrumentTakesAnIrfFileToo(@TempDir Path dir) throws Exception {
+        // triangle of half-width 60 ps: FWHM 60 ps
+        Files.writeString(dir.resolve("spad.tsv"), "# scattered laser light (demo)\nt_ps\tcounts\n-90\t0\n-60\t0\n0\t5000\n60\t0\n90\t0\n");
+        Path plan = dir.resolve("p.plan.json");
+        Files.writeString(plan, PlanCodecRejectionTest.demoText().replace("\"irfFwhm\": \"60 ps\"", "\"irfFile\": \"spad.tsv\""));
+        Instrument tcspc = PlanCodec.read(plan).instruments().get(1);
+        assertThat(tcspc.kind()).isEqualTo(Instrument.Kind.TCSPC);
+        assertThat(tcspc.measuredIrf().origin()).isEqualTo("spad.tsv");
+        assertThat(tcspc.irfFwhmS()).isCloseTo(60e-12, org.assertj.core.data.Offset.offset(1e-24));
+        assertThat(tcspc.measuredIrf().centroidS()).isCloseTo(0, org.assertj.core.data.Offset.offset(1e-24));
+    }
+
+    @Test
     void bothIrfFileAndIrfFwhmAreRefusedAtTheFile() throws Exception {
         String t = demoWith("\"irfFwhm\": \"200 fs\", \"irfFile\": \"ta.csv\"");
         assertThatThrownBy(() -> PlanCodecRejectionTest.read(t)).isInstanceOf(InputException.class)
