@@ -291,7 +291,8 @@ public final class PlanEditor {
     }
 
     private void recheck() {
-        check = PlanCheck.of(text(), displayName());
+        // the reader takes relative paths in the plan (absorption spectrum, IRF file) from the folder of the name it is given
+        check = PlanCheck.of(text(), file == null ? displayName() : file.toAbsolutePath().toString());
         if (check.valid()) {
             lastValid = check.inputs();
         }

@@ -38,7 +38,7 @@ class PlanFormsTest {
     }
 
     @Test
-    void aMeasuredIrfFileIsBoundToAnOptionalField(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+    void aMeasuredIrfFileIsBoundToAnOptionalFieldAndReadFromThePlansFolder(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
             throws Exception {
         java.nio.file.Path home = java.nio.file.Path.of(System.getProperty("ladderkin.home", "."));
         java.nio.file.Files.copy(home.resolve("experiments-plan/fh-ta-irf.csv"), dir.resolve("ta-irf.csv"));
@@ -54,6 +54,9 @@ class PlanFormsTest {
                 .findFirst().orElseThrow();
         assertThat(file.optional()).isTrue();
         assertThat(fwhm.optional()).isTrue();
+        // relative to the plan's folder, as on the command line (not to the folder the planner was started in)
+        assertThat(editor.check().valid()).as(editor.check().problem()).isTrue();
+        assertThat(editor.check().inputs().instruments().get(0).measuredIrf().origin()).isEqualTo("ta-irf.csv");
     }
 
     @Test
