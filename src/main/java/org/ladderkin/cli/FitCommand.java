@@ -20,6 +20,7 @@ import org.ladderkin.fit.LadderFitSetup.LadderParameter;
 import org.ladderkin.fit.ParameterEstimate;
 import org.ladderkin.io.AtomicFiles;
 import org.ladderkin.io.FitResultJson;
+import org.ladderkin.io.IrfFileReader;
 import org.ladderkin.io.MissingValuePolicy;
 import org.ladderkin.io.ResolvedJson;
 import org.ladderkin.io.TableOptions;
@@ -27,6 +28,7 @@ import org.ladderkin.io.TraceArguments;
 import org.ladderkin.io.TraceSidecarCodec;
 import org.ladderkin.io.TraceTableReader;
 import org.ladderkin.kinetics.ModelParameters;
+import org.ladderkin.observe.MeasuredIrf;
 import org.ladderkin.report.FitReport;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Quantity;
@@ -93,6 +95,10 @@ final class FitCommand implements Callable<Integer> {
     @Option(names = "--irf", paramLabel = "TIME", description = "Gaussian IRF FWHM (start when freed); no IRF when omitted")
     String irf;
 
+    @Option(names = "--irf-file", paramLabel = "FILE",
+            description = "measured IRF: a table 'time (ps),response' (its centroid is time zero, its width fixed); not with --irf")
+    Path irfFile;
+
     @Option(names = "--shared-amplitude", description = "one amplitude for all traces and no baselines (keeps the saturation curve in the fit)")
     boolean sharedAmplitude;
 
@@ -122,6 +128,10 @@ final class FitCommand implements Callable<Integer> {
         if (outDir != null) {
             org.ladderkin.report.Charts.warmUpInBackground();
         }
+        if (irf != null && irfFile != null) {
+            throw new IllegalArgumentException("give either --irf (a Gaussian width) or --irf-file (a measured IRF), not both");
+        }
+        MeasuredIrf measured = irfFile == null ? null : IrfFileReader.read(irfFile, irfFile.toString());
         Dataset data = metadata(TraceTableReader.readAll(dataFiles, new TableOptions(
                 delayUnit == null ? null : Units.of(delayUnit.trim()), MissingValuePolicy.DROP)));
         ModelParameters base = modelOptions.parameters(modelFile);
@@ -134,7 +144,7 @@ final class FitCommand implements Callable<Integer> {
         LadderFitSetup setup = new LadderFitSetup(base, repRate == null ? Double.NaN : 1 / positive(repRate, Dimension.FREQUENCY, "--rep-rate"),
                 freed, crossSection == null ? Double.NaN : positive(crossSection, Dimension.AREA, "--cross-section"),
                 Quantity.parseSi(timeZero, Dimension.TIME), irf == null ? Double.NaN : positive(irf, Dimension.TIME, "--irf"),
-                sharedAmplitude, profile);
+                sharedAmplitude, profile, measured);
         PrintWriter err = spec.commandLine().getErr();
         if (base.coolingRatePerS() > 0 && !quiet) {
             // a hot-resolved ladder has hundreds of states at ⟨N⟩ ≈ 5 and every trial of τ₂ rebuilds it
@@ -223,6 +233,9 @@ final class FitCommand implements Callable<Integer> {
             FitResultJson.TradeKey t = FitResultJson.trade(e.key());
             out.println(String.format(Locale.ROOT, "  %-16s %-12.5g %s", t.key(), e.value() * t.factor(),
                     e.fixed() ? "(fixed)" : "± " + String.format(Locale.ROOT, "%.3g", e.stdError() * t.factor())));
+        }
+        if (outcome.measuredIrf() != null) {
+            out.println("  " + FitResultJson.measuredIrfNote(outcome.measuredIrf()));
         }
         out.println(String.format(Locale.ROOT, "  reduced chi²     %.4g over %d points", r.reducedChiSquare(), r.points()));
         for (String d : outcome.diagnostics()) {

@@ -118,6 +118,7 @@ final class PlanCommand implements Callable<Integer> {
         for (Instrument i : plan.instruments()) {
             out.println("Detect   " + i.kind().key() + ": " + fmt(i.minDelayS(), Dimension.TIME) + " to " + fmt(i.maxDelayS(), Dimension.TIME)
                     + ", IRF " + fmt(i.irfFwhmS(), Dimension.TIME)
+                    + (i.measuredIrf() == null ? "" : " (measured, " + i.measuredIrf().origin() + ")")
                     + (i.kind() == Instrument.Kind.TRANSIENT_ABSORPTION
                     ? ", noise floor " + String.format(java.util.Locale.ROOT, "%.2g", i.noiseFloor()) + " OD"
                     : ", count rate ≤ " + pct(i.maxCountFraction()) + " of the repetition rate"));

@@ -82,7 +82,8 @@ final class FitDiagnostics {
             return java.util.Optional.empty();
         }
         double t0 = optional(best, LadderBleachModel.TIME_ZERO);
-        double irf = optional(best, LadderBleachModel.IRF_FWHM);
+        double irf = model.measuredIrf().map(org.ladderkin.observe.MeasuredIrf::fwhmS)
+                .orElse(optional(best, LadderBleachModel.IRF_FWHM));
         double[] e = new double[n.length];
         double[] mShape = new double[n.length];
         double[] noise = new double[n.length];

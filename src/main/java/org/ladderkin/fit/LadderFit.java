@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.ladderkin.fit.LadderFitSetup.LadderParameter;
+import org.ladderkin.observe.MeasuredIrf;
 
 /**
  * Global fit of a measured fluence series with the ladder model ({@link LadderBleachModel}): sets up the shared
@@ -29,9 +30,16 @@ public final class LadderFit {
      * @param meanN       each trace's ⟨N⟩ at the best fit (empty when the fit failed)
      * @param curves      each trace's fitted curve at its delays (empty when the fit failed)
      * @param diagnostics findings about the sample and set-up, each with what to change
+     * @param measuredIrf the measured instrument response the model was convolved with, or null
      */
     public record Outcome(FitResult result, Excitation.Kind kind, String scaleKey, double[] excitation, double[] meanN,
-                          List<double[]> curves, List<String> diagnostics) {
+                          List<double[]> curves, List<String> diagnostics, MeasuredIrf measuredIrf) {
+
+        /** An outcome without a measured IRF. */
+        public Outcome(FitResult result, Excitation.Kind kind, String scaleKey, double[] excitation, double[] meanN,
+                       List<double[]> curves, List<String> diagnostics) {
+            this(result, kind, scaleKey, excitation, meanN, curves, diagnostics, null);
+        }
     }
 
     /** Fits {@code data}; every trace must carry an excitation of the same kind. */
@@ -61,7 +69,7 @@ public final class LadderFit {
         double scaleStart = Double.isNaN(setup.scaleStart())
                 ? kind == Excitation.Kind.MEAN_OCCUPANCY ? 1 : AUTO_TOP_N[0] / top : setup.scaleStart();
         List<ParameterSpec> specs = specs(setup, scaleKey, scaleStart);
-        LadderBleachModel model = LadderBleachModel.forModel(setup.base(), scaleKey, x, setup.periodS());
+        LadderBleachModel model = LadderBleachModel.forModel(setup.base(), scaleKey, x, setup.periodS(), setup.measuredIrf());
         FitProblem problem = new FitProblem(data, counted(model, progress, FitOptions.defaults().maxEvaluations()), specs,
                 setup.sharedAmplitude() ? LinearTerms.NONE : LinearTerms.AMPLITUDE_AND_BASELINE);
         FitOptions options = FitOptions.defaults().withProgress(progress);
@@ -83,7 +91,7 @@ public final class LadderFit {
         }
         FitResult r = GlobalFitter.fit(problem, options);
         if (!r.ok()) {
-            return new Outcome(r, kind, scaleKey, x, new double[0], List.of(), List.of());
+            return new Outcome(r, kind, scaleKey, x, new double[0], List.of(), List.of(), setup.measuredIrf());
         }
         ParameterValues best = valuesAt(r, specs);
         double[] n = new double[x.length];
@@ -101,7 +109,7 @@ public final class LadderFit {
         }
         List<String> diagnostics = FitDiagnostics.find(data, model, best, r, n,
                 Double.isNaN(setup.scaleStart()) || !setup.free().contains(LadderParameter.SCALE) ? Double.NaN : setup.scaleStart(), scaleKey);
-        return new Outcome(r, kind, scaleKey, x, n, curves, diagnostics);
+        return new Outcome(r, kind, scaleKey, x, n, curves, diagnostics, setup.measuredIrf());
     }
 
     /**

@@ -44,6 +44,12 @@ public final class FitResultJson {
         return TRADE.getOrDefault(siKey, new TradeKey(siKey, 1));
     }
 
+    /** One line saying which measured IRF the fit used, e.g. "measured IRF from irf.csv, FWHM 104 fs". */
+    public static String measuredIrfNote(org.ladderkin.observe.MeasuredIrf irf) {
+        return "measured IRF from " + irf.origin() + ", FWHM " + org.ladderkin.units.Quantity.formatBest(irf.fwhmS(),
+                org.ladderkin.units.Dimension.TIME, 3) + " (centroid at time zero)";
+    }
+
     /** The JSON tree of {@code outcome}. */
     public static ObjectNode of(Dataset data, LadderFit.Outcome outcome, ObjectNode planComparison) {
         FitResult r = outcome.result();
@@ -58,6 +64,12 @@ public final class FitResultJson {
             case PULSE_ENERGY_J -> "pulseEnergy";
             case MEAN_OCCUPANCY -> "meanOccupancy";
         });
+        if (outcome.measuredIrf() != null) {
+            ObjectNode irf = root.putObject("measuredIrf");
+            irf.put("file", outcome.measuredIrf().origin());
+            irf.put("fwhmFs", outcome.measuredIrf().fwhmS() * 1e15);
+            irf.put("samples", outcome.measuredIrf().size());
+        }
         ObjectNode params = root.putObject("parameters");
         for (ParameterEstimate e : r.estimates()) {
             if (!e.shared() || e.key().equals("amplitude") || e.key().equals("baseline")) {

@@ -14,6 +14,7 @@ import org.ladderkin.plan.Limits;
 import org.ladderkin.plan.ModelAssumptions;
 import org.ladderkin.kinetics.rate.AugerScaling;
 import org.ladderkin.kinetics.rate.RadiativeScaling;
+import org.ladderkin.observe.MeasuredIrf;
 import org.ladderkin.plan.PlanInputs;
 import org.ladderkin.sample.Sample;
 import org.ladderkin.units.Dimension;
@@ -113,12 +114,12 @@ public final class PlanCodec {
             double bin = n.field("timeBin").positive(Dimension.TIME, null);
             Node rangeNode = n.field("timeRange");
             double range = rangeNode.positive(Dimension.TIME, null);
-            double irf = n.field("irfFwhm").positive(Dimension.TIME, null);
+            Response irf = response(n);
             double countFraction = n.optional("maxCountFraction").map(Node::probability).orElse(0.05);
             if (bin >= range) {
                 throw rangeNode.error("time range must exceed the time bin");
             }
-            inst = new Instrument(Instrument.Kind.TCSPC, bin, range, 0, irf, countFraction);
+            inst = new Instrument(Instrument.Kind.TCSPC, bin, range, 0, irf.fwhmS(), countFraction, irf.measured());
         } else {
             Node range = n.field("delayRange");
             List<Node> ends = range.items(2);
@@ -131,11 +132,43 @@ public final class PlanCodec {
                 throw range.error("shortest delay must be below the longest (write [shortest, longest])");
             }
             double noise = n.field("noiseFloor").positive(Dimension.ABSORBANCE, null);
-            double irf = n.field("irfFwhm").positive(Dimension.TIME, null);
-            inst = new Instrument(Instrument.Kind.TRANSIENT_ABSORPTION, lo, hi, noise, irf, 0);
+            Response irf = response(n);
+            inst = new Instrument(Instrument.Kind.TRANSIENT_ABSORPTION, lo, hi, noise, irf.fwhmS(), 0, irf.measured());
         }
         n.finish();
         return inst;
+    }
+
+    /** An instrument's response: its FWHM, and the measured curve when one is given. */
+    private record Response(double fwhmS, MeasuredIrf measured) {
+    }
+
+    /**
+     * {@code irfFwhm} (a Gaussian of that width) or {@code irfFile} (a measured curve, {@link IrfFileReader}, the path
+     * taken from the plan file's folder as for {@code sample.absorptionSpectrum}); exactly one of them.
+     */
+    private static Response response(Node n) {
+        Node file = n.optional("irfFile").orElse(null);
+        Node fwhm = n.optional("irfFwhm").orElse(null);
+        if (file == null) {
+            if (fwhm == null) {
+                throw new InputException(n.location(), n.path() + ".irfFwhm", "missing required field in '" + n.path()
+                        + "' (add \"irfFwhm\": ... for a Gaussian response, or \"irfFile\": ... for a measured one)");
+            }
+            return new Response(fwhm.positive(Dimension.TIME, null), null);
+        }
+        if (fwhm != null) {
+            throw file.error("give either 'irfFwhm' or 'irfFile', not both (a measured response fixes the width)");
+        }
+        if (file.string().isBlank()) {
+            throw file.error("expected the path of an IRF table such as \"fh-ta-irf.csv\"");
+        }
+        Path p = SampleCodec.baseDir(Path.of(file.location().file())).resolve(file.string());
+        if (!java.nio.file.Files.isRegularFile(p)) {
+            throw file.error("IRF file not found: " + p + " (relative paths start at the plan file's folder)");
+        }
+        MeasuredIrf irf = IrfFileReader.read(p, file.string());
+        return new Response(irf.fwhmS(), irf);
     }
 
     private static Limits limits(Node n) {

@@ -130,6 +130,11 @@ public final class PlanOutputs {
         for (DelayPlan dp : plan.delayPlans()) {
             ObjectNode o = delays.addObject();
             o.put("instrument", dp.instrument().kind().key());
+            if (dp.instrument().measuredIrf() != null) {
+                // echoed only for a measured response, so plans with a Gaussian FWHM keep their output unchanged
+                o.put("irfFile", dp.instrument().measuredIrf().origin());
+                o.put("irfFwhmPs", dp.instrument().irfFwhmS() * 1e12);
+            }
             if (dp.instrument().kind() == Instrument.Kind.TRANSIENT_ABSORPTION) {
                 ArrayNode g = o.putArray("delaysPs");
                 for (double t : dp.delaysS()) {

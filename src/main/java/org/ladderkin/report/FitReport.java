@@ -28,6 +28,9 @@ public final class FitReport {
         HtmlPage page = new HtmlPage("Global fit of a fluence series");
         page.paragraph("Data: " + String.join(", ", data.sourceFiles()) + " — " + data.size() + " traces, fitted with the "
                 + "exciton ladder (shared parameters across the series).");
+        if (outcome.measuredIrf() != null) {
+            page.paragraph("Instrument response: " + FitResultJson.measuredIrfNote(outcome.measuredIrf()) + ".");
+        }
         page.paragraph("Status: " + r.status().name().toLowerCase(Locale.ROOT) + (r.message().isEmpty() ? "" : " — " + r.message()));
         if (!r.ok()) {
             return page.render();

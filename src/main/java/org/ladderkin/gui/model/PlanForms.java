@@ -147,16 +147,25 @@ public final class PlanForms {
         if (kind.equals(Instrument.Kind.TCSPC.key())) {
             fields.add(FieldSpec.quantity("Time bin", p + "timeBin", Dimension.TIME, "width of one TCSPC histogram bin"));
             fields.add(FieldSpec.quantity("Time range", p + "timeRange", Dimension.TIME, "span of the TCSPC histogram"));
-            fields.add(FieldSpec.quantity("IRF FWHM", p + "irfFwhm", Dimension.TIME, "instrument response width"));
+            irf(fields, p);
             fields.add(FieldSpec.fraction("Max count fraction", p + "maxCountFraction", true,
                     "highest detected-photon rate as a fraction of the repetition rate"));
         } else {
             fields.add(FieldSpec.quantity("Shortest delay", p + "delayRange[0]", Dimension.TIME, "first useful delay"));
             fields.add(FieldSpec.quantity("Longest delay", p + "delayRange[1]", Dimension.TIME, "longest delay the stage reaches"));
             fields.add(FieldSpec.quantity("Noise floor", p + "noiseFloor", Dimension.ABSORBANCE, "rms ΔA noise per averaged point"));
-            fields.add(FieldSpec.quantity("IRF FWHM", p + "irfFwhm", Dimension.TIME, "instrument response width"));
+            irf(fields, p);
         }
         return List.copyOf(fields);
+    }
+
+    /** The instrument response: a Gaussian width or a measured table, one of the two (the reader refuses both). */
+    private static void irf(List<FieldSpec> fields, String p) {
+        fields.add(FieldSpec.optionalQuantity("IRF FWHM", p + "irfFwhm", Dimension.TIME,
+                "instrument response width (a Gaussian); leave empty when an IRF file is given"));
+        fields.add(FieldSpec.file("IRF file", p + "irfFile", List.of("csv", "tsv", "txt"),
+                "measured response, a table 'time (ps),response' (kept relative to the plan's folder), instead of the "
+                        + "FWHM; choose or drop a file"));
     }
 
     /** How many instruments the document lists (0 when the list is missing). */

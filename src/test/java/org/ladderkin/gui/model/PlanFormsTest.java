@@ -38,6 +38,28 @@ class PlanFormsTest {
     }
 
     @Test
+    void aMeasuredIrfFileIsBoundToAnOptionalFieldAndReadFromThePlansFolder(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+            throws Exception {
+        java.nio.file.Path home = java.nio.file.Path.of(System.getProperty("ladderkin.home", "."));
+        java.nio.file.Files.copy(home.resolve("experiments-plan/fh-ta-irf.csv"), dir.resolve("ta-irf.csv"));
+        java.nio.file.Path plan = dir.resolve("irf.plan.json");
+        java.nio.file.Files.writeString(plan, java.nio.file.Files.readString(PlanEditorTest.DEMO)
+                .replace("\"irfFwhm\": \"200 fs\"", "\"irfFile\": \"ta-irf.csv\""));
+        PlanEditor editor = new PlanEditor();
+        editor.open(plan);
+        assertThat(unbound(editor)).isEmpty();
+        FieldSpec file = editor.fields().stream().filter(f -> f.path().toString().equals("instruments[0].irfFile"))
+                .findFirst().orElseThrow();
+        FieldSpec fwhm = editor.fields().stream().filter(f -> f.path().toString().equals("instruments[0].irfFwhm"))
+                .findFirst().orElseThrow();
+        assertThat(file.optional()).isTrue();
+        assertThat(fwhm.optional()).isTrue();
+        // relative to the plan's folder, as on the command line (not to the folder the planner was started in)
+        assertThat(editor.check().valid()).as(editor.check().problem()).isTrue();
+        assertThat(editor.check().inputs().instruments().get(0).measuredIrf().origin()).isEqualTo("ta-irf.csv");
+    }
+
+    @Test
     void fieldPathsAreUnique() {
         List<String> paths = new PlanEditor().fields().stream().map(f -> f.path().toString()).toList();
         assertThat(paths).doesNotHaveDuplicates();
