@@ -22,12 +22,14 @@ import org.ladderkin.io.AtomicFiles;
 import org.ladderkin.io.FitResultJson;
 import org.ladderkin.io.IrfFileReader;
 import org.ladderkin.io.MissingValuePolicy;
+import org.ladderkin.io.PlanCodec;
 import org.ladderkin.io.ResolvedJson;
 import org.ladderkin.io.TableOptions;
 import org.ladderkin.io.TraceArguments;
 import org.ladderkin.io.TraceSidecarCodec;
 import org.ladderkin.io.TraceTableReader;
 import org.ladderkin.kinetics.ModelParameters;
+import org.ladderkin.plan.PlanFitBasis;
 import org.ladderkin.observe.MeasuredIrf;
 import org.ladderkin.report.FitReport;
 import org.ladderkin.units.Dimension;
@@ -57,7 +59,7 @@ final class FitCommand implements Callable<Integer> {
     @Parameters(arity = "1..*", paramLabel = "DATA", description = "trace tables (CSV/TSV)")
     List<Path> dataFiles;
 
-    @Option(names = "--model", paramLabel = "MODEL.json", description = "model file (omit to build the model from the model flags)")
+    @Option(names = "--model", paramLabel = "MODEL.json", description = "model file (omit to build the model from the model flags, or from --plan's model)")
     Path modelFile;
 
     @Mixin
@@ -108,7 +110,8 @@ final class FitCommand implements Callable<Integer> {
     @Option(names = "--delay-unit", paramLabel = "UNIT", description = "delay unit when the header names none (e.g. ps)")
     String delayUnit;
 
-    @Option(names = "--plan", paramLabel = "PLAN.json", description = "campaign plan to compare the fit with")
+    @Option(names = "--plan", paramLabel = "PLAN.json",
+            description = "campaign plan to compare the fit with; without --model or model flags its model is the fit's start")
     Path planFile;
 
     @Option(names = "--out", paramLabel = "DIR", description = "output folder (created if missing)")
@@ -134,7 +137,9 @@ final class FitCommand implements Callable<Integer> {
         MeasuredIrf measured = irfFile == null ? null : IrfFileReader.read(irfFile, irfFile.toString());
         Dataset data = metadata(TraceTableReader.readAll(dataFiles, new TableOptions(
                 delayUnit == null ? null : Units.of(delayUnit.trim()), MissingValuePolicy.DROP)));
-        ModelParameters base = modelOptions.parameters(modelFile);
+        // with only a plan, the fit starts from the plan's own ladder (the one its predictions use)
+        ModelParameters base = modelFile == null && !modelOptions.given() && planFile != null
+                ? PlanFitBasis.of(PlanCodec.read(planFile)).base() : modelOptions.parameters(modelFile);
         Set<LadderParameter> freed = EnumSet.noneOf(LadderParameter.class);
         for (String f : free) {
             if (!f.isBlank()) {

@@ -76,6 +76,11 @@ final class ModelOptions {
         return modelFile != null && nMax != null ? p.toModel().withFixedNMax(nMax) : p.toModel();
     }
 
+    /** Whether the flags describe a model (a model file or the flags are then the model, not a plan's). */
+    boolean given() {
+        return tauRad != null || tauAuger2 != null;
+    }
+
     /** The model's parameters from {@code modelFile} or, when it is null, from the flags. */
     ModelParameters parameters(Path modelFile) {
         boolean anyModelFlag = tauRad != null || tauAuger2 != null;
@@ -86,7 +91,7 @@ final class ModelOptions {
             return ModelCodec.read(modelFile).parameters();
         }
         if (tauRad == null || tauAuger2 == null) {
-            throw new IllegalArgumentException("without a model file, --tau-rad and --tau-auger2 are required");
+            throw new IllegalArgumentException("without a model file (or a plan for fit), --tau-rad and --tau-auger2 are required");
         }
         Set<Charge> cs = EnumSet.noneOf(Charge.class);
         if (charges != null) {

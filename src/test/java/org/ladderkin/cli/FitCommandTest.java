@@ -85,6 +85,34 @@ class FitCommandTest {
         assertThat(Files.readString(out.resolve("fit-report.html"))).contains("Compared with the plan").contains("profile");
     }
 
+    @Test
+    void withOnlyAPlanTheFitStartsFromThePlansModelAndFindsTheDemoSeriesTau2(@TempDir Path dir) throws Exception {
+        Path plan = MainTest.HOME.resolve("experiments-plan/cdse-auger-1khz.plan.json");
+        MainTest.Run fit = MainTest.run("fit", MainTest.HOME.resolve("experiments-plan/fh-cdse-ta-series.csv").toString(),
+                "--traces-json", MainTest.HOME.resolve("experiments-plan/fh-cdse-ta-series.traces.json").toString(),
+                "--plan", plan.toString(), "--format", "json", "--quiet");
+        assertThat(fit.exit()).as(fit.err()).isZero();
+        JsonNode root = new ObjectMapper().readTree(fit.out());
+        org.ladderkin.plan.PlanFitBasis basis = org.ladderkin.plan.PlanFitBasis.of(org.ladderkin.io.PlanCodec.read(plan));
+        // held parameters are the plan's own values
+        assertThat(root.at("/parameters/tauRadNs/value").asDouble())
+                .isCloseTo(1e9 / basis.base().radiativeRatePerS(), org.assertj.core.data.Percentage.withPercentage(1e-6));
+        // the demo series was simulated with a known multiple of the plan's τ₂
+        JsonNode tau = root.at("/parameters/tauAuger2Ps");
+        double truth = org.ladderkin.gui.model.FitDemoSeries.TAU2_FACTOR * basis.model().tauBiexcitonS() * 1e12;
+        assertThat(Math.abs(tau.get("value").asDouble() - truth)).isLessThan(4 * tau.get("stdError").asDouble());
+        assertThat(root.at("/planComparison/tauAuger2PsPlanned").asDouble())
+                .isCloseTo(basis.model().tauBiexcitonS() * 1e12, org.assertj.core.data.Percentage.withPercentage(1e-6));
+    }
+
+    @Test
+    void withoutAModelAPlanOrFlagsTheFitSaysWhatIsMissing(@TempDir Path dir) throws Exception {
+        Path csv = simulatedSeries(dir, 3);
+        MainTest.Run r = MainTest.run("fit", csv.toString(), "--fluences", "1e13,3e13,1e14,3e14", "--quiet");
+        assertThat(r.exit()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("--tau-rad and --tau-auger2 are required").contains("plan");
+    }
+
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', value = {
         "non-numeric cell|delay (ps),a,b;1,0.1,0.2;2,zero,0.2;3,0.1,0.1;4,0.1,0.1|series.csv:3",

@@ -1,5 +1,6 @@
 package org.ladderkin.gui.model;
 
+import org.ladderkin.plan.PlanFitBasis;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;

@@ -1,5 +1,6 @@
 package org.ladderkin.gui.model;
 
+import org.ladderkin.plan.PlanFitBasis;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;

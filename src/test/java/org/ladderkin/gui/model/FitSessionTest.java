@@ -1,5 +1,6 @@
 package org.ladderkin.gui.model;
 
+import org.ladderkin.plan.PlanFitBasis;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.nio.file.Files;

@@ -1,4 +1,4 @@
-package org.ladderkin.gui.model;
+package org.ladderkin.plan;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
@@ -16,7 +16,8 @@ import org.ladderkin.plan.Planner;
 /** The fit starts from exactly the plan's ladder, period and excitation scales. */
 class PlanFitBasisTest {
 
-    static final PlanInputs DEMO = PlanCodec.read(FitSessionTest.DEMO);
+    static final PlanInputs DEMO = PlanCodec.read(java.nio.file.Path.of(System.getProperty("ladderkin.home", "."))
+            .resolve("experiments-plan/cdse-auger-1khz.plan.json"));
 
     @Test
     void theFitLadderHasThePlansRateLawsChargesAndDegeneracy() {

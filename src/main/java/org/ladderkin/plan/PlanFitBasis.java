@@ -1,4 +1,4 @@
-package org.ladderkin.gui.model;
+package org.ladderkin.plan;
 
 import java.util.EnumSet;
 import java.util.Objects;
@@ -7,11 +7,6 @@ import org.ladderkin.kinetics.ModelParameters;
 import org.ladderkin.kinetics.rate.AugerIonisation;
 import org.ladderkin.kinetics.rate.RadiativeDecay;
 import org.ladderkin.kinetics.state.Charge;
-import org.ladderkin.plan.CampaignPlan;
-import org.ladderkin.plan.FluencePoint;
-import org.ladderkin.plan.ModelAssumptions;
-import org.ladderkin.plan.PlanInputs;
-import org.ladderkin.plan.Planner;
 
 /**
  * What a fit of measured traces takes from the plan being edited: the plan's ladder as fit parameters, the pulse
