@@ -359,6 +359,67 @@ public final class ExactPropagator implements Propagator {
         return y;
     }
 
+    /**
+     * exp(B_c·t) along a sequence of times. Dense uniform grids (an instrument-response convolution evaluates the
+     * ladder every few femtoseconds) step by one m×m product with exp(B_c·h) instead of a Padé exponential per time;
+     * a fresh exponential every {@link #WALK_REFRESH} steps keeps the rounding drift below about 1e-13.
+     */
+    private static final class ClusterWalk {
+        /** Consecutive steps equal to within this relative amount reuse the step matrix. */
+        private static final double SAME_STEP = 1e-11;
+        private static final int WALK_REFRESH = 64;
+
+        private final Cluster cluster;
+        private double lastS = Double.NaN;
+        private double[][] last;
+        private double stepS = Double.NaN;
+        private double[][] step;
+        private int steps;
+
+        ClusterWalk(Cluster cluster) {
+            this.cluster = cluster;
+        }
+
+        /** exp(B_c·t) (caller must not modify it), or null when it underflows entirely. */
+        double[][] at(double tS) {
+            double d = tS - lastS;
+            double[][] e;
+            if (last != null && d > 0 && steps < WALK_REFRESH && Math.abs(d - stepS) <= SAME_STEP * stepS) {
+                if (step == null) {
+                    step = clusterExp(cluster, stepS);
+                }
+                e = step == null ? clusterExp(cluster, tS) : product(last, step);
+                steps++;
+            } else {
+                e = clusterExp(cluster, tS);
+                stepS = d > 0 ? d : Double.NaN;
+                step = null;
+                steps = 0;
+            }
+            lastS = tS;
+            last = e;
+            return e;
+        }
+
+        private static double[][] product(double[][] a, double[][] b) {
+            int m = a.length;
+            double[][] out = new double[m][m];
+            for (int i = 0; i < m; i++) {
+                double[] oi = out[i];
+                for (int k = 0; k < m; k++) {
+                    double aik = a[i][k];
+                    if (aik != 0) {
+                        double[] bk = b[k];
+                        for (int j = 0; j < m; j++) {
+                            oi[j] += aik * bk[j];
+                        }
+                    }
+                }
+            }
+            return out;
+        }
+    }
+
     /** exp(B_c·t), or null when it underflows entirely. */
     private static double[][] clusterExp(Cluster c, double tS) {
         double x = c.muPerS * tS;
@@ -426,6 +487,10 @@ public final class ExactPropagator implements Propagator {
             active = new int[nt];
             singleFactor = new double[nt][];
             clusterFactor = new double[nt][clusters.size()][][];
+            ClusterWalk[] walks = new ClusterWalk[clusters.size()];
+            for (int c = 0; c < walks.length; c++) {
+                walks[c] = cacheable(clusters.get(c), nt) ? new ClusterWalk(clusters.get(c)) : null;
+            }
             for (int j = 0; j < nt; j++) {
                 double t = timesS[j];
                 int a = 0;
@@ -440,7 +505,7 @@ public final class ExactPropagator implements Propagator {
                 singleFactor[j] = f;
                 for (int c = 0; c < clusters.size(); c++) {
                     // large blocks are recomputed per trace instead of cached, to bound memory
-                    clusterFactor[j][c] = cacheable(clusters.get(c), nt) ? clusterExp(clusters.get(c), t) : null;
+                    clusterFactor[j][c] = walks[c] == null ? null : walks[c].at(t);
                 }
             }
         }
@@ -491,6 +556,10 @@ public final class ExactPropagator implements Propagator {
             }
             double[][] out = new double[no][timesS.length];
             double[][][] scratch = new double[clusters.size()][][];
+            ClusterWalk[] walks = new ClusterWalk[clusters.size()];
+            for (int c = 0; c < walks.length; c++) {
+                walks[c] = cacheable(clusters.get(c), timesS.length) ? null : new ClusterWalk(clusters.get(c));
+            }
             for (int j = 0; j < timesS.length; j++) {
                 double[] f = singleFactor[j];
                 int a = active[j];
@@ -503,7 +572,7 @@ public final class ExactPropagator implements Propagator {
                     for (int c = 0; c < clusters.size(); c++) {
                         double[][] e = clusterFactor[j][c];
                         if (e == null && !cacheable(clusters.get(c), timesS.length)) {
-                            e = r == 0 ? clusterExp(clusters.get(c), timesS[j]) : scratch[c];
+                            e = r == 0 ? walks[c].at(timesS[j]) : scratch[c];
                             scratch[c] = e;
                         }
                         if (e == null) {

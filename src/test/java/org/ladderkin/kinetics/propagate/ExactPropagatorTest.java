@@ -7,6 +7,8 @@ import java.util.SplittableRandom;
 import org.hipparchus.linear.MatrixUtils;
 import org.hipparchus.linear.RealMatrix;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 import org.ladderkin.kinetics.rate.AugerIonisation;
 import org.ladderkin.kinetics.rate.AugerRecombination;
 import org.ladderkin.kinetics.rate.AugerScaling;
@@ -183,6 +185,54 @@ class ExactPropagatorTest {
             // half the dots start at N = 30, where the modal basis has ‖V‖·‖V⁻¹‖ ≈ 2e7: rounding ≈ 1e-16 × that
             assertThat(trace[j]).isCloseTo(direct, org.assertj.core.data.Offset.offset(1e-16 * p.growth()));
         }
+    }
+
+    /** Chain of n states where every excited state decays at the same rate: one coincidence cluster of n − 1. */
+    static double[][] equalRateChain(int n, double k) {
+        double[][] q = new double[n][n];
+        for (int i = 1; i < n; i++) {
+            q[i][i] = -k;
+            q[i - 1][i] = k;
+        }
+        return q;
+    }
+
+    @ParameterizedTest(name = "{0} states, {1} uniform times")
+    @CsvSource({"8, 400", "31, 3000"})
+    void uniformGridsThatStepTheClusterExponentialAgreeWithFreshExponentials(int n, int count) {
+        // the 31-state case is too large to cache per time, so it also covers the uncached path
+        double[][] q = equalRateChain(n, 2e11);
+        ExactPropagator p = ExactPropagator.of(q);
+        double h = 2.7e-15;
+        double[] times = new double[count + 3];
+        for (int i = 0; i < count; i++) {
+            times[i] = i * h;
+        }
+        // irregular times after the run must not reuse its step
+        times[count] = count * h + 1e-13;
+        times[count + 1] = 3e-11;
+        times[count + 2] = 3e-11 + h;
+        double[] p0 = new double[n];
+        p0[n - 1] = 0.7;
+        p0[n / 2] = 0.3;
+        double[][] obs = new double[2][n];
+        for (int i = 0; i < n; i++) {
+            obs[0][i] = Math.min(i, 2) / 2.0;
+            obs[1][i] = i;
+        }
+        double[][] traces = p.onGrid(times).observe(obs, p0);
+        double worst = 0;
+        for (int j = 0; j < times.length; j++) {
+            double[] pt = p.propagate(p0, times[j]);
+            for (int r = 0; r < 2; r++) {
+                double direct = 0;
+                for (int i = 0; i < n; i++) {
+                    direct += obs[r][i] * pt[i];
+                }
+                worst = Math.max(worst, Math.abs(traces[r][j] - direct) / Math.max(1, Math.abs(direct)));
+            }
+        }
+        assertThat(worst).isLessThan(1e-12);
     }
 
     static double[] unit(int n, int i) {
