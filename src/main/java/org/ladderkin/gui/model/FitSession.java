@@ -60,6 +60,7 @@ public final class FitSession implements AutoCloseable {
     private String loadProblem = "";
     private final Set<LadderParameter> free = EnumSet.of(LadderParameter.SCALE, LadderParameter.TAU_AUGER2);
     private boolean pulseTrain;
+    private boolean instrumentResponse;
     private PlanInputs plan;
     private volatile CachedBasis basisCache;
 
@@ -200,6 +201,46 @@ public final class FitSession implements AutoCloseable {
         return c == null ? Optional.empty() : Optional.of(c.basis().repetitionRateHz());
     }
 
+    /**
+     * Whether the model is convolved with the instrument response of the plan's transient-absorption instrument: its
+     * measured table when the plan gives an IRF file, else a Gaussian of its FWHM. The width is held, not fitted.
+     */
+    public synchronized boolean instrumentResponse() {
+        return instrumentResponse;
+    }
+
+    public synchronized void setInstrumentResponse(boolean on) {
+        if (on != instrumentResponse) {
+            instrumentResponse = on;
+            inputsChanged();
+        }
+    }
+
+    /** What the plan's TA instrument response is, for the option's label ("Gaussian, FWHM 200 fs"), if it has one. */
+    public synchronized Optional<String> planResponse() {
+        return plan == null ? Optional.empty() : taInstrument(plan).map(i -> i.measuredIrf() != null
+                ? "measured (" + i.measuredIrf().origin() + "), FWHM " + formatFs(i.irfFwhmS())
+                : "Gaussian, FWHM " + formatFs(i.irfFwhmS()));
+    }
+
+    private static String formatFs(double s) {
+        return org.ladderkin.units.Quantity.formatBest(s, org.ladderkin.units.Dimension.TIME, 3);
+    }
+
+    private static Optional<org.ladderkin.plan.Instrument> taInstrument(PlanInputs inputs) {
+        return inputs.instruments().stream()
+                .filter(i -> i.kind() == org.ladderkin.plan.Instrument.Kind.TRANSIENT_ABSORPTION).findFirst();
+    }
+
+    /** The fit set-up for the current choices; the response comes from {@code inputs} when asked for. */
+    private static LadderFitSetup setup(PlanFitBasis basis, PlanInputs inputs, boolean train, boolean response,
+                                        Set<LadderParameter> freed, double scaleStart) {
+        org.ladderkin.plan.Instrument ta = response ? taInstrument(inputs).orElse(null) : null;
+        double fwhm = ta == null || ta.measuredIrf() != null ? Double.NaN : ta.irfFwhmS();
+        return new LadderFitSetup(basis.base(), train ? basis.periodS() : Double.NaN, freed, scaleStart, 0, fwhm, false,
+                false, ta == null ? null : ta.measuredIrf());
+    }
+
     /** Whether fits run in the pulse-train steady state at the plan's chosen repetition rate (else one pulse). */
     public synchronized boolean pulseTrain() {
         return pulseTrain;
@@ -265,6 +306,7 @@ public final class FitSession implements AutoCloseable {
         PlanInputs inputs = plan;
         Set<LadderParameter> freed = free();
         boolean train = pulseTrain;
+        boolean response = instrumentResponse;
         if (previewGeneration >= 0) {
             previewWanted = true; // the fit replaces the preview job on the runner: redo it afterwards
             previewGeneration = -1;
@@ -276,8 +318,7 @@ public final class FitSession implements AutoCloseable {
         fitted = null;
         runner.submit(p -> {
             PlanFitBasis basis = basis(inputs);
-            LadderFitSetup setup = new LadderFitSetup(basis.base(), train ? basis.periodS() : Double.NaN, freed,
-                    planScale(kindOf(withExcitation), basis), 0, Double.NaN, false, false);
+            LadderFitSetup setup = setup(basis, inputs, train, response, freed, planScale(kindOf(withExcitation), basis));
             return new FitView(LadderFit.fit(withExcitation, setup, p), withExcitation, basis, freed);
         }, new FitRunner.Callback<FitView>() {
             @Override
@@ -486,11 +527,11 @@ public final class FitSession implements AutoCloseable {
         Dataset withExcitation = withExcitations();
         PlanInputs inputs = plan;
         boolean train = pulseTrain;
+        boolean response = instrumentResponse;
         previewProblem = "";
         previewGeneration = runner.submit(p -> {
             PlanFitBasis basis = basis(inputs);
-            LadderFitSetup setup = new LadderFitSetup(basis.base(), train ? basis.periodS() : Double.NaN, Set.of(),
-                    planScale(kindOf(withExcitation), basis), 0, Double.NaN, false, false);
+            LadderFitSetup setup = setup(basis, inputs, train, response, Set.of(), planScale(kindOf(withExcitation), basis));
             return new FitView(LadderFit.fit(withExcitation, setup, org.ladderkin.fit.FitProgress.NONE), withExcitation, basis, Set.of());
         }, new FitRunner.Callback<FitView>() {
             @Override

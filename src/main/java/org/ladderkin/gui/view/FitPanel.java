@@ -70,6 +70,7 @@ public final class FitPanel extends JPanel {
     private final JTable excitations = new JTable(excitationModel);
     private final Map<LadderParameter, JCheckBox> freeBoxes = new EnumMap<>(LadderParameter.class);
     private final JCheckBox pulseTrain = new JCheckBox("Pulse-train steady state at the plan's rate");
+    private final JCheckBox response = new JCheckBox("Instrument response of the plan's TA instrument");
     private final ChartView overlay;
     private final ChartView residuals;
     private final ParameterModel parameterModel = new ParameterModel();
@@ -132,6 +133,10 @@ public final class FitPanel extends JPanel {
         pulseTrain.setName("fit:pulse-train");
         pulseTrain.setToolTipText("Off: one pulse on fresh dots. On: the periodic steady state at the plan's chosen repetition rate.");
         pulseTrain.addActionListener(e -> session.setPulseTrain(pulseTrain.isSelected()));
+        response.setName("fit:instrument-response");
+        response.setToolTipText("Convolve the model with the plan's instrument response (Instruments ▸ IRF FWHM or IRF "
+                + "file); its width is held and its centre is time zero. Free time zero when the data start near zero.");
+        response.addActionListener(e -> session.setInstrumentResponse(response.isSelected()));
 
         parameters.setName("fit:parameters");
         parameters.setFillsViewportHeight(true);
@@ -145,13 +150,14 @@ public final class FitPanel extends JPanel {
         diagnostics.setWrapStyleWord(true);
 
         JPanel left = new JPanel(new MigLayout("insets 0, fill, wrap 1", "[grow, fill]",
-                // rows: excitations, free parameters, pulse mode, parameter table, diagnostics
-                "[]2[120:160, grow 30]8[]2[]4[]8[]2[110:140, grow 30]8[]2[80:120, grow 40]"));
+                // rows: excitations, free parameters, pulse mode, instrument response, parameter table, diagnostics
+                "[]2[120:160, grow 30]8[]2[]4[]0[]8[]2[110:140, grow 30]8[]2[80:120, grow 40]"));
         left.add(new JLabel("Excitation per trace: pulse energy, photon fluence or ⟨N⟩"));
         left.add(new JScrollPane(excitations), "grow");
         left.add(new JLabel("Free parameters (the rest are held at the plan's values)"));
         left.add(freePanel);
         left.add(pulseTrain);
+        left.add(response);
         left.add(new JLabel("Parameters"));
         left.add(new JScrollPane(parameters), "grow");
         left.add(new JLabel("Diagnostics"));
@@ -258,6 +264,11 @@ public final class FitPanel extends JPanel {
             e.getValue().setSelected(session.free().contains(e.getKey()));
         }
         pulseTrain.setSelected(session.pulseTrain());
+        response.setSelected(session.instrumentResponse());
+        Optional<String> planResponse = session.planResponse();
+        response.setEnabled(planResponse.isPresent() || session.instrumentResponse());
+        response.setText(planResponse.map(r -> "Instrument response of the plan's TA instrument: " + r)
+                .orElse("Instrument response (the plan has no TA instrument)"));
         session.planRepetitionRateHz().ifPresent(hz -> pulseTrain.setText("Pulse-train steady state at "
                 + Quantity.formatBest(hz, Dimension.FREQUENCY, 3) + " (the plan's rate)"));
         overlay.show(session.overlayChart());

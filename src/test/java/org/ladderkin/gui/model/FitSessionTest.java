@@ -262,6 +262,43 @@ class FitSessionTest {
         assertThat(Math.abs(tau.value() - truth)).as(tau.value() + " ± " + tau.stdError()).isLessThan(4 * tau.stdError());
     }
 
+    FieldSpec formField(String path) {
+        return editor.fields().stream().filter(f -> f.path().toString().equals(path)).findFirst().orElseThrow();
+    }
+
+    @Test
+    void thePlansGaussianResponseIsHeldAtItsFwhmWhenAsked() {
+        session.load(List.of(csv));
+        assertThat(session.planResponse()).hasValue("Gaussian, FWHM 200 fs");
+        session.setInstrumentResponse(true);
+        session.setFree(LadderParameter.TIME_ZERO, true);
+        session.run();
+        waitFor("the fit", () -> session.state() != FitSession.RunState.RUNNING);
+        assertThat(session.state()).as(session.message()).isEqualTo(FitSession.RunState.DONE);
+        ParameterEstimate irf = session.outcome().orElseThrow().result().estimate("irfFwhmS");
+        assertThat(irf.fixed()).isTrue();
+        assertThat(irf.value()).isEqualTo(plan.instruments().get(0).irfFwhmS());
+        assertThat(session.outcome().orElseThrow().result().estimate("timeZeroS").fixed()).isFalse();
+    }
+
+    @Test
+    void aMeasuredResponseInThePlanIsUsedAsMeasured() throws Exception {
+        Files.copy(HOME.resolve("experiments-plan/fh-ta-irf.csv"), dir.resolve("ta-irf.csv"));
+        editor.edit(formField("instruments[0].irfFwhm"), "");
+        editor.edit(formField("instruments[0].irfFile"), "ta-irf.csv");
+        assertThat(editor.check().valid()).as(String.valueOf(editor.check().problem())).isTrue();
+        session.setPlan(editor.lastValid().orElseThrow());
+        session.load(List.of(csv));
+        assertThat(session.planResponse()).hasValueSatisfying(r -> assertThat(r).startsWith("measured (").contains("ta-irf.csv"));
+        session.setInstrumentResponse(true);
+        session.run();
+        waitFor("the fit", () -> session.state() != FitSession.RunState.RUNNING);
+        assertThat(session.state()).as(session.message()).isEqualTo(FitSession.RunState.DONE);
+        assertThat(session.outcome().orElseThrow().measuredIrf()).isNotNull();
+        assertThat(session.outcome().orElseThrow().measuredIrf().fwhmS())
+                .isEqualTo(editor.lastValid().orElseThrow().instruments().get(0).irfFwhmS());
+    }
+
     @Test
     void withQuantumYieldOneTauRadIsTheSingleExcitonLifetimeAndIsWritten() {
         editor.edit(PushBack.field("model.plQuantumYield"), "1");

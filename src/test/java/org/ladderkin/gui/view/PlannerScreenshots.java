@@ -49,6 +49,17 @@ class PlannerScreenshots {
             window = w;
             window.show(new Dimension(1360, 860));
             PlannerWindowTest.waitFor("first prediction", () -> frame.deliveredCount() >= 1);
+            // as the planner does after start-up: warm the compiler, so the status bar shows an edit's usual timing
+            PlannerPrediction warm = new PlannerPrediction();
+            for (int i = 0; i < 8; i++) {
+                warm.predict(GuiActionRunner.execute(() -> frame.editor().lastValid().orElseThrow()));
+            }
+            window.tabbedPane("forms").selectTab("Laser & geometry");
+            window.textBox("laser.pulseEnergyRange[1]").deleteText().enterText("1.5 uJ");
+            PlannerWindowTest.waitFor("the edit's prediction", () -> frame.deliveredCount() >= 2);
+            long delivered = GuiActionRunner.execute(() -> frame.deliveredCount());
+            GuiActionRunner.execute(() -> frame.editor().undo());
+            PlannerWindowTest.waitFor("the undo's prediction", () -> frame.deliveredCount() > delivered);
             String suffix = theme.name().toLowerCase(java.util.Locale.ROOT);
 
             window.tabbedPane("forms").selectTab("Laser & geometry");
