@@ -79,32 +79,46 @@ public final class FitReport {
     static List<ChartSpec> charts(Dataset data, LadderFit.Outcome outcome) {
         List<ChartSpec.Series> fits = new ArrayList<>();
         List<ChartSpec.Series> res = new ArrayList<>();
-        double t0 = outcome.result().find("timeZeroS", -1).map(ParameterEstimate::value).orElse(0.0);
         for (int i = 0; i < data.size(); i++) {
             Trace t = data.traces().get(i);
-            double[] d = t.delaysS();
-            double[] y = t.signal();
-            double[] c = outcome.curves().get(i);
-            double[] rr = outcome.result().residuals().get(i);
-            List<double[]> kept = new ArrayList<>();
-            int used = 0; // residuals are listed for the points used, missing ones skipped
-            for (int m = 0; m < d.length; m++) {
-                if (Double.isNaN(y[m])) {
-                    continue;
-                }
-                if (d[m] - t0 > 0) {
-                    kept.add(new double[] {(d[m] - t0) * 1e12, y[m], c[m], rr[used]});
-                }
-                used++;
-            }
-            double[] x = kept.stream().mapToDouble(v -> v[0]).toArray();
+            List<double[]> kept = plotted(t, outcome, i);
+            double[] x = column(kept, 0);
             String name = t.label() + String.format(Locale.ROOT, " (⟨N⟩ %.2g)", outcome.meanN()[i]);
-            fits.add(new ChartSpec.Series(name, x, kept.stream().mapToDouble(v -> v[1]).toArray(), true));
-            fits.add(ChartSpec.Series.line(name + " fit", x, kept.stream().mapToDouble(v -> v[2]).toArray()));
-            res.add(ChartSpec.Series.line(name, x, kept.stream().mapToDouble(v -> v[3]).toArray()));
+            fits.add(new ChartSpec.Series(name, x, column(kept, 1), true));
+            fits.add(ChartSpec.Series.line(name + " fit", x, column(kept, 2)));
+            res.add(ChartSpec.Series.line(name, x, column(kept, 3)));
         }
         return List.of(new ChartSpec("Data and fit", "delay after time zero (ps)", "signal (file units)", true, false, fits),
                 new ChartSpec("Residuals (data − fit)", "delay after time zero (ps)", "residual (file units)", true, false, res));
+    }
+
+    /**
+     * What a fit chart draws for trace {@code i}: rows {delay after time zero (ps), data, curve, residual} for the
+     * present points after time zero (a log axis shows no others). Without an outcome, curve and residual are NaN.
+     */
+    public static List<double[]> plotted(Trace t, LadderFit.Outcome outcome, int i) {
+        double t0 = outcome == null ? 0 : outcome.result().find("timeZeroS", -1).map(ParameterEstimate::value).orElse(0.0);
+        double[] d = t.delaysS();
+        double[] y = t.signal();
+        double[] c = outcome == null ? null : outcome.curves().get(i);
+        double[] rr = outcome == null ? null : outcome.result().residuals().get(i);
+        List<double[]> kept = new ArrayList<>();
+        int used = 0; // residuals are listed for the points used, missing ones skipped
+        for (int m = 0; m < d.length; m++) {
+            if (Double.isNaN(y[m])) {
+                continue;
+            }
+            if (d[m] - t0 > 0) {
+                kept.add(new double[] {(d[m] - t0) * 1e12, y[m], c == null ? Double.NaN : c[m], rr == null ? Double.NaN : rr[used]});
+            }
+            used++;
+        }
+        return kept;
+    }
+
+    /** Column {@code c} of {@link #plotted} rows. */
+    public static double[] column(List<double[]> rows, int c) {
+        return rows.stream().mapToDouble(v -> v[c]).toArray();
     }
 
     private static String num(double v) {

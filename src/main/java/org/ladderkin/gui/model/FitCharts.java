@@ -9,6 +9,7 @@ import org.ladderkin.fit.LadderFit;
 import org.ladderkin.fit.ParameterEstimate;
 import org.ladderkin.fit.Trace;
 import org.ladderkin.report.ChartSpec;
+import org.ladderkin.report.FitReport;
 
 /**
  * What the fit view draws, as plain data: the traces as points over model curves and the residuals on a log delay
@@ -53,15 +54,14 @@ public final class FitCharts {
         List<ChartSpec.Series> series = new ArrayList<>();
         String title = outcome == null ? "Measured traces" : fitted ? "Measured traces and the fit" : "Measured traces over the plan's model";
         if (data != null) {
-            double t0 = timeZero(outcome);
-            for (int i = 0; i < data.size(); i++) {
+                        for (int i = 0; i < data.size(); i++) {
                 Trace t = data.traces().get(i);
-                List<double[]> kept = kept(t, outcome, i, t0);
-                double[] x = column(kept, 0);
+                List<double[]> kept = FitReport.plotted(t, outcome, i);
+                double[] x = FitReport.column(kept, 0);
                 String name = name(t, outcome, i);
-                series.add(new ChartSpec.Series(name, x, column(kept, 1), true));
+                series.add(new ChartSpec.Series(name, x, FitReport.column(kept, 1), true));
                 if (outcome != null) {
-                    series.add(ChartSpec.Series.line(name + (fitted ? " fit" : " plan"), x, column(kept, 2)));
+                    series.add(ChartSpec.Series.line(name + (fitted ? " fit" : " plan"), x, FitReport.column(kept, 2)));
                 }
             }
         }
@@ -72,11 +72,10 @@ public final class FitCharts {
     static ChartSpec residuals(Dataset data, LadderFit.Outcome outcome, boolean fitted) {
         List<ChartSpec.Series> series = new ArrayList<>();
         if (data != null && outcome != null) {
-            double t0 = timeZero(outcome);
-            for (int i = 0; i < data.size(); i++) {
+                        for (int i = 0; i < data.size(); i++) {
                 Trace t = data.traces().get(i);
-                List<double[]> kept = kept(t, outcome, i, t0);
-                series.add(ChartSpec.Series.line(name(t, outcome, i), column(kept, 0), column(kept, 3)));
+                List<double[]> kept = FitReport.plotted(t, outcome, i);
+                series.add(ChartSpec.Series.line(name(t, outcome, i), FitReport.column(kept, 0), FitReport.column(kept, 3)));
             }
         }
         return new ChartSpec(fitted ? "Residuals (data − fit)" : "Residuals (data − plan's model)",
@@ -115,34 +114,6 @@ public final class FitCharts {
             lines.add("warning: " + w);
         }
         return List.copyOf(lines);
-    }
-
-    private static double timeZero(LadderFit.Outcome outcome) {
-        return outcome == null ? 0 : outcome.result().find("timeZeroS", -1).map(ParameterEstimate::value).orElse(0.0);
-    }
-
-    /** Rows {x (ps), y, curve, residual} of the present points after time zero. */
-    private static List<double[]> kept(Trace t, LadderFit.Outcome outcome, int i, double t0) {
-        double[] d = t.delaysS();
-        double[] y = t.signal();
-        double[] c = outcome == null ? null : outcome.curves().get(i);
-        double[] rr = outcome == null ? null : outcome.result().residuals().get(i);
-        List<double[]> kept = new ArrayList<>();
-        int used = 0; // residuals are listed for the points used, missing ones skipped
-        for (int m = 0; m < d.length; m++) {
-            if (Double.isNaN(y[m])) {
-                continue;
-            }
-            if (d[m] - t0 > 0) {
-                kept.add(new double[] {(d[m] - t0) * 1e12, y[m], c == null ? Double.NaN : c[m], rr == null ? Double.NaN : rr[used]});
-            }
-            used++;
-        }
-        return kept;
-    }
-
-    private static double[] column(List<double[]> rows, int c) {
-        return rows.stream().mapToDouble(v -> v[c]).toArray();
     }
 
     private static String name(Trace t, LadderFit.Outcome outcome, int i) {

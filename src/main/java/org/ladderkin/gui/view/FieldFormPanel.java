@@ -6,8 +6,6 @@ import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
-import java.awt.datatransfer.DataFlavor;
-import java.awt.datatransfer.UnsupportedFlavorException;
 import javax.swing.JButton;
 import javax.swing.JCheckBox;
 import javax.swing.JFileChooser;
@@ -213,7 +211,7 @@ final class FieldFormPanel extends JPanel {
             browse.setName(field.path() + ":choose");
             browse.setToolTipText("choose a file, or drop one on the field");
             browse.addActionListener(e -> choose());
-            TransferHandler drop = new FileDropHandler(this::accept);
+            TransferHandler drop = new FileOrTextDropHandler(this::accept);
             text.component().setTransferHandler(drop);
             browse.setTransferHandler(drop);
             panel.setOpaque(false);
@@ -261,40 +259,31 @@ final class FieldFormPanel extends JPanel {
         }
     }
 
-    /** Accepts one dropped file and hands it on; text drops still reach the field's own editing. */
-    private static final class FileDropHandler extends TransferHandler {
-        private final java.util.function.Consumer<java.nio.file.Path> target;
+    /** One dropped file goes to the field's chooser logic; text still pastes, copies and drags as in any field. */
+    private static final class FileOrTextDropHandler extends FileDropHandler {
         private final TransferHandler textHandler = new JTextField().getTransferHandler();
 
-        FileDropHandler(java.util.function.Consumer<java.nio.file.Path> target) {
-            this.target = target;
+        FileOrTextDropHandler(java.util.function.Consumer<java.nio.file.Path> target) {
+            super(files -> {
+                if (files.size() != 1) {
+                    return false;
+                }
+                target.accept(files.get(0));
+                return true;
+            });
         }
 
         @Override
         public boolean canImport(TransferSupport support) {
-            if (support.isDataFlavorSupported(DataFlavor.javaFileListFlavor)) {
-                return true;
-            }
-            return support.getComponent() instanceof JTextField && textHandler.canImport(support);
+            return super.canImport(support) || support.getComponent() instanceof JTextField && textHandler.canImport(support);
         }
 
         @Override
         public boolean importData(TransferSupport support) {
-            if (!support.isDataFlavorSupported(DataFlavor.javaFileListFlavor)) {
-                return support.getComponent() instanceof JTextField && textHandler.importData(support);
+            if (super.canImport(support)) {
+                return super.importData(support);
             }
-            try {
-                @SuppressWarnings("unchecked")
-                List<java.io.File> files = (List<java.io.File>) support.getTransferable()
-                        .getTransferData(DataFlavor.javaFileListFlavor);
-                if (files.size() != 1) {
-                    return false;
-                }
-                target.accept(files.get(0).toPath());
-                return true;
-            } catch (UnsupportedFlavorException | java.io.IOException e) {
-                return false;
-            }
+            return support.getComponent() instanceof JTextField && textHandler.importData(support);
         }
 
         @Override
@@ -304,7 +293,6 @@ final class FieldFormPanel extends JPanel {
 
         @Override
         public void exportToClipboard(JComponent c, java.awt.datatransfer.Clipboard clip, int action) {
-            // copy and cut in the field behave as in any text field
             textHandler.exportToClipboard(c, clip, action);
         }
 

@@ -2,7 +2,6 @@ package org.ladderkin.gui.view;
 
 import java.awt.Color;
 import java.awt.Component;
-import java.awt.datatransfer.DataFlavor;
 import java.io.File;
 import java.io.IOException;
 import java.nio.file.Path;
@@ -25,7 +24,6 @@ import javax.swing.JSplitPane;
 import javax.swing.JTable;
 import javax.swing.JTextArea;
 import javax.swing.JTextField;
-import javax.swing.TransferHandler;
 import javax.swing.UIManager;
 import javax.swing.event.DocumentEvent;
 import javax.swing.event.DocumentListener;
@@ -172,7 +170,10 @@ public final class FitPanel extends JPanel {
         add(toolbar, "growx, wrap");
         add(status, "wmin 0, growx, wrap");
         add(body, "grow");
-        setTransferHandler(new TraceDropHandler());
+        setTransferHandler(new FileDropHandler(files -> {
+            loadFiles(files);
+            return session.loadProblem().isEmpty();
+        }));
         session.addListener(this::sessionChanged);
         sessionChanged();
     }
@@ -436,26 +437,6 @@ public final class FitPanel extends JPanel {
                 case 2 -> row.error();
                 default -> row.free() ? "free" : "held";
             };
-        }
-    }
-
-    /** Loads trace tables dropped on the panel. */
-    private final class TraceDropHandler extends TransferHandler {
-        @Override
-        public boolean canImport(TransferSupport support) {
-            return support.isDataFlavorSupported(DataFlavor.javaFileListFlavor);
-        }
-
-        @Override
-        public boolean importData(TransferSupport support) {
-            try {
-                @SuppressWarnings("unchecked")
-                List<File> files = (List<File>) support.getTransferable().getTransferData(DataFlavor.javaFileListFlavor);
-                loadFiles(files.stream().map(File::toPath).toList());
-                return session.loadProblem().isEmpty();
-            } catch (java.awt.datatransfer.UnsupportedFlavorException | IOException e) {
-                return false;
-            }
         }
     }
 }

@@ -3,7 +3,6 @@ package org.ladderkin.gui.view;
 import java.awt.BorderLayout;
 import java.awt.Rectangle;
 import java.awt.Toolkit;
-import java.awt.datatransfer.DataFlavor;
 import java.awt.event.ActionEvent;
 import java.awt.event.InputEvent;
 import java.awt.event.KeyEvent;
@@ -39,7 +38,6 @@ import javax.swing.JTabbedPane;
 import javax.swing.KeyStroke;
 import javax.swing.SwingUtilities;
 import javax.swing.Timer;
-import javax.swing.TransferHandler;
 import javax.swing.filechooser.FileNameExtensionFilter;
 import net.miginfocom.swing.MigLayout;
 import org.ladderkin.gui.app.GuiPrefs;
@@ -162,7 +160,8 @@ public final class PlannerFrame extends JFrame {
         content.add(statusBar(), BorderLayout.SOUTH);
         setContentPane(content);
         setJMenuBar(menus());
-        setTransferHandler(new PlanDropHandler());
+        // a plan file dropped on the window opens (after the unsaved-changes question)
+        setTransferHandler(new FileDropHandler(files -> files.size() == 1 && mayLeave() && openFile(files.get(0))));
 
         editor.addListener(this::planChanged);
         setDefaultCloseOperation(DO_NOTHING_ON_CLOSE);
@@ -662,27 +661,5 @@ public final class PlannerFrame extends JFrame {
     private static String slug(String title) {
         String s = title.toLowerCase(java.util.Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("(^-|-$)", "");
         return s.length() > 48 ? s.substring(0, 48) : s;
-    }
-
-    /** Opens a plan file dropped on the window. */
-    private final class PlanDropHandler extends TransferHandler {
-        @Override
-        public boolean canImport(TransferSupport support) {
-            return support.isDataFlavorSupported(DataFlavor.javaFileListFlavor);
-        }
-
-        @Override
-        public boolean importData(TransferSupport support) {
-            try {
-                @SuppressWarnings("unchecked")
-                List<File> files = (List<File>) support.getTransferable().getTransferData(DataFlavor.javaFileListFlavor);
-                if (files.size() != 1 || !mayLeave()) {
-                    return false;
-                }
-                return openFile(files.get(0).toPath());
-            } catch (java.awt.datatransfer.UnsupportedFlavorException | IOException e) {
-                return false;
-            }
-        }
     }
 }
