@@ -34,6 +34,8 @@ public final class Planner {
     public static final double DATA_SHARE_OF_BEAM_TIME = 0.5;
     /** Above this ⟨N⟩ the ladder, Poisson statistics and the Auger scaling laws are extrapolations. */
     public static final double MODEL_VALIDITY_N = 10;
+    /** Sample temperature before the pump (K), a laboratory at about 22 °C: common practice, no source. */
+    public static final double SAMPLE_TEMPERATURE_K = 295;
     /** Assumed PL collection × detection efficiency for the TCSPC pile-up estimate (common practice, no source). */
     public static final double TCSPC_COLLECTION_EFFICIENCY = 1e-4;
 
@@ -127,7 +129,7 @@ public final class Planner {
             delayPlans.add(delayPlan(inst, model, design, nSeries.length, km, nSeries[nSeries.length - 1], period, top, in));
         }
         List<Risk> risks = new ArrayList<>();
-        risks.add(Heating.risk("steady-state heating", heat.steadyRiseK(), 295, in.limits().maxTemperatureRiseK(),
+        risks.add(Heating.risk("steady-state heating", heat.steadyRiseK(), SAMPLE_TEMPERATURE_K, in.limits().maxTemperatureRiseK(),
                 heat.boilingPointK()));
         risks.add(PulseTrainRisks.chargingRisk(chosenRate.charged(), in.limits().maxChargedFraction()));
         risks.add(PulseTrainRisks.residualRisk(chosenRate.residual(), in.limits().maxResidualExcitation()));
@@ -173,8 +175,12 @@ public final class Planner {
         }
         List<String> advisories = atChosenRate.advisories().stream().map(Advisory::message).distinct().toList();
         String matrixKey = sample.spec().matrix().map(m -> m.key()).orElse("unknown matrix");
+        double peakFluence = 0;
+        for (FluencePoint f : fluences) {
+            peakFluence = Math.max(peakFluence, f.photonFluencePeakPerM2() * chosen.photonEnergyJ());
+        }
         List<String> cautions = Cautions.forCampaign(sample.material().key(), matrixKey, heat.steadyRiseK(),
-                heat.boilingPointK());
+                SAMPLE_TEMPERATURE_K, heat.boilingPointK(), peakFluence);
         progress.step(6, totalSteps, "done");
         return new CampaignPlan(in, model, wavelengths, rates, chosenRate, fluences, heat, design, delayPlans, cm, predictions,
                 risks, advisories, cautions);

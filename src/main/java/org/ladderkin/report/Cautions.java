@@ -47,10 +47,49 @@ public final class Cautions {
                 + "your institution's fire-safety rules.", matrix, boilingPointK - 273.15, riseK);
     }
 
-    /** Every caution that applies to a campaign. */
-    public static List<String> forCampaign(String material, String matrix, double steadyRiseK, double boilingPointK) {
+    /** Peak fluence of one pulse from which the high-fluence caution shows (J/m², = 1 mJ/cm²): common practice, no source. */
+    public static final double HIGH_FLUENCE_J_PER_M2 = 10;
+    /** Steady-state temperature rise from which the hot-sample caution shows (K): common practice, no source. */
+    public static final double HOT_RISE_K = 10;
+    /** Margin to the boiling point within which the hot-sample caution shows whatever the rise (K): common practice, no source. */
+    public static final double BOILING_MARGIN_K = 20;
+
+    /** Caution for a strong pump: the highest pulse's peak fluence at the sample. */
+    public static String highFluence(double peakFluenceJPerM2) {
+        return String.format(Locale.ROOT, "High pump fluence: the strongest pulse of the series reaches %.2g mJ/cm² at the "
+                + "beam centre. At such fluences films and cell windows can be damaged, and reflections from the cell carry "
+                + "a hazardous share of the beam. Block and dump every reflection, check the sample for damage between "
+                + "series, and follow the advice of your institution's laser safety officer.", peakFluenceJPerM2 * 0.1);
+    }
+
+    /** Caution for a sample the pump heats strongly or close to its solvent's boiling point. */
+    public static String hotSample(double riseK, double sampleK, double boilingPointK) {
+        String boiling = Double.isFinite(boilingPointK)
+                ? String.format(Locale.ROOT, "; the solvent boils at %.0f °C", boilingPointK - 273.15) : "";
+        return String.format(Locale.ROOT, "Hot sample: the pump is predicted to raise the excited volume by %.2g K in the "
+                + "steady state, to about %.0f °C%s. Hot samples degrade, outgas and can boil in the beam, and hot cells "
+                + "burn. Lower the average power (rate, pulse picker, larger spot) or flow the sample, and follow your "
+                + "institution's safety rules.", riseK, sampleK + riseK - 273.15, boiling);
+    }
+
+    /**
+     * Every caution that applies to a campaign.
+     *
+     * @param steadyRiseK       predicted steady-state rise of the excited volume (K; NaN when unknown)
+     * @param sampleK           sample temperature before the pump (K)
+     * @param boilingPointK     the solvent's boiling point (K; infinite for films or when unknown)
+     * @param peakFluenceJPerM2 peak fluence of the strongest pulse of the series (J/m²)
+     */
+    public static List<String> forCampaign(String material, String matrix, double steadyRiseK, double sampleK,
+                                           double boilingPointK, double peakFluenceJPerM2) {
         List<String> out = new ArrayList<>();
         out.add(LASER);
+        if (peakFluenceJPerM2 >= HIGH_FLUENCE_J_PER_M2) {
+            out.add(highFluence(peakFluenceJPerM2));
+        }
+        if (steadyRiseK >= HOT_RISE_K || sampleK + steadyRiseK >= boilingPointK - BOILING_MARGIN_K) {
+            out.add(hotSample(steadyRiseK, sampleK, boilingPointK));
+        }
         if (flammable(matrix)) {
             out.add(solventHeating(matrix, steadyRiseK, boilingPointK));
         }
