@@ -45,26 +45,38 @@ public final class TraceArguments {
         for (int i = 0; i < excitations.size(); i++) {
             String field = "[" + (i + 1) + "]";
             Quantity q = parse(excitations.get(i), option, field);
-            if (!(q.si() > 0)) {
-                throw new InputException(SourceLocation.of(option), field, "must be > 0, was " + q.format());
+            Excitation e;
+            try {
+                e = excitation(q, pumpJ).orElseThrow(() -> new InputException(SourceLocation.of(option), field,
+                        "an energy fluence needs the pump photon energy to count photons (add --pump 400nm)"));
+            } catch (IllegalArgumentException bad) {
+                throw new InputException(SourceLocation.of(option), field, bad.getMessage());
             }
-            Excitation e = switch (q.dimension()) {
-                case ENERGY -> new Excitation(Excitation.Kind.PULSE_ENERGY_J, q.si());
-                case PHOTON_FLUENCE -> new Excitation(Excitation.Kind.PHOTON_FLUENCE_PER_M2, q.si());
-                case DIMENSIONLESS -> new Excitation(Excitation.Kind.MEAN_OCCUPANCY, q.si());
-                case ENERGY_FLUENCE -> {
-                    if (pumpJ.isEmpty()) {
-                        throw new InputException(SourceLocation.of(option), field,
-                                "an energy fluence needs the pump photon energy to count photons (add --pump 400nm)");
-                    }
-                    yield new Excitation(Excitation.Kind.PHOTON_FLUENCE_PER_M2, q.si() / pumpJ.getAsDouble());
-                }
-                default -> throw new InputException(SourceLocation.of(option), field, "'" + excitations.get(i)
-                        + "' is " + q.dimension().label() + " (give a pulse energy, a photon or energy fluence, or ⟨N⟩ as a bare number)");
-            };
             out.add(data.traces().get(i).metadata().with(Optional.of(e), pumpJ));
         }
         return data.withMetadata(out);
+    }
+
+    /**
+     * The excitation a quantity states: a pulse energy, a photon fluence, an energy fluence (counted in photons with
+     * {@code pumpJ}) or a bare number for ⟨N⟩. Empty for an energy fluence when no pump photon energy is known, so the
+     * caller can say where to give one.
+     *
+     * @throws IllegalArgumentException for a value that is not > 0 or a quantity of another kind
+     */
+    public static Optional<Excitation> excitation(Quantity q, OptionalDouble pumpJ) {
+        if (!(q.si() > 0) || !Double.isFinite(q.si())) {
+            throw new IllegalArgumentException("must be > 0, was " + q.format());
+        }
+        return switch (q.dimension()) {
+            case ENERGY -> Optional.of(new Excitation(Excitation.Kind.PULSE_ENERGY_J, q.si()));
+            case PHOTON_FLUENCE -> Optional.of(new Excitation(Excitation.Kind.PHOTON_FLUENCE_PER_M2, q.si()));
+            case DIMENSIONLESS -> Optional.of(new Excitation(Excitation.Kind.MEAN_OCCUPANCY, q.si()));
+            case ENERGY_FLUENCE -> pumpJ.isEmpty() ? Optional.empty()
+                    : Optional.of(new Excitation(Excitation.Kind.PHOTON_FLUENCE_PER_M2, q.si() / pumpJ.getAsDouble()));
+            default -> throw new IllegalArgumentException("'" + q.format() + "' is " + q.dimension().label()
+                    + " (give a pulse energy, a photon or energy fluence, or ⟨N⟩ as a bare number)");
+        };
     }
 
     private static Quantity parse(String text, String option, String field) {

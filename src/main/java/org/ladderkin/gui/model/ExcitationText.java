@@ -3,6 +3,7 @@ package org.ladderkin.gui.model;
 import java.util.Locale;
 import java.util.OptionalDouble;
 import org.ladderkin.fit.Excitation;
+import org.ladderkin.io.TraceArguments;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Quantity;
 import org.ladderkin.units.QuantityFormatException;
@@ -39,20 +40,13 @@ final class ExcitationText {
         } catch (QuantityFormatException e) {
             return new Reading(null, e.getMessage());
         }
-        if (!(q.si() > 0) || !Double.isFinite(q.si())) {
-            return new Reading(null, "must be > 0, was " + q.format());
+        try {
+            return TraceArguments.excitation(q, photonEnergyJ).map(e -> new Reading(e, null)).orElseGet(() -> new Reading(null,
+                    "an energy fluence needs the pump photon energy, which this trace's file does not give (write the "
+                            + "photon fluence, e.g. 1e13 photons/cm², or add \"pump\" to a .traces.json sidecar)"));
+        } catch (IllegalArgumentException e) {
+            return new Reading(null, e.getMessage());
         }
-        return switch (q.dimension()) {
-            case ENERGY -> new Reading(new Excitation(Excitation.Kind.PULSE_ENERGY_J, q.si()), null);
-            case PHOTON_FLUENCE -> new Reading(new Excitation(Excitation.Kind.PHOTON_FLUENCE_PER_M2, q.si()), null);
-            case DIMENSIONLESS -> new Reading(new Excitation(Excitation.Kind.MEAN_OCCUPANCY, q.si()), null);
-            case ENERGY_FLUENCE -> photonEnergyJ.isPresent()
-                    ? new Reading(new Excitation(Excitation.Kind.PHOTON_FLUENCE_PER_M2, q.si() / photonEnergyJ.getAsDouble()), null)
-                    : new Reading(null, "an energy fluence needs the pump photon energy, which this trace's file does not give "
-                    + "(write the photon fluence, e.g. 1e13 photons/cm², or add \"pump\" to a .traces.json sidecar)");
-            default -> new Reading(null, "'" + t + "' is " + q.dimension().label()
-                    + " (give a pulse energy, a photon or energy fluence, or ⟨N⟩ as a bare number)");
-        };
     }
 
     /** The text that shows {@code e} in trade units, reading back to the same kind. */
