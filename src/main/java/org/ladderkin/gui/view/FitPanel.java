@@ -68,7 +68,7 @@ public final class FitPanel extends JPanel {
     private final JTable excitations = new JTable(excitationModel);
     private final Map<LadderParameter, JCheckBox> freeBoxes = new EnumMap<>(LadderParameter.class);
     private final JCheckBox pulseTrain = new JCheckBox("Pulse-train steady state at the plan's rate");
-    private final JCheckBox response = new JCheckBox("Instrument response of the plan's TA instrument");
+    private final JCheckBox response = new JCheckBox("Plan's instrument response");
     private final ChartView overlay;
     private final ChartView residuals;
     private final ParameterModel parameterModel = new ParameterModel();
@@ -165,7 +165,7 @@ public final class FitPanel extends JPanel {
         charts.setResizeWeight(0.68);
         JSplitPane body = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, charts);
         body.setResizeWeight(0);
-        body.setDividerLocation(460);
+        body.setDividerLocation(520);
 
         add(toolbar, "growx, wrap");
         add(status, "wmin 0, growx, wrap");
@@ -268,7 +268,7 @@ public final class FitPanel extends JPanel {
         response.setSelected(session.instrumentResponse());
         Optional<String> planResponse = session.planResponse();
         response.setEnabled(planResponse.isPresent() || session.instrumentResponse());
-        response.setText(planResponse.map(r -> "Instrument response of the plan's TA instrument: " + r)
+        response.setText(planResponse.map(r -> "Plan's instrument response: " + r)
                 .orElse("Instrument response (the plan has no TA instrument)"));
         session.planRepetitionRateHz().ifPresent(hz -> pulseTrain.setText("Pulse-train steady state at "
                 + Quantity.formatBest(hz, Dimension.FREQUENCY, 3) + " (the plan's rate)"));
