@@ -20,12 +20,22 @@ import org.ladderkin.units.Quantity;
  */
 public final class PlannerPrediction implements PredictionSource {
 
+    /**
+     * Ends a prediction between the planner's steps once a newer edit has interrupted its thread, so an outdated
+     * computation does not hold up the one the user is waiting for.
+     */
+    static final Planner.Progress STOP_WHEN_INTERRUPTED = (done, total, what) -> {
+        if (Thread.currentThread().isInterrupted()) {
+            throw new java.util.concurrent.CancellationException("a newer edit replaced this prediction (at: " + what + ")");
+        }
+    };
+
     /** Label of the derived number that echoes the highest pulse energy the prediction was computed for. */
     public static final String HIGHEST_ENERGY = "highest pulse energy";
 
     @Override
     public Prediction predict(PlanInputs plan) {
-        CampaignPlan p = Planner.plan(plan, Planner.Progress.NONE, false);
+        CampaignPlan p = Planner.plan(plan, STOP_WHEN_INTERRUPTED, false);
         return new Prediction(PlanReport.charts(p), p.risks(), derived(p), p.cautions(),
                 "multiexciton ladder, periodic steady state at " + Quantity.formatBest(p.chosenRate().repetitionRateHz(),
                         Dimension.FREQUENCY, 3) + "; log-spaced series (the report adds the optimal design)");

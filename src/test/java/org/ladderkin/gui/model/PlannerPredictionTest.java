@@ -39,4 +39,16 @@ class PlannerPredictionTest {
         assertThat(p.charts()).extracting(c -> c.title()).contains("Band-edge bleach (steady state)",
                 "Photoluminescence per dot", "Pulse-train build-up (highest fluence)");
     }
+
+    @Test
+    void aPredictionWhoseThreadIsInterruptedStopsAtThePlannersNextStep() {
+        Thread.currentThread().interrupt();
+        try {
+            org.assertj.core.api.Assertions.assertThatThrownBy(() -> new PlannerPrediction().predict(RecomputeServiceTest.DEMO))
+                    .isInstanceOf(java.util.concurrent.CancellationException.class)
+                    .hasMessageContaining("a newer edit replaced this prediction");
+        } finally {
+            Thread.interrupted();
+        }
+    }
 }
