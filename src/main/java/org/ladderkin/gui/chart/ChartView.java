@@ -44,6 +44,21 @@ public final class ChartView extends JPanel {
         return spec;
     }
 
+    /**
+     * Offers "Export as …" for this chart in every format on a right click; {@code export} gets what the chart shows
+     * at that moment and the chosen format.
+     */
+    public void offerExport(java.util.function.BiConsumer<ChartSpec, ChartExport.Format> export) {
+        javax.swing.JPopupMenu menu = new javax.swing.JPopupMenu();
+        for (ChartExport.Format f : ChartExport.Format.values()) {
+            javax.swing.JMenuItem item = new javax.swing.JMenuItem("Export as " + f.description() + "…");
+            item.setName("export-chart:" + f.name());
+            item.addActionListener(e -> export.accept(spec, f));
+            menu.add(item);
+        }
+        panel.setPopupMenu(menu);
+    }
+
     @Override
     public void updateUI() {
         super.updateUI();

@@ -11,8 +11,11 @@ import org.ladderkin.report.ChartSpec;
 final class ChartsPanel extends JTabbedPane {
 
     private final List<ChartView> views = new ArrayList<>();
+    private final java.util.function.BiConsumer<ChartSpec, org.ladderkin.gui.chart.ChartExport.Format> export;
 
-    ChartsPanel() {
+    /** @param export writes a chart in a format (offered on each chart's right-click menu) */
+    ChartsPanel(java.util.function.BiConsumer<ChartSpec, org.ladderkin.gui.chart.ChartExport.Format> export) {
+        this.export = export;
         setName("charts");
     }
 
@@ -33,6 +36,7 @@ final class ChartsPanel extends JTabbedPane {
         views.clear();
         for (ChartSpec spec : specs) {
             ChartView v = new ChartView(spec);
+            v.offerExport(export);
             views.add(v);
             addTab(shortTitle(spec.title()), null, v, spec.title());
         }

@@ -82,6 +82,12 @@ public final class FitPanel extends JPanel {
      * @param lastDirectory where the file chooser opens
      * @param directoryUsed told the folder of loaded files
      */
+    /** Offers the right-click export on the overlay and residual charts. */
+    void offerChartExport(java.util.function.BiConsumer<org.ladderkin.report.ChartSpec, org.ladderkin.gui.chart.ChartExport.Format> export) {
+        overlay.offerExport(export);
+        residuals.offerExport(export);
+    }
+
     public FitPanel(FitSession session, PlanEditor editor, Supplier<Optional<Path>> lastDirectory, Consumer<Path> directoryUsed) {
         super(new MigLayout("insets 6, fill", "[grow]", "[][][grow]"));
         this.session = session;

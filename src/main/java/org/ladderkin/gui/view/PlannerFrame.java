@@ -90,7 +90,7 @@ public final class PlannerFrame extends JFrame {
     private final FitSession fitSession = new FitSession(SwingUtilities::invokeLater);
     private final FitPanel fitPanel;
     private final JTabbedPane centreTabs = new JTabbedPane();
-    private final ChartsPanel charts = new ChartsPanel();
+    private final ChartsPanel charts = new ChartsPanel(this::exportChart);
     private final RiskTable risks = new RiskTable();
     private final DerivedPanel derived = new DerivedPanel();
     private final CautionBar cautions = new CautionBar();
@@ -129,6 +129,7 @@ public final class PlannerFrame extends JFrame {
         modelForm = new FieldFormPanel(editor, List.of(new FieldFormPanel.Section(
                 "Values that replace the ones derived from the material (blank: derived)", PlanForms.MODEL)));
         fitPanel = new FitPanel(fitSession, editor, prefs::lastDirectory, prefs::lastDirectory);
+        fitPanel.offerChartExport(this::exportChart);
 
         JTabbedPane forms = new JTabbedPane();
         forms.setName("forms");
@@ -380,20 +381,23 @@ public final class PlannerFrame extends JFrame {
         return Optional.of(target);
     }
 
+    /** File ▸ Export Chart: the selected prediction chart, or the measured-data chart when the fit tab is in front. */
     private void exportChart(ChartExport.Format format) {
-        Optional<ChartSpec> spec = charts.selected();
-        if (spec.isEmpty()) {
-            return;
-        }
+        Optional<ChartSpec> spec = centreTabs.getSelectedComponent() == fitPanel && fitSession.data().isPresent()
+                ? Optional.of(fitSession.overlayChart()) : charts.selected();
+        spec.ifPresent(s -> exportChart(s, format));
+    }
+
+    private void exportChart(ChartSpec spec, ChartExport.Format format) {
         JFileChooser chooser = new JFileChooser(prefs.lastDirectory().map(Path::toFile).orElse(null));
         chooser.setFileFilter(new FileNameExtensionFilter(format.description(), format.extension()));
-        chooser.setSelectedFile(new File(slug(spec.get().title()) + "." + format.extension()));
+        chooser.setSelectedFile(new File(slug(spec.title()) + "." + format.extension()));
         if (chooser.showSaveDialog(this) != JFileChooser.APPROVE_OPTION) {
             return;
         }
         Path target = format.withExtension(chooser.getSelectedFile().toPath());
         try {
-            ChartExport.write(spec.get(), format, target);
+            ChartExport.write(spec, format, target);
             predictionStatus.setText("exported " + target.getFileName());
         } catch (IOException e) {
             error("Cannot export the chart", target + ": " + e.getMessage());
