@@ -17,7 +17,7 @@ public final class GuiPrefs {
     private static final String MAXIMIZED = "windowMaximized";
     private static final String RECENT = "recentFiles";
     private static final String LAST_DIR = "lastDirectory";
-    private static final String DIVIDER = "formsWidth";
+    private static final String DIVIDER = "divider";
 
     private final Preferences node;
 
@@ -66,13 +66,13 @@ public final class GuiPrefs {
         node.putBoolean(MAXIMIZED, maximized);
     }
 
-    /** Width of the forms column in pixels, or -1. */
-    public int formsWidth() {
-        return node.getInt(DIVIDER, -1);
+    /** Position of the named split-pane divider in pixels, or -1 when never stored. */
+    public int divider(String name) {
+        return node.getInt(DIVIDER + "." + name, -1);
     }
 
-    public void formsWidth(int px) {
-        node.putInt(DIVIDER, px);
+    public void divider(String name, int px) {
+        node.putInt(DIVIDER + "." + name, px);
     }
 
     public RecentFiles recentFiles() {

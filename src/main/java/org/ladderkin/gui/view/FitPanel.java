@@ -69,6 +69,7 @@ public final class FitPanel extends JPanel {
     private final Map<LadderParameter, JCheckBox> freeBoxes = new EnumMap<>(LadderParameter.class);
     private final JCheckBox pulseTrain = new JCheckBox("Pulse-train steady state at the plan's rate");
     private final JCheckBox response = new JCheckBox("Plan's instrument response");
+    private final java.util.Map<String, JSplitPane> splits = new java.util.LinkedHashMap<>();
     private final ChartView overlay;
     private final ChartView residuals;
     private final ParameterModel parameterModel = new ParameterModel();
@@ -82,6 +83,11 @@ public final class FitPanel extends JPanel {
      * @param lastDirectory where the file chooser opens
      * @param directoryUsed told the folder of loaded files
      */
+    /** The panel's split panes by name, so the window can remember where the user put their dividers. */
+    java.util.Map<String, JSplitPane> splits() {
+        return java.util.Collections.unmodifiableMap(splits);
+    }
+
     /** Offers the right-click export on the overlay and residual charts. */
     void offerChartExport(java.util.function.BiConsumer<org.ladderkin.report.ChartSpec, org.ladderkin.gui.chart.ChartExport.Format> export) {
         overlay.offerExport(export);
@@ -168,8 +174,10 @@ public final class FitPanel extends JPanel {
         left.add(new JScrollPane(diagnostics), "grow");
 
         JSplitPane charts = new JSplitPane(JSplitPane.VERTICAL_SPLIT, overlay, residuals);
+        splits.put("fit-charts", charts);
         charts.setResizeWeight(0.68);
         JSplitPane body = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, charts);
+        splits.put("fit", body);
         body.setResizeWeight(0);
         body.setDividerLocation(520);
 

@@ -98,6 +98,8 @@ public final class PlannerFrame extends JFrame {
     private final JLabel predictionStatus = new JLabel(" ");
     private final JLabel fileStatus = new JLabel(" ");
     private final JSplitPane mainSplit;
+    /** Split panes whose divider positions are remembered between runs, by name. */
+    private final java.util.Map<String, JSplitPane> splits = new java.util.LinkedHashMap<>();
     private final JMenu recentMenu = new JMenu("Open Recent");
     private final List<Action> exportActions = new ArrayList<>();
     private Action undoAction;
@@ -148,11 +150,14 @@ public final class PlannerFrame extends JFrame {
         charts.setPreferredSize(new java.awt.Dimension(760, 540));
         lower.setPreferredSize(new java.awt.Dimension(760, 190));
         JSplitPane centre = new JSplitPane(JSplitPane.VERTICAL_SPLIT, charts, lower);
+        splits.put("charts", centre);
         centre.setResizeWeight(0.72);
         centreTabs.setName("centre");
         centreTabs.addTab("Prediction", centre);
         centreTabs.addTab("Measured data & fit", fitPanel);
         mainSplit = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, forms, centreTabs);
+        splits.put("forms", mainSplit);
+        splits.putAll(fitPanel.splits());
         mainSplit.setResizeWeight(0);
 
         JPanel content = new JPanel(new BorderLayout());
@@ -280,6 +285,10 @@ public final class PlannerFrame extends JFrame {
         risks.show(prediction.risks());
         derived.show(prediction.derived());
         cautions.show(prediction.cautions());
+        if (deliveredCount == 0) {
+            // the first cautions change the height left for the charts; lay out, then put the dividers back again
+            SwingUtilities.invokeLater(this::restoreDividers);
+        }
         deliveredCount++;
         double sinceEditMs = (System.nanoTime() - editNanos) / 1e6;
         predictionStatus.setText(String.format(java.util.Locale.ROOT, "charts updated %.0f ms after the change (computed in %.1f ms)",
@@ -645,8 +654,25 @@ public final class PlannerFrame extends JFrame {
         if (prefs.maximized()) {
             setExtendedState(MAXIMIZED_BOTH);
         }
-        int formsWidth = prefs.formsWidth();
-        mainSplit.setDividerLocation(formsWidth > 100 ? formsWidth : 430);
+        mainSplit.setDividerLocation(430);
+        splits.forEach((name, split) -> split.setName("split:" + name));
+        // put the dividers back once the window has its real size: a resize before that would move them again
+        addWindowListener(new WindowAdapter() {
+            @Override
+            public void windowOpened(WindowEvent e) {
+                restoreDividers();
+            }
+        });
+    }
+
+    /** Puts every divider where it was last left (those never stored keep their default). */
+    private void restoreDividers() {
+        splits.forEach((name, split) -> {
+            int px = prefs.divider(name);
+            if (px > 50) {
+                split.setDividerLocation(px);
+            }
+        });
     }
 
     private void rememberBounds() {
@@ -655,7 +681,12 @@ public final class PlannerFrame extends JFrame {
         if (!maximized) {
             prefs.bounds(getBounds());
         }
-        prefs.formsWidth(mainSplit.getDividerLocation());
+        splits.forEach((name, split) -> {
+            // a split on a tab never shown has no location yet; keep what was stored
+            if (split.getDividerLocation() > 0) {
+                prefs.divider(name, split.getDividerLocation());
+            }
+        });
     }
 
     private void error(String title, String message) {

@@ -35,14 +35,17 @@ class GuiPrefsTest {
         first.theme(Theme.DARK);
         first.bounds(new Rectangle(10, 20, 1200, 800));
         first.maximized(true);
-        first.formsWidth(420);
+        first.divider("forms", 420);
+        first.divider("fit", 610);
         first.recentFiles(RecentFiles.empty().add(Path.of("/plans/a.plan.json")));
         first.lastDirectory(Path.of("/plans"));
         GuiPrefs next = new GuiPrefs(node);
         assertThat(next.theme()).isEqualTo(Theme.DARK);
         assertThat(next.bounds()).contains(new Rectangle(10, 20, 1200, 800));
         assertThat(next.maximized()).isTrue();
-        assertThat(next.formsWidth()).isEqualTo(420);
+        assertThat(next.divider("forms")).isEqualTo(420);
+        assertThat(next.divider("fit")).isEqualTo(610);
+        assertThat(next.divider("never-stored")).isEqualTo(-1);
         assertThat(next.recentFiles().files()).containsExactly(Path.of("/plans/a.plan.json"));
         assertThat(next.lastDirectory()).contains(Path.of("/plans"));
     }

@@ -180,7 +180,32 @@ class PlannerWindowTest {
         press(window.optionPane().requireTitle("Unsaved changes").buttonWithText("Don't Save"));
         waitFor("the window to close", () -> !GuiActionRunner.execute(() -> frame.isDisplayable()));
         assertThat(prefs.bounds()).as("window bounds remembered").isPresent();
-        assertThat(prefs.formsWidth()).isPositive();
+        for (String split : new String[] {"forms", "charts"}) {
+            assertThat(prefs.divider(split)).as("divider " + split + " remembered").isPositive();
+        }
+        // the fit tab was never shown: nothing is stored for its dividers rather than a meaningless value
+        assertThat(prefs.divider("fit-charts")).isEqualTo(-1);
+    }
+
+    @Test
+    void rememberedDividersArePutBackInANewWindow() throws Exception {
+        window.cleanUp();
+        prefs.divider("forms", 512);
+        prefs.divider("charts", 400);
+        // the window opens at its remembered size; a resize afterwards would share the change out between the panes
+        prefs.bounds(new java.awt.Rectangle(0, 0, 1360, 860));
+        frame = GuiActionRunner.execute(() -> {
+            PlannerFrame f = new PlannerFrame(prefs, new RecoveryStore(dir.resolve("recovery")), new PlannerPrediction());
+            f.openFile(plan);
+            return f;
+        });
+        window = new FrameFixture(frame);
+        window.show();
+        waitFor("the first prediction", () -> frame.deliveredCount() >= 1);
+        waitFor("the dividers", () -> GuiActionRunner.execute(() -> window.splitPane("split:forms").target()
+                .getDividerLocation() == 512 && window.splitPane("split:charts").target().getDividerLocation() == 400));
+        assertThat(GuiActionRunner.execute(() -> window.splitPane("split:forms").target().getDividerLocation())).isEqualTo(512);
+        assertThat(GuiActionRunner.execute(() -> window.splitPane("split:charts").target().getDividerLocation())).isEqualTo(400);
     }
 
     @Test
