@@ -32,7 +32,7 @@ import org.ladderkin.report.ChartSpec;
  * the freed parameters, single pulse or pulse-train steady state, the run state with its progress, the outcome, and
  * what the view draws (charts as {@link ChartSpec}, parameter rows, diagnostics). Before a fit the traces are drawn
  * over the plan's own model (a ladder fit with nothing freed: only per-trace amplitude and baseline are solved);
- * after a fit over the fitted curves. Fits run on a {@link FitRunner}; everything arrives through its
+ * after a fit over the fitted curves. Fits run on a {@link LatestJobRunner}; everything arrives through its
  * {@code deliver} executor. Methods are synchronized so a direct executor (tests) is as safe as the event thread.
  */
 public final class FitSession implements AutoCloseable {
@@ -51,7 +51,7 @@ public final class FitSession implements AutoCloseable {
     /** Sidecar file next to a trace table: {@code NAME.traces.json} for {@code NAME.csv}. */
     static final String SIDECAR_SUFFIX = ".traces.json";
 
-    private final FitRunner runner;
+    private final LatestJobRunner runner;
     private final List<Listener> listeners = new CopyOnWriteArrayList<>();
 
     private Dataset data;
@@ -84,7 +84,7 @@ public final class FitSession implements AutoCloseable {
 
     /** @param deliver runs results and progress (e.g. {@code SwingUtilities::invokeLater}) */
     public FitSession(Executor deliver) {
-        this.runner = new FitRunner(deliver);
+        this.runner = new LatestJobRunner("ladderkin-fit", deliver);
     }
 
     public void addListener(Listener l) {
@@ -320,7 +320,7 @@ public final class FitSession implements AutoCloseable {
             PlanFitBasis basis = basis(inputs);
             LadderFitSetup setup = setup(basis, inputs, train, response, freed, planScale(kindOf(withExcitation), basis));
             return new FitView(LadderFit.fit(withExcitation, setup, p), withExcitation, basis, freed);
-        }, new FitRunner.Callback<FitView>() {
+        }, new LatestJobRunner.Callback<FitView>() {
             @Override
             public void progress(String s, int done, int total) {
                 fitProgress(s, done, total);
@@ -533,7 +533,7 @@ public final class FitSession implements AutoCloseable {
             PlanFitBasis basis = basis(inputs);
             LadderFitSetup setup = setup(basis, inputs, train, response, Set.of(), planScale(kindOf(withExcitation), basis));
             return new FitView(LadderFit.fit(withExcitation, setup, org.ladderkin.fit.FitProgress.NONE), withExcitation, basis, Set.of());
-        }, new FitRunner.Callback<FitView>() {
+        }, new LatestJobRunner.Callback<FitView>() {
             @Override
             public void progress(String s, int done, int total) {
             }

@@ -2,20 +2,15 @@ package org.ladderkin.gui.model;
 
 import java.util.Objects;
 import java.util.concurrent.Executor;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
-import java.util.concurrent.ScheduledExecutorService;
-import java.util.concurrent.TimeUnit;
-import java.util.concurrent.atomic.AtomicLong;
 import java.util.function.Consumer;
 import org.ladderkin.plan.PlanInputs;
 
 /**
  * Recomputes the prediction in the background after edits: requests are debounced (a burst of keystrokes costs one
  * computation), a newer request cancels the older one, and only the result of the newest request is delivered.
- * One worker thread; results go through {@code deliver} (the event thread in the planner, the caller's thread in
- * tests). A generation counter decides which result is current, so a slow stale computation can never overwrite a
- * fresh one.
+ * The work runs on a {@link LatestJobRunner}; results go through {@code deliver} (the event thread in the planner,
+ * the caller's thread in tests), and its generation counter makes sure a slow stale computation can never overwrite
+ * a fresh one.
  */
 public final class RecomputeService implements AutoCloseable {
 
@@ -32,11 +27,8 @@ public final class RecomputeService implements AutoCloseable {
 
     private final PredictionSource source;
     private final long debounceMillis;
-    private final Executor deliver;
     private final Consumer<Result> onResult;
-    private final ScheduledExecutorService worker;
-    private final AtomicLong generation = new AtomicLong();
-    private Future<?> pending;
+    private final LatestJobRunner runner;
 
     /**
      * @param debounceMillis wait this long after the last request before computing
@@ -49,57 +41,57 @@ public final class RecomputeService implements AutoCloseable {
             throw new IllegalArgumentException("debounce must be >= 0 ms, was " + debounceMillis);
         }
         this.debounceMillis = debounceMillis;
-        this.deliver = Objects.requireNonNull(deliver, "deliver");
         this.onResult = Objects.requireNonNull(onResult, "onResult");
-        this.worker = Executors.newSingleThreadScheduledExecutor(r -> {
-            Thread t = new Thread(r, "ladderkin-recompute");
-            t.setDaemon(true);
-            return t;
-        });
+        this.runner = new LatestJobRunner("ladderkin-recompute", deliver);
     }
 
     /** Asks for a prediction of {@code inputs}, replacing any request not yet delivered; returns its generation. */
     public synchronized long request(PlanInputs inputs) {
         Objects.requireNonNull(inputs, "inputs");
-        long gen = generation.incrementAndGet();
-        if (pending != null) {
-            pending.cancel(true);
+        // this service is the runner's only client and requests are serialised, so the next generation is known
+        long gen = runner.generation() + 1;
+        long submitted = runner.submit(debounceMillis, progress -> compute(gen, inputs), new LatestJobRunner.Callback<Result>() {
+            @Override
+            public void progress(String stage, int done, int total) {
+            }
+
+            @Override
+            public void finished(Result value) {
+                onResult.accept(value);
+            }
+
+            @Override
+            public void failed(String message) {
+                onResult.accept(new Result(gen, null, message, 0));
+            }
+        });
+        if (submitted != gen) {
+            throw new IllegalStateException("recompute runner shared with another client (generation " + submitted
+                    + ", expected " + gen + ")");
         }
-        pending = worker.schedule(() -> compute(gen, inputs), debounceMillis, TimeUnit.MILLISECONDS);
         return gen;
     }
 
     /** The generation of the newest request. */
     public long generation() {
-        return generation.get();
+        return runner.generation();
     }
 
-    private void compute(long gen, PlanInputs inputs) {
-        if (gen != generation.get()) {
-            return;
-        }
+    /** One prediction; a failure becomes a result carrying its reason, a cancellation is passed on (and dropped). */
+    private Result compute(long gen, PlanInputs inputs) {
         long t0 = System.nanoTime();
-        Result result;
         try {
-            Prediction p = source.predict(inputs);
-            result = new Result(gen, p, null, System.nanoTime() - t0);
+            return new Result(gen, source.predict(inputs), null, System.nanoTime() - t0);
+        } catch (java.util.concurrent.CancellationException e) {
+            throw e;
         } catch (RuntimeException e) {
-            result = new Result(gen, null, e.getMessage() == null ? e.toString() : e.getMessage(), System.nanoTime() - t0);
+            return new Result(gen, null, e.getMessage() == null ? e.toString() : e.getMessage(), System.nanoTime() - t0);
         }
-        if (Thread.currentThread().isInterrupted() || gen != generation.get()) {
-            return;
-        }
-        Result delivered = result;
-        deliver.execute(() -> {
-            if (delivered.generation() == generation.get()) {
-                onResult.accept(delivered);
-            }
-        });
     }
 
     /** Stops the worker; pending requests are dropped. */
     @Override
     public void close() {
-        worker.shutdownNow();
+        runner.close();
     }
 }

@@ -11,10 +11,10 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 
 /** The fit thread: newest job wins, cancel interrupts and silences, failures arrive as one line, all via deliver. */
-class FitRunnerTest {
+class LatestJobRunnerTest {
 
     final LinkedBlockingQueue<Runnable> delivered = new LinkedBlockingQueue<>();
-    final FitRunner runner = new FitRunner(delivered::add);
+    final LatestJobRunner runner = new LatestJobRunner("ladderkin-test", delivered::add);
     final List<String> seen = new CopyOnWriteArrayList<>();
 
     @AfterEach
@@ -22,8 +22,8 @@ class FitRunnerTest {
         runner.close();
     }
 
-    FitRunner.Callback<String> recorder(String name) {
-        return new FitRunner.Callback<>() {
+    LatestJobRunner.Callback<String> recorder(String name) {
+        return new LatestJobRunner.Callback<>() {
             @Override
             public void progress(String stage, int done, int total) {
                 seen.add(name + " progress " + stage + " " + done + "/" + total);

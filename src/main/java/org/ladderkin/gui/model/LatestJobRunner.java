@@ -3,19 +3,21 @@ package org.ladderkin.gui.model;
 import java.util.Objects;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.Executor;
-import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import java.util.concurrent.ScheduledExecutorService;
+import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicLong;
 import org.ladderkin.fit.FitProgress;
 
 /**
- * Runs fits (and the plan's preview curves) on one daemon worker thread, like {@link RecomputeService}: a newer job
- * cancels the older one by interrupting it (the fitter stops at its next model evaluation), progress and results go
+ * Runs background work where only the newest request matters (the live prediction, fits, the fit tab's preview
+ * curves) on one daemon worker thread: a newer job cancels the older one by interrupting it (the fitter and the
+ * planner stop at their next step), an optional delay lets a burst of requests cost one job, progress and results go
  * through {@code deliver} (the event thread in the planner), and a generation counter drops anything a newer job or
  * a cancel has made stale.
  */
-public final class FitRunner implements AutoCloseable {
+public final class LatestJobRunner implements AutoCloseable {
 
     /** Work done on the worker thread. */
     @FunctionalInterface
@@ -36,29 +38,41 @@ public final class FitRunner implements AutoCloseable {
     }
 
     private final Executor deliver;
-    private final ExecutorService worker;
+    private final ScheduledExecutorService worker;
     private final AtomicLong generation = new AtomicLong();
     private Future<?> pending;
 
-    /** @param deliver runs the callbacks (e.g. {@code SwingUtilities::invokeLater}) */
-    public FitRunner(Executor deliver) {
+    /**
+     * @param threadName names the worker thread (seen in thread dumps)
+     * @param deliver    runs the callbacks (e.g. {@code SwingUtilities::invokeLater})
+     */
+    public LatestJobRunner(String threadName, Executor deliver) {
+        Objects.requireNonNull(threadName, "threadName");
         this.deliver = Objects.requireNonNull(deliver, "deliver");
-        this.worker = Executors.newSingleThreadExecutor(r -> {
-            Thread t = new Thread(r, "ladderkin-fit");
+        this.worker = Executors.newSingleThreadScheduledExecutor(r -> {
+            Thread t = new Thread(r, threadName);
             t.setDaemon(true);
             return t;
         });
     }
 
     /** Starts {@code job}, cancelling any older one; returns its generation. */
-    public synchronized <T> long submit(Job<T> job, Callback<T> callback) {
+    public <T> long submit(Job<T> job, Callback<T> callback) {
+        return submit(0, job, callback);
+    }
+
+    /** Starts {@code job} after {@code delayMillis} unless a newer job arrives first; cancels any older one. */
+    public synchronized <T> long submit(long delayMillis, Job<T> job, Callback<T> callback) {
         Objects.requireNonNull(job, "job");
         Objects.requireNonNull(callback, "callback");
+        if (delayMillis < 0) {
+            throw new IllegalArgumentException("delay must be >= 0 ms, was " + delayMillis);
+        }
         long gen = generation.incrementAndGet();
         if (pending != null) {
             pending.cancel(true);
         }
-        pending = worker.submit(() -> execute(gen, job, callback));
+        pending = worker.schedule(() -> execute(gen, job, callback), delayMillis, TimeUnit.MILLISECONDS);
         return gen;
     }
 
