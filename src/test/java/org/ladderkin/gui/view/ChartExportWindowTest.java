@@ -3,12 +3,9 @@ package org.ladderkin.gui.view;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.junit.jupiter.api.Assumptions.assumeFalse;
 
-import java.awt.Dimension;
 import java.awt.GraphicsEnvironment;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.UUID;
-import java.util.prefs.Preferences;
 import org.assertj.swing.edt.FailOnThreadViolationRepaintManager;
 import org.assertj.swing.edt.GuiActionRunner;
 import org.assertj.swing.fixture.FrameFixture;
@@ -18,12 +15,8 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.ladderkin.gui.app.GuiPrefs;
-import org.ladderkin.gui.app.Theme;
 import org.ladderkin.gui.chart.ChartCsv;
 import org.ladderkin.gui.chart.ChartView;
-import org.ladderkin.gui.model.PlannerPrediction;
-import org.ladderkin.gui.model.RecoveryStore;
 import org.ladderkin.report.ChartSpec;
 
 /** A right click on any chart exports what it shows; skipped without a display. */
@@ -31,9 +24,8 @@ class ChartExportWindowTest {
 
     @TempDir
     Path dir;
-    Preferences node;
+    DemoPlannerWindow demo;
     FrameFixture window;
-    PlannerFrame frame;
 
     @BeforeAll
     static void needsADisplay() {
@@ -43,28 +35,15 @@ class ChartExportWindowTest {
 
     @BeforeEach
     void open() throws Exception {
-        Path plan = dir.resolve("demo.plan.json");
-        Files.copy(PlannerWindowTest.DEMO, plan);
-        node = Preferences.userRoot().node("org/ladderkin/gui-test/" + UUID.randomUUID());
-        GuiPrefs prefs = new GuiPrefs(node);
-        prefs.lastDirectory(dir);
-        frame = GuiActionRunner.execute(() -> {
-            Theme.LIGHT.install();
-            PlannerFrame f = new PlannerFrame(prefs, new RecoveryStore(dir.resolve("recovery")), new PlannerPrediction());
-            f.openFile(plan);
-            return f;
-        });
-        window = new FrameFixture(frame);
-        window.show(new Dimension(1360, 860));
-        PlannerWindowTest.waitFor("first prediction", () -> frame.deliveredCount() >= 1);
+        demo = DemoPlannerWindow.open(dir, prefs -> prefs.lastDirectory(dir));
+        window = demo.window;
     }
 
     @AfterEach
     void close() throws Exception {
-        if (window != null) {
-            window.cleanUp();
+        if (demo != null) {
+            demo.close();
         }
-        node.removeNode();
     }
 
     @Test

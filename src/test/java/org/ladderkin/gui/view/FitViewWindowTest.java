@@ -3,15 +3,12 @@ package org.ladderkin.gui.view;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.junit.jupiter.api.Assumptions.assumeFalse;
 
-import java.awt.Dimension;
 import java.awt.GraphicsEnvironment;
 import java.awt.event.KeyEvent;
 import java.io.File;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.UUID;
 import java.util.function.BooleanSupplier;
-import java.util.prefs.Preferences;
 import org.assertj.swing.core.KeyPressInfo;
 import org.assertj.swing.data.TableCell;
 import org.assertj.swing.edt.FailOnThreadViolationRepaintManager;
@@ -25,12 +22,8 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.ladderkin.gui.app.GuiPrefs;
-import org.ladderkin.gui.app.Theme;
 import org.ladderkin.gui.model.FitDemoSeries;
 import org.ladderkin.gui.model.FitSession;
-import org.ladderkin.gui.model.PlannerPrediction;
-import org.ladderkin.gui.model.RecoveryStore;
 import org.ladderkin.units.Quantity;
 
 /**
@@ -42,7 +35,7 @@ class FitViewWindowTest {
 
     @TempDir
     Path dir;
-    Preferences prefsNode;
+    DemoPlannerWindow demo;
     FrameFixture window;
     PlannerFrame frame;
     Path csv;
@@ -55,30 +48,17 @@ class FitViewWindowTest {
 
     @BeforeEach
     void openTheDemoPlanAndSimulateASeries() throws Exception {
-        Path plan = dir.resolve("demo.plan.json");
-        Files.copy(PlannerWindowTest.DEMO, plan);
-        prefsNode = Preferences.userRoot().node("org/ladderkin/gui-test/" + UUID.randomUUID());
-        GuiPrefs prefs = new GuiPrefs(prefsNode);
-        frame = GuiActionRunner.execute(() -> {
-            Theme.LIGHT.install();
-            PlannerFrame f = new PlannerFrame(prefs, new RecoveryStore(dir.resolve("recovery")), new PlannerPrediction());
-            f.openFile(plan);
-            return f;
-        });
-        window = new FrameFixture(frame);
-        window.show(new Dimension(1360, 860));
-        PlannerWindowTest.waitFor("first prediction", () -> frame.deliveredCount() >= 1);
+        demo = DemoPlannerWindow.open(dir, prefs -> { });
+        window = demo.window;
+        frame = demo.frame;
         var inputs = GuiActionRunner.execute(() -> frame.editor().lastValid().orElseThrow());
         csv = FitDemoSeries.write(FitDemoSeries.simulate(inputs, 40, 3), dir, "fh-series");
     }
 
     @AfterEach
     void closeWindow() throws Exception {
-        if (window != null) {
-            window.cleanUp();
-        }
-        if (prefsNode != null) {
-            prefsNode.removeNode();
+        if (demo != null) {
+            demo.close();
         }
     }
 

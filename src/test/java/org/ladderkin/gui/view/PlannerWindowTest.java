@@ -10,7 +10,6 @@ import java.awt.event.KeyEvent;
 import java.awt.image.BufferedImage;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.UUID;
 import java.util.function.BooleanSupplier;
 import java.util.prefs.Preferences;
 import javax.imageio.ImageIO;
@@ -66,23 +65,17 @@ class PlannerWindowTest {
 
     @BeforeEach
     void openTheDemoPlan() throws Exception {
-        plan = dir.resolve("demo.plan.json");
-        Files.copy(DEMO, plan);
-        prefsNode = Preferences.userRoot().node("org/ladderkin/gui-test/" + UUID.randomUUID());
-        prefs = new GuiPrefs(prefsNode);
-        frame = GuiActionRunner.execute(() -> {
-            Theme.LIGHT.install();
-            PlannerFrame f = new PlannerFrame(prefs, new RecoveryStore(dir.resolve("recovery")), new PlannerPrediction());
-            f.openFile(plan);
-            return f;
-        });
-        window = new FrameFixture(frame);
-        window.show(new Dimension(1360, 860));
-        waitFor("first prediction", () -> frame.deliveredCount() >= 1);
+        DemoPlannerWindow demo = DemoPlannerWindow.open(dir, p -> { });
+        plan = demo.plan;
+        prefsNode = demo.node;
+        prefs = demo.prefs;
+        frame = demo.frame;
+        window = demo.window;
     }
 
     @AfterEach
     void closeWindow() throws Exception {
+        // not DemoPlannerWindow.close(): a test may have replaced the window with a new one on the same preferences
         if (window != null) {
             window.cleanUp();
         }
