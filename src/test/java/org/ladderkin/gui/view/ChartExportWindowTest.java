@@ -53,12 +53,19 @@ class ChartExportWindowTest {
                 .target()).getSelectedComponent());
         ChartSpec shown = GuiActionRunner.execute(view::spec);
         javax.swing.JComponent chartPanel = (javax.swing.JComponent) GuiActionRunner.execute(() -> view.getComponent(0));
-        window.robot().showPopupMenu(chartPanel);
-        window.menuItem("export-chart:CSV").click();
+        // the right click is real; the clicks into the menu and the modal chooser are made on the event thread,
+        // because robot clicks on freshly shown popups and dialogs are sometimes lost under Xvfb (no window manager)
+        javax.swing.JPopupMenu menu = (javax.swing.JPopupMenu) window.robot().showPopupMenu(chartPanel);
+        javax.swing.JMenuItem csvItem = GuiActionRunner.execute(() -> java.util.Arrays.stream(menu.getComponents())
+                .filter(c -> "export-chart:CSV".equals(c.getName())).map(c -> (javax.swing.JMenuItem) c)
+                .findFirst().orElseThrow());
+        // later, not now: the item opens a modal chooser, which would hold the event thread inside this call
+        javax.swing.SwingUtilities.invokeLater(csvItem::doClick);
         JFileChooserFixture chooser = window.fileChooser();
-        Path target = dir.resolve("pl-per-dot");
-        chooser.fileNameTextBox().setText(target.toString());
-        chooser.approve();
+        GuiActionRunner.execute(() -> {
+            chooser.target().setSelectedFile(dir.resolve("pl-per-dot").toFile());
+            chooser.target().approveSelection();
+        });
         Path written = dir.resolve("pl-per-dot.csv");
         PlannerWindowTest.waitFor("the export", () -> Files.isRegularFile(written));
         assertThat(Files.readString(written)).isEqualTo(ChartCsv.of(shown));
