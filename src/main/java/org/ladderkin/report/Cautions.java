@@ -15,6 +15,13 @@ public final class Cautions {
     private static final Set<String> FLAMMABLE = Set.of("toluene", "hexane", "n-hexane", "heptane", "octane", "n-octane",
             "cyclohexane", "ethanol", "methanol", "acetone", "tetrahydrofuran", "thf");
 
+    /** Peak fluence of one pulse from which the high-fluence caution shows (J/m², = 1 mJ/cm²): this project's threshold, not a standard (no source). */
+    public static final double HIGH_FLUENCE_J_PER_M2 = 10;
+    /** Steady-state temperature rise from which the hot-sample caution shows (K): this project's threshold, not a standard (no source). */
+    public static final double HOT_RISE_K = 10;
+    /** Margin to the boiling point within which the hot-sample caution shows whatever the rise (K): this project's threshold (no source). */
+    public static final double BOILING_MARGIN_K = 20;
+
     public static final String LASER = "Laser hazard: ultrafast pump-probe sources are Class 4 lasers. Direct and "
             + "scattered beams can cause permanent eye injury and skin burns and can ignite materials. Wear eyewear rated "
             + "for every wavelength in use (including harmonics and OPA outputs), enclose beam paths, and follow your "
@@ -46,13 +53,6 @@ public final class Cautions {
                 + "locally beyond this estimate. Keep open flames and hot surfaces away, keep cells closed, and follow "
                 + "your institution's fire-safety rules.", matrix, boilingPointK - 273.15, riseK);
     }
-
-    /** Peak fluence of one pulse from which the high-fluence caution shows (J/m², = 1 mJ/cm²): common practice, no source. */
-    public static final double HIGH_FLUENCE_J_PER_M2 = 10;
-    /** Steady-state temperature rise from which the hot-sample caution shows (K): common practice, no source. */
-    public static final double HOT_RISE_K = 10;
-    /** Margin to the boiling point within which the hot-sample caution shows whatever the rise (K): common practice, no source. */
-    public static final double BOILING_MARGIN_K = 20;
 
     /** Caution for a strong pump: the highest pulse's peak fluence at the sample. */
     public static String highFluence(double peakFluenceJPerM2) {

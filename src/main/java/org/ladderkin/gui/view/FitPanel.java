@@ -72,7 +72,14 @@ public final class FitPanel extends JPanel {
     private final java.util.Map<String, JSplitPane> splits = new java.util.LinkedHashMap<>();
     private final ChartView overlay;
     private final ChartView residuals;
-    private final ParameterModel parameterModel = new ParameterModel();
+    /** Parameter, value, standard error, free or held. */
+    private final RowTableModel<FitCharts.ParameterRow> parameterModel = new RowTableModel<>(
+            List.of("Parameter", "Value", "Standard error", ""), (row, c) -> switch (c) {
+                case 0 -> row.name();
+                case 1 -> row.value();
+                case 2 -> row.error();
+                default -> row.free() ? "free" : "held";
+            });
     private final JTable parameters = new JTable(parameterModel);
     private final JTextArea diagnostics = new JTextArea(6, 30);
     private String pushNote = "";
@@ -288,8 +295,7 @@ public final class FitPanel extends JPanel {
                 + Quantity.formatBest(hz, Dimension.FREQUENCY, 3) + " (the plan's rate)"));
         overlay.show(session.overlayChart());
         residuals.show(session.residualChart());
-        parameterModel.rows = session.parameterRows();
-        parameterModel.fireTableDataChanged();
+        parameterModel.rows(session.parameterRows());
         List<String> lines = new ArrayList<>(session.diagnostics());
         if (!session.previewProblem().isEmpty()) {
             lines.add(0, session.previewProblem());
@@ -419,38 +425,6 @@ public final class FitPanel extends JPanel {
             field.setText(value == null ? "" : value.toString());
             check();
             return field;
-        }
-    }
-
-    /** Parameter, value, standard error, free or held. */
-    private static final class ParameterModel extends AbstractTableModel {
-        private static final String[] COLUMNS = {"Parameter", "Value", "Standard error", ""};
-        private List<FitCharts.ParameterRow> rows = List.of();
-
-        @Override
-        public int getRowCount() {
-            return rows.size();
-        }
-
-        @Override
-        public int getColumnCount() {
-            return COLUMNS.length;
-        }
-
-        @Override
-        public String getColumnName(int c) {
-            return COLUMNS[c];
-        }
-
-        @Override
-        public Object getValueAt(int r, int c) {
-            FitCharts.ParameterRow row = rows.get(r);
-            return switch (c) {
-                case 0 -> row.name();
-                case 1 -> row.value();
-                case 2 -> row.error();
-                default -> row.free() ? "free" : "held";
-            };
         }
     }
 }

@@ -7,7 +7,6 @@ import java.util.Locale;
 import javax.swing.JLabel;
 import javax.swing.JTable;
 import javax.swing.UIManager;
-import javax.swing.table.AbstractTableModel;
 import javax.swing.table.DefaultTableCellRenderer;
 import org.ladderkin.observe.Risk;
 import org.ladderkin.observe.Verdict;
@@ -15,13 +14,13 @@ import org.ladderkin.observe.Verdict;
 /** The risk list: one row per risk with its verdict, number, limit and what to do; the reason is also the tooltip. */
 final class RiskTable extends JTable {
 
-    private final Model model;
+    private final RowTableModel<Risk> model;
 
     RiskTable() {
-        this(new Model());
+        this(new RowTableModel<>(List.of("Verdict", "Risk", "Predicted", "Limit", "What it means"), RiskTable::cell));
     }
 
-    private RiskTable(Model model) {
+    private RiskTable(RowTableModel<Risk> model) {
         super(model);
         this.model = model;
         setName("risks");
@@ -36,57 +35,34 @@ final class RiskTable extends JTable {
     }
 
     void show(List<Risk> risks) {
-        model.rows = List.copyOf(risks);
-        model.fireTableDataChanged();
+        model.rows(risks);
     }
 
     List<Risk> risks() {
-        return model.rows;
+        return model.rows();
     }
 
     @Override
     public String getToolTipText(java.awt.event.MouseEvent e) {
         int row = rowAtPoint(e.getPoint());
-        return row < 0 ? null : model.rows.get(row).why();
+        return row < 0 ? null : model.rows().get(row).why();
     }
 
-    private static final class Model extends AbstractTableModel {
-        private static final String[] COLUMNS = {"Verdict", "Risk", "Predicted", "Limit", "What it means"};
-        private List<Risk> rows = List.of();
+    private static Object cell(Risk r, int column) {
+        return switch (column) {
+            case 0 -> r.verdict();
+            case 1 -> r.name();
+            case 2 -> number(r.value(), r.unit());
+            case 3 -> number(r.limit(), r.unit());
+            default -> r.why();
+        };
+    }
 
-        @Override
-        public int getRowCount() {
-            return rows.size();
+    private static String number(double v, String unit) {
+        if ("fraction".equals(unit)) {
+            return String.format(Locale.ROOT, "%.3g %%", v * 100);
         }
-
-        @Override
-        public int getColumnCount() {
-            return COLUMNS.length;
-        }
-
-        @Override
-        public String getColumnName(int column) {
-            return COLUMNS[column];
-        }
-
-        @Override
-        public Object getValueAt(int row, int column) {
-            Risk r = rows.get(row);
-            return switch (column) {
-                case 0 -> r.verdict();
-                case 1 -> r.name();
-                case 2 -> number(r.value(), r.unit());
-                case 3 -> number(r.limit(), r.unit());
-                default -> r.why();
-            };
-        }
-
-        private static String number(double v, String unit) {
-            if ("fraction".equals(unit)) {
-                return String.format(Locale.ROOT, "%.3g %%", v * 100);
-            }
-            return String.format(Locale.ROOT, "%.3g %s", v, unit).strip();
-        }
+        return String.format(Locale.ROOT, "%.3g %s", v, unit).strip();
     }
 
     private static final class VerdictRenderer extends DefaultTableCellRenderer {
