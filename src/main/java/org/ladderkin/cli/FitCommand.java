@@ -5,7 +5,7 @@ import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.EnumSet;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
@@ -28,7 +28,8 @@ import org.ladderkin.io.TableOptions;
 import org.ladderkin.io.TraceArguments;
 import org.ladderkin.io.TraceSidecarCodec;
 import org.ladderkin.io.TraceTableReader;
-import org.ladderkin.kinetics.ModelParameters;
+import org.ladderkin.kinetics.process.CoolingProcess;
+import org.ladderkin.kinetics.process.LadderModel;
 import org.ladderkin.plan.PlanFitBasis;
 import org.ladderkin.observe.MeasuredIrf;
 import org.ladderkin.report.FitReport;
@@ -87,7 +88,8 @@ final class FitCommand implements Callable<Integer> {
     String repRate;
 
     @Option(names = "--free", split = ",", paramLabel = "NAME", defaultValue = "scale,tau-auger2",
-            description = "shared parameters to fit: scale, tau-auger2, tau-rad, tau-trap, time-zero, irf (default ${DEFAULT-VALUE}); "
+            completionCandidates = FitNames.class,
+            description = "shared parameters to fit: ${COMPLETION-CANDIDATES} (default ${DEFAULT-VALUE}); "
                     + "the others are held at the model's values")
     List<String> free;
 
@@ -138,9 +140,9 @@ final class FitCommand implements Callable<Integer> {
         Dataset data = metadata(TraceTableReader.readAll(dataFiles, new TableOptions(
                 delayUnit == null ? null : Units.of(delayUnit.trim()), MissingValuePolicy.DROP)));
         // with only a plan, the fit starts from the plan's own ladder (the one its predictions use)
-        ModelParameters base = modelFile == null && !modelOptions.given() && planFile != null
-                ? PlanFitBasis.of(PlanCodec.read(planFile)).base() : modelOptions.parameters(modelFile);
-        Set<LadderParameter> freed = EnumSet.noneOf(LadderParameter.class);
+        LadderModel base = modelFile == null && !modelOptions.given() && planFile != null
+                ? PlanFitBasis.of(PlanCodec.read(planFile)).base() : modelOptions.ladder(modelFile);
+        Set<LadderParameter> freed = new LinkedHashSet<>();
         for (String f : free) {
             if (!f.isBlank()) {
                 freed.add(LadderParameter.of(f));
@@ -151,7 +153,7 @@ final class FitCommand implements Callable<Integer> {
                 Quantity.parseSi(timeZero, Dimension.TIME), irf == null ? Double.NaN : positive(irf, Dimension.TIME, "--irf"),
                 sharedAmplitude, profile, measured);
         PrintWriter err = spec.commandLine().getErr();
-        if (base.coolingRatePerS() > 0 && !quiet) {
+        if (base.has(CoolingProcess.LIFETIME) && !quiet) {
             // a hot-resolved ladder has hundreds of states at ⟨N⟩ ≈ 5 and every trial of τ₂ rebuilds it
             err.println("note: the model resolves hot excitons (cooling), which makes every fit step slow (minutes); "
                     + "for delays beyond a few ps fit without the cooling process");
@@ -257,5 +259,13 @@ final class FitCommand implements Callable<Integer> {
             throw new IllegalArgumentException(flag + " must be > 0, was " + text);
         }
         return x;
+    }
+
+    /** The names {@code --free} accepts, from the fit's own list (the process registry's fittable lifetimes included). */
+    static final class FitNames implements Iterable<String> {
+        @Override
+        public java.util.Iterator<String> iterator() {
+            return LadderParameter.values().stream().map(LadderParameter::key).iterator();
+        }
     }
 }

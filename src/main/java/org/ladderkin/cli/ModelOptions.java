@@ -1,68 +1,40 @@
 package org.ladderkin.cli;
 
 import java.nio.file.Path;
-import java.util.EnumSet;
+import java.util.Arrays;
 import java.util.List;
-import java.util.Set;
+import java.util.Optional;
 import org.ladderkin.io.ModelCodec;
 import org.ladderkin.kinetics.KineticModel;
-import org.ladderkin.kinetics.ModelParameters;
-import org.ladderkin.kinetics.rate.AugerIonisation;
-import org.ladderkin.kinetics.rate.RadiativeDecay;
-import org.ladderkin.kinetics.state.Charge;
+import org.ladderkin.kinetics.process.LadderModel;
+import org.ladderkin.kinetics.process.ParameterKind;
+import org.ladderkin.kinetics.process.ParameterSource;
+import org.ladderkin.kinetics.process.ProcessParameter;
+import org.ladderkin.kinetics.process.ProcessRegistry;
+import org.ladderkin.kinetics.process.ProcessType;
+import org.ladderkin.kinetics.rate.ExcitonScaling;
+import org.ladderkin.kinetics.process.AugerProcess;
+import org.ladderkin.kinetics.process.RadiativeProcess;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Quantity;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.IModelTransformer;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Model.OptionSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
 
-/** The flags that describe a ladder model without a model file; shared by every command that takes a model. */
+/**
+ * The flags that describe a ladder model without a model file; shared by every command that takes a model. One flag
+ * per process parameter, derived from {@link ProcessRegistry} (so a new process brings its flags with it); a process
+ * that is not required is on when any of its flags is given.
+ */
+@Command(modelTransformer = ModelOptions.RegistryFlags.class)
 final class ModelOptions {
 
-    @Option(names = "--tau-rad", paramLabel = "TIME", description = "single-exciton radiative lifetime (flag model)")
-    String tauRad;
-
-    @Option(names = "--radiative-scaling", paramLabel = "LAW", defaultValue = "statistical",
-            description = "radiative N-scaling: linear | statistical (default ${DEFAULT-VALUE})")
-    String radiativeScaling;
-
-    @Option(names = "--charged-radiative-factor", paramLabel = "X", defaultValue = "2",
-            description = "k_rad(charged)/k_rad(neutral) (default ${DEFAULT-VALUE})")
-    double chargedRadiativeFactor;
-
-    @Option(names = "--tau-auger2", paramLabel = "TIME", description = "biexciton Auger lifetime (flag model)")
-    String tauAuger2;
-
-    @Option(names = "--auger-scaling", paramLabel = "LAW", defaultValue = "statistical",
-            description = "Auger N-scaling: statistical | pairs | quadratic (default ${DEFAULT-VALUE})")
-    String augerScaling;
-
-    @Option(names = "--tau-trion-negative", paramLabel = "TIME", description = "negative-trion Auger lifetime")
-    String tauTrionNegative;
-
-    @Option(names = "--tau-trion-positive", paramLabel = "TIME", description = "positive-trion Auger lifetime")
-    String tauTrionPositive;
-
-    @Option(names = "--tau-trap", paramLabel = "TIME", description = "trapping lifetime per exciton (off when omitted)")
-    String tauTrap;
-
-    @Option(names = "--tau-cool", paramLabel = "TIME", description = "intraband cooling time per hot exciton (off when omitted)")
-    String tauCool;
-
-    @Option(names = "--charges", split = ",", paramLabel = "CHARGE", description = "excess charges that exist: negative, positive")
-    List<String> charges;
-
-    @Option(names = "--ionisation-probability", paramLabel = "P", defaultValue = "0",
-            description = "probability that an Auger event ejects a carrier (default ${DEFAULT-VALUE})")
-    double ionisationProbability;
-
-    @Option(names = "--ionisation-leaves", paramLabel = "CHARGE", defaultValue = "negative",
-            description = "charge left on the dot after ejection: negative | positive (default ${DEFAULT-VALUE})")
-    String ionisationLeaves;
-
-    @Option(names = "--tau-neutralisation", paramLabel = "TIME", description = "time for a charged dot to lose its excess carrier")
-    String tauNeutralisation;
-
-    @Option(names = "--tau-refresh", paramLabel = "TIME", description = "sample exchange time by stirring or flow")
-    String tauRefresh;
+    /** The command this mixin is part of: picocli stores the parsed values on its copies of the options. */
+    @Spec(Spec.Target.MIXEE)
+    CommandSpec spec;
 
     @Option(names = "--degeneracy", paramLabel = "G", defaultValue = "2", description = "band-edge degeneracy g (default ${DEFAULT-VALUE})")
     int degeneracy;
@@ -70,70 +42,135 @@ final class ModelOptions {
     @Option(names = "--nmax", paramLabel = "N", description = "highest exciton number kept (default: automatic, tail < 1e-9)")
     Integer nMax;
 
+    /** Adds one option per registry parameter to the mixin when picocli builds it. */
+    static final class RegistryFlags implements IModelTransformer {
+        @Override
+        public CommandSpec transform(CommandSpec mixin) {
+            for (ProcessParameter p : ProcessRegistry.parameters()) {
+                String dflt = p.defaultText() == null || p.defaultText().isEmpty() ? "" : " (default " + p.defaultText() + ")";
+                String choices = p.choices().isEmpty() ? "" : ": " + String.join(" | ", p.choices());
+                mixin.addOption(OptionSpec.builder(p.flag()).type(String.class).paramLabel(label(p))
+                        .description(p.help() + choices + dflt).build());
+            }
+            return mixin;
+        }
+
+        private static String label(ProcessParameter p) {
+            return switch (p.kind()) {
+                case LIFETIME -> "TIME";
+                case FACTOR -> "X";
+                case PROBABILITY -> "P";
+                case CHOICE -> "WORD";
+                case SCALING_LAW -> "LAW";
+                case CHOICE_LIST -> "WORD,...";
+            };
+        }
+    }
+
     /** The kinetic model from {@code modelFile} or, when it is null, from the flags. */
     KineticModel model(Path modelFile) {
-        ModelParameters p = parameters(modelFile);
-        return modelFile != null && nMax != null ? p.toModel().withFixedNMax(nMax) : p.toModel();
+        LadderModel m = ladder(modelFile);
+        return modelFile != null && nMax != null ? m.toModel().withFixedNMax(nMax) : m.toModel();
     }
 
     /** Whether the flags describe a model (a model file or the flags are then the model, not a plan's). */
     boolean given() {
-        return tauRad != null || tauAuger2 != null;
+        return text(RadiativeProcess.LIFETIME) != null || text(AugerProcess.BIEXCITON_LIFETIME) != null;
     }
 
-    /** The model's parameters from {@code modelFile} or, when it is null, from the flags. */
-    ModelParameters parameters(Path modelFile) {
-        boolean anyModelFlag = tauRad != null || tauAuger2 != null;
+    /** The model from {@code modelFile} or, when it is null, from the flags. */
+    LadderModel ladder(Path modelFile) {
         if (modelFile != null) {
-            if (anyModelFlag) {
-                throw new IllegalArgumentException("give either a model file or --tau-rad/--tau-auger2, not both");
+            if (given()) {
+                throw new IllegalArgumentException("give either a model file or " + RadiativeProcess.LIFETIME.flag() + "/"
+                        + AugerProcess.BIEXCITON_LIFETIME.flag() + ", not both");
             }
-            return ModelCodec.read(modelFile).parameters();
+            return ModelCodec.read(modelFile).model();
         }
-        if (tauRad == null || tauAuger2 == null) {
-            throw new IllegalArgumentException("without a model file (or a plan for fit), --tau-rad and --tau-auger2 are required");
+        return ProcessRegistry.read(this::section, degeneracy, nMax == null ? 0 : nMax);
+    }
+
+    private Optional<ParameterSource> section(ProcessType<?> type) {
+        boolean on = type.required() || type.parameters().stream().anyMatch(p -> text(p) != null);
+        return on ? Optional.of(new Flags()) : Optional.empty();
+    }
+
+    private String text(ProcessParameter p) {
+        OptionSpec o = spec.findOption(p.flag());
+        return o == null ? null : o.getValue();
+    }
+
+    /** The flags as a parameter source; errors name the flag. */
+    private final class Flags implements ParameterSource {
+
+        @Override
+        public boolean has(ProcessParameter p) {
+            return text(p) != null;
         }
-        Set<Charge> cs = EnumSet.noneOf(Charge.class);
-        if (charges != null) {
-            for (String c : charges) {
-                cs.add(charge(c, "--charges"));
+
+        @Override
+        public double seconds(ProcessParameter p) {
+            String t = text(p);
+            double x = Quantity.parseSi(t, Dimension.TIME);
+            if (!(x > 0) || !Double.isFinite(x)) {
+                throw error(p, "must be > 0, was " + t);
             }
+            return x;
         }
-        AugerIonisation ion = ionisationProbability > 0
-                ? new AugerIonisation(ionisationProbability, charge(ionisationLeaves, "--ionisation-leaves"))
-                : AugerIonisation.NONE;
-        double negTrion = rateOf(tauTrionNegative, "--tau-trion-negative");
-        double posTrion = rateOf(tauTrionPositive, "--tau-trion-positive");
-        if (cs.contains(Charge.NEGATIVE) && negTrion == 0 || cs.contains(Charge.POSITIVE) && posTrion == 0) {
-            throw new IllegalArgumentException("charged dots need --tau-trion-negative / --tau-trion-positive for their charges");
+
+        @Override
+        public double number(ProcessParameter p) {
+            String t = text(p).trim();
+            double x;
+            try {
+                x = Double.parseDouble(t);
+            } catch (NumberFormatException e) {
+                throw error(p, "must be a number, was " + t);
+            }
+            if (!(x >= 0) || !Double.isFinite(x) || (p.kind() == ParameterKind.PROBABILITY && x > 1)) {
+                throw error(p, (p.kind() == ParameterKind.PROBABILITY ? "must be between 0 and 1" : "must be >= 0")
+                        + ", was " + t);
+            }
+            return x;
         }
-        ModelParameters p = new ModelParameters(rateOf(tauRad, "--tau-rad"), ModelParameters.radiativeScaling(radiativeScaling),
-                chargedRadiativeFactor >= 0 ? chargedRadiativeFactor : RadiativeDecay.DEFAULT_CHARGED_FACTOR,
-                rateOf(tauAuger2, "--tau-auger2"), ModelParameters.augerScaling(augerScaling), negTrion, posTrion,
-                rateOf(tauTrap, "--tau-trap"), rateOf(tauCool, "--tau-cool"), cs, ion,
-                rateOf(tauNeutralisation, "--tau-neutralisation"), rateOf(tauRefresh, "--tau-refresh"), degeneracy,
-                nMax == null ? 0 : nMax);
-        return p;
-    }
 
-    private static Charge charge(String text, String flag) {
-        return switch (text.trim()) {
-            case "negative" -> Charge.NEGATIVE;
-            case "positive" -> Charge.POSITIVE;
-            default -> throw new IllegalArgumentException(flag + " must be negative or positive, was " + text);
-        };
-    }
-
-    /** 1/lifetime, or 0 when the flag is absent. */
-    private static double rateOf(String lifetime, String flag) {
-        return lifetime == null ? 0 : 1 / positive(lifetime, Dimension.TIME, flag);
-    }
-
-    private static double positive(String text, Dimension d, String flag) {
-        double x = Quantity.parseSi(text, d);
-        if (!(x > 0) || !Double.isFinite(x)) {
-            throw new IllegalArgumentException(flag + " must be > 0, was " + text);
+        @Override
+        public String choice(ProcessParameter p) {
+            return word(p, text(p));
         }
-        return x;
+
+        @Override
+        public List<String> choices(ProcessParameter p) {
+            return Arrays.stream(text(p).split(",")).map(w -> word(p, w)).toList();
+        }
+
+        @Override
+        public ExcitonScaling scaling(ProcessParameter p, int firstN) {
+            String w = word(p, text(p));
+            return p == RadiativeProcess.SCALING ? RadiativeProcess.law(w) : AugerProcess.law(w);
+        }
+
+        @Override
+        public RuntimeException missing(ProcessParameter p) {
+            if (ProcessRegistry.owner(p).required()) {
+                return new IllegalArgumentException("without a model file (or a plan for fit), "
+                        + RadiativeProcess.LIFETIME.flag() + " and " + AugerProcess.BIEXCITON_LIFETIME.flag() + " are required");
+            }
+            return new IllegalArgumentException(p.flag() + " is needed with the other "
+                    + ProcessRegistry.owner(p).section() + " flags");
+        }
+
+        @Override
+        public RuntimeException error(ProcessParameter p, String problem) {
+            return new IllegalArgumentException((p == null ? "" : p.flag() + " ") + problem);
+        }
+
+        private String word(ProcessParameter p, String text) {
+            String w = text.trim();
+            if (!p.choices().contains(w)) {
+                throw error(p, "must be " + String.join(" or ", p.choices()) + ", was " + text);
+            }
+            return w;
+        }
     }
 }

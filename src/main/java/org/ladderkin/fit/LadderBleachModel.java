@@ -6,7 +6,10 @@ import java.util.function.Function;
 import org.hipparchus.special.Erf;
 import org.ladderkin.kinetics.KineticModel;
 import org.ladderkin.kinetics.LadderKinetics;
-import org.ladderkin.kinetics.ModelParameters;
+import org.ladderkin.kinetics.process.AugerProcess;
+import org.ladderkin.kinetics.process.LadderModel;
+import org.ladderkin.kinetics.process.ProcessParameter;
+import org.ladderkin.kinetics.process.ProcessRegistry;
 import org.ladderkin.kinetics.Populations;
 import org.ladderkin.kinetics.train.PulseExcitation;
 import org.ladderkin.kinetics.train.SteadyState;
@@ -41,13 +44,7 @@ public final class LadderBleachModel implements TraceModel {
     /** FWHM of the Gaussian instrument response (s). */
     public static final String IRF_FWHM = "irfFwhmS";
     /** Biexciton Auger lifetime τ₂ (s), read by {@link #forModel}. */
-    public static final String TAU_AUGER2 = "tauAuger2S";
-    /** Single-exciton radiative lifetime τ₁ (s), read by {@link #forModel}. */
-    public static final String TAU_RAD = "tauRadS";
-    /** Trapping lifetime per exciton (s), read by {@link #forModel}. */
-    public static final String TAU_TRAP = "tauTrapS";
-    /** Kinetic keys of {@link #forModel}. */
-    public static final List<String> LADDER_KEYS = List.of(TAU_AUGER2, TAU_RAD, TAU_TRAP);
+    public static final String TAU_AUGER2 = kineticKey(AugerProcess.BIEXCITON_LIFETIME);
 
     private static final double IRF_REACH = 50;
     /** Node of two-point Gauss–Legendre on [−1, 1] (weights 1). */
@@ -139,31 +136,42 @@ public final class LadderBleachModel implements TraceModel {
     }
 
     /**
-     * The ladder of {@code base} with τ₂, τ₁ and the trapping lifetime taken from the fit when it has them
-     * ({@link #TAU_AUGER2}, {@link #TAU_RAD}, {@link #TAU_TRAP}); every other process (Auger scaling law, charges,
-     * cooling, refresh) stays as in {@code base}.
+     * The ladder of {@code base} with every fittable process lifetime ({@link ProcessRegistry#fittable()}, keys
+     * {@link #kineticKey}) taken from the fit when it has it; a freed lifetime whose process {@code base} lacks adds
+     * that process. Every other process (scaling laws, charges, cooling, refresh) stays as in {@code base}.
      */
-    public static LadderBleachModel forModel(ModelParameters base, String scaleKey, double[] excitation, double periodS) {
+    public static LadderBleachModel forModel(LadderModel base, String scaleKey, double[] excitation, double periodS) {
         return forModel(base, scaleKey, excitation, periodS, null);
     }
 
-    /** As {@link #forModel(ModelParameters, String, double[], double)}, with a measured response (or null). */
-    public static LadderBleachModel forModel(ModelParameters base, String scaleKey, double[] excitation, double periodS,
+    /** As {@link #forModel(LadderModel, String, double[], double)}, with a measured response (or null). */
+    public static LadderBleachModel forModel(LadderModel base, String scaleKey, double[] excitation, double periodS,
                                              MeasuredIrf measuredIrf) {
-        return new LadderBleachModel(LADDER_KEYS, p -> base.withRates(
-                rate(p, TAU_RAD, base.radiativeRatePerS()),
-                rate(p, TAU_AUGER2, base.biexcitonAugerRatePerS()),
-                rate(p, TAU_TRAP, base.trappingRatePerS())).toModel(), scaleKey, excitation, periodS, measuredIrf);
+        List<ProcessParameter> fittable = ProcessRegistry.fittable();
+        List<String> keys = fittable.stream().map(LadderBleachModel::kineticKey).toList();
+        return new LadderBleachModel(keys, p -> {
+            LadderModel m = base;
+            for (ProcessParameter pp : fittable) {
+                int i = p.indexOf(kineticKey(pp));
+                if (i >= 0) {
+                    if (!m.has(pp)) {
+                        m = m.with(ProcessRegistry.owner(pp).startWhenFreed(m));
+                    }
+                    m = m.withSeconds(pp, p.value(i, 0));
+                }
+            }
+            return m.toModel();
+        }, scaleKey, excitation, periodS, measuredIrf);
+    }
+
+    /** The fit key of a fittable process lifetime, e.g. "tauAuger2S". */
+    public static String kineticKey(ProcessParameter p) {
+        return p.fitKey() + "S";
     }
 
     /** The measured instrument response the model convolves with, if any. */
     public java.util.Optional<MeasuredIrf> measuredIrf() {
         return java.util.Optional.ofNullable(measuredIrf);
-    }
-
-    private static double rate(ParameterValues p, String key, double fallback) {
-        int i = p.indexOf(key);
-        return i < 0 ? fallback : 1 / p.value(i, 0);
     }
 
     @Override

@@ -6,6 +6,9 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.ladderkin.fit.LadderFitSetup.LadderParameter;
+import org.ladderkin.kinetics.process.LadderModel;
+import org.ladderkin.kinetics.process.ProcessParameter;
+import org.ladderkin.kinetics.process.ProcessRegistry;
 import org.ladderkin.observe.MeasuredIrf;
 
 /**
@@ -147,16 +150,15 @@ public final class LadderFit {
         if (setup.sharedAmplitude()) {
             specs.add(ParameterSpec.positive("amplitude", "Od", 1e-3));
         }
-        var base = setup.base();
-        if (base.biexcitonAugerRatePerS() > 0) {
-            specs.add(spec(setup, LadderParameter.TAU_AUGER2, ParameterSpec.positive("tauAuger2", "S", 1 / base.biexcitonAugerRatePerS())));
-        }
-        if (base.radiativeRatePerS() > 0) {
-            specs.add(spec(setup, LadderParameter.TAU_RAD, ParameterSpec.positive("tauRad", "S", 1 / base.radiativeRatePerS())));
-        }
-        if (base.trappingRatePerS() > 0 || setup.free().contains(LadderParameter.TAU_TRAP)) {
-            double start = base.trappingRatePerS() > 0 ? 1 / base.trappingRatePerS() : LadderFitSetup.DEFAULT_TRAP_START_S;
-            specs.add(spec(setup, LadderParameter.TAU_TRAP, ParameterSpec.positive("tauTrap", "S", start)));
+        LadderModel base = setup.base();
+        for (ProcessParameter p : ProcessRegistry.fittable()) {
+            LadderParameter which = LadderParameter.of(p);
+            if (base.has(p)) {
+                specs.add(spec(setup, which, ParameterSpec.positive(p.fitKey(), "S", base.seconds(p))));
+            } else if (setup.free().contains(which)) {
+                double start = ProcessRegistry.owner(p).startWhenFreed(base).seconds(p);
+                specs.add(spec(setup, which, ParameterSpec.positive(p.fitKey(), "S", start)));
+            }
         }
         if (setup.timeZeroStartS() != 0 || setup.free().contains(LadderParameter.TIME_ZERO)) {
             specs.add(spec(setup, LadderParameter.TIME_ZERO, ParameterSpec.unbounded("timeZero", "S", setup.timeZeroStartS(), 1e-12)));

@@ -1,16 +1,22 @@
 package org.ladderkin.fit;
 
-import java.util.EnumSet;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Objects;
 import java.util.Set;
-import org.ladderkin.kinetics.ModelParameters;
+import org.ladderkin.kinetics.process.AugerProcess;
+import org.ladderkin.kinetics.process.LadderModel;
+import org.ladderkin.kinetics.process.ProcessParameter;
+import org.ladderkin.kinetics.process.ProcessRegistry;
+import org.ladderkin.kinetics.process.RadiativeProcess;
+import org.ladderkin.kinetics.process.TrappingProcess;
 import org.ladderkin.observe.MeasuredIrf;
 
 /**
  * How to fit a fluence series with the ladder model: the model to start from, which shared parameters are free, and
  * the starts of those the model file does not hold.
  *
- * @param base           the ladder (rate laws, scaling law, charges …); its τ₂, τ_rad and trapping are the starts
+ * @param base           the ladder (processes, scaling laws, charges …); its fittable lifetimes are the starts
  * @param periodS        pulse period (s), or NaN for one pulse on fresh dots
  * @param free           shared parameters fitted; the others are held at their starts
  * @param scaleStart     start of the excitation scale (σ in m², ⟨N⟩ per J, or a factor), or NaN to try a few
@@ -21,16 +27,13 @@ import org.ladderkin.observe.MeasuredIrf;
  * @param measuredIrf    a measured instrument response to convolve with instead of a Gaussian (its width is then
  *                       fixed, its centroid at time zero), or null
  */
-public record LadderFitSetup(ModelParameters base, double periodS, Set<LadderParameter> free, double scaleStart,
+public record LadderFitSetup(LadderModel base, double periodS, Set<LadderParameter> free, double scaleStart,
                              double timeZeroStartS, double irfFwhmS, boolean sharedAmplitude, boolean profile,
                              MeasuredIrf measuredIrf) {
 
-    /** Trapping lifetime tried when trapping is freed but the model has none (s). */
-    public static final double DEFAULT_TRAP_START_S = 1e-9;
-
     public LadderFitSetup {
         Objects.requireNonNull(base, "base");
-        free = free.isEmpty() ? Set.of() : Set.copyOf(EnumSet.copyOf(free));
+        free = Set.copyOf(free);
         if (!Double.isNaN(scaleStart) && !(scaleStart > 0 && Double.isFinite(scaleStart))) {
             throw new IllegalArgumentException("excitation scale start must be finite and > 0, was " + scaleStart);
         }
@@ -51,44 +54,63 @@ public record LadderFitSetup(ModelParameters base, double periodS, Set<LadderPar
         if (free.contains(LadderParameter.IRF) && Double.isNaN(irfFwhmS)) {
             throw new IllegalArgumentException("fitting the IRF width needs a start value for it");
         }
-        if (free.contains(LadderParameter.TAU_AUGER2) && !(base.biexcitonAugerRatePerS() > 0)) {
-            throw new IllegalArgumentException("fitting τ₂ needs a model with biexciton Auger decay switched on");
-        }
-        if (free.contains(LadderParameter.TAU_RAD) && !(base.radiativeRatePerS() > 0)) {
-            throw new IllegalArgumentException("fitting τ_rad needs a model with radiative decay switched on");
+        for (LadderParameter p : free) {
+            ProcessParameter pp = p.process();
+            if (pp != null && !base.has(pp) && ProcessRegistry.owner(pp).startWhenFreed(base) == null) {
+                throw new IllegalArgumentException("fitting " + p.key() + " needs a model with the '"
+                        + ProcessRegistry.owner(pp).section() + "' process switched on");
+            }
         }
     }
 
     /** A set-up with no measured IRF (a Gaussian of {@code irfFwhmS}, or none when it is NaN). */
-    public LadderFitSetup(ModelParameters base, double periodS, Set<LadderParameter> free, double scaleStart,
+    public LadderFitSetup(LadderModel base, double periodS, Set<LadderParameter> free, double scaleStart,
                           double timeZeroStartS, double irfFwhmS, boolean sharedAmplitude, boolean profile) {
         this(base, periodS, free, scaleStart, timeZeroStartS, irfFwhmS, sharedAmplitude, profile, null);
     }
 
-    /** The shared parameters a ladder fit can free. */
-    public enum LadderParameter {
+    /**
+     * A shared parameter a ladder fit can free: the excitation scale, time zero, the Gaussian IRF width, or a fittable
+     * lifetime of a process in {@link ProcessRegistry} (whose user name, e.g. "tau-auger2", comes from the registry).
+     *
+     * @param key     the name users write, e.g. "tau-auger2"
+     * @param process the process parameter, or null for scale, time zero and IRF
+     */
+    public record LadderParameter(String key, ProcessParameter process) {
+
         /** σ, ⟨N⟩ per joule or a factor on the given ⟨N⟩. */
-        SCALE("scale"),
-        /** Biexciton Auger lifetime; higher Auger rates follow the model's scaling law. */
-        TAU_AUGER2("tau-auger2"),
-        /** Single-exciton radiative lifetime. */
-        TAU_RAD("tau-rad"),
-        /** Trapping lifetime per exciton. */
-        TAU_TRAP("tau-trap"),
+        public static final LadderParameter SCALE = new LadderParameter("scale", null);
         /** Time zero. */
-        TIME_ZERO("time-zero"),
+        public static final LadderParameter TIME_ZERO = new LadderParameter("time-zero", null);
         /** Gaussian IRF FWHM (never with a measured IRF). */
-        IRF("irf");
+        public static final LadderParameter IRF = new LadderParameter("irf", null);
+        /** Biexciton Auger lifetime; higher Auger rates follow the model's scaling law. */
+        public static final LadderParameter TAU_AUGER2 = of(AugerProcess.BIEXCITON_LIFETIME);
+        /** Single-exciton radiative lifetime. */
+        public static final LadderParameter TAU_RAD = of(RadiativeProcess.LIFETIME);
+        /** Trapping lifetime per exciton. */
+        public static final LadderParameter TAU_TRAP = of(TrappingProcess.LIFETIME);
 
-        private final String key;
-
-        LadderParameter(String key) {
-            this.key = key;
+        public LadderParameter {
+            Objects.requireNonNull(key, "key");
+            if (process != null && !process.fittable()) {
+                throw new IllegalArgumentException(process.key() + " cannot be fitted");
+            }
         }
 
-        /** The name users write, e.g. "tau-auger2". */
-        public String key() {
-            return key;
+        /** The fit parameter of a fittable process lifetime. */
+        public static LadderParameter of(ProcessParameter p) {
+            return new LadderParameter(p.fitName(), p);
+        }
+
+        /** Every parameter a ladder fit can free, in the order results list them. */
+        public static List<LadderParameter> values() {
+            List<LadderParameter> all = new ArrayList<>();
+            all.add(SCALE);
+            ProcessRegistry.fittable().forEach(p -> all.add(of(p)));
+            all.add(TIME_ZERO);
+            all.add(IRF);
+            return List.copyOf(all);
         }
 
         /** By user name. */
@@ -98,8 +120,20 @@ public record LadderFitSetup(ModelParameters base, double periodS, Set<LadderPar
                     return p;
                 }
             }
-            throw new IllegalArgumentException("'" + name.trim() + "' is not a ladder fit parameter (one of: scale, tau-auger2, "
-                    + "tau-rad, tau-trap, time-zero, irf)");
+            throw new IllegalArgumentException("'" + name.trim() + "' is not a ladder fit parameter (one of: "
+                    + String.join(", ", values().stream().map(LadderParameter::key).toList()) + ")");
+        }
+
+        /** What a person reads, e.g. "Biexciton Auger lifetime τ₂". */
+        public String label() {
+            if (process != null) {
+                return process.label();
+            }
+            return switch (key) {
+                case "scale" -> "scale (σ, ⟨N⟩ per J or factor)";
+                case "time-zero" -> "time zero";
+                default -> "IRF FWHM";
+            };
         }
     }
 }

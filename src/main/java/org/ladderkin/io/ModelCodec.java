@@ -1,24 +1,29 @@
 package org.ladderkin.io;
 
 import java.nio.file.Path;
-import java.util.EnumSet;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
-import java.util.Set;
+import java.util.Optional;
 import org.ladderkin.io.json.JsonTree;
 import org.ladderkin.io.json.Node;
-import org.ladderkin.kinetics.ModelParameters;
-import org.ladderkin.kinetics.rate.AugerIonisation;
+import org.ladderkin.kinetics.process.AugerProcess;
+import org.ladderkin.kinetics.process.LadderModel;
+import org.ladderkin.kinetics.process.ParameterKind;
+import org.ladderkin.kinetics.process.ParameterSource;
+import org.ladderkin.kinetics.process.ProcessParameter;
+import org.ladderkin.kinetics.process.ProcessRegistry;
+import org.ladderkin.kinetics.process.ProcessType;
+import org.ladderkin.kinetics.process.RadiativeProcess;
 import org.ladderkin.kinetics.rate.ExcitonScaling;
-import org.ladderkin.kinetics.rate.RadiativeDecay;
 import org.ladderkin.kinetics.rate.TableScaling;
-import org.ladderkin.kinetics.state.Charge;
 import org.ladderkin.units.Dimension;
 
 /**
- * Reads kinetic model files, schema {@code ladderkin.model/1}. Lifetimes are written with units ("20 ns"); a process
- * is off when its section is absent. An optional {@code sources} object maps a field path to where its value comes
- * from (a paper, "from memory", ...). Example:
+ * Reads kinetic model files, schema {@code ladderkin.model/1}. Each process of {@link ProcessRegistry} has its own
+ * section, named and filled as the registry declares; a process is off when its section is absent. Lifetimes are
+ * written with units ("20 ns"). An optional {@code sources} object maps a field path to where its value comes from
+ * (a paper, "from memory", ...). Example:
  * <pre>
  * { "schema": "ladderkin.model/1", "name": "CdSe 4 nm",
  *   "radiative": { "lifetime": "20 ns", "scaling": "statistical" },
@@ -34,7 +39,7 @@ public final class ModelCodec {
     public static final int VERSION = 1;
 
     /** A model read from a file, with its name and the sources of its values. */
-    public record ModelFile(String name, ModelParameters parameters, Map<String, String> sources) {
+    public record ModelFile(String name, LadderModel model, Map<String, String> sources) {
     }
 
     private ModelCodec() {
@@ -47,57 +52,6 @@ public final class ModelCodec {
     public static ModelFile read(Node root) {
         root.schema(SCHEMA, VERSION);
         String name = root.field("name").string();
-        Node rad = root.field("radiative");
-        double radRate = 1 / rad.field("lifetime").positive(Dimension.TIME, null);
-        ExcitonScaling radScaling = scaling(rad.field("scaling"), true);
-        double chargedFactor = rad.optional("chargedFactor").map(n -> nonNegativeNumber(n))
-                .orElse(RadiativeDecay.DEFAULT_CHARGED_FACTOR);
-        rad.finish();
-        Node auger = root.field("auger");
-        double augerRate = 1 / auger.field("biexcitonLifetime").positive(Dimension.TIME, null);
-        ExcitonScaling augerScaling = scaling(auger.field("scaling"), false);
-        double negTrion = auger.optional("negativeTrionLifetime").map(n -> 1 / n.positive(Dimension.TIME, null)).orElse(0.0);
-        double posTrion = auger.optional("positiveTrionLifetime").map(n -> 1 / n.positive(Dimension.TIME, null)).orElse(0.0);
-        auger.finish();
-        double trap = root.optional("trapping").map(n -> {
-            double k = 1 / n.field("lifetimePerExciton").positive(Dimension.TIME, null);
-            n.finish();
-            return k;
-        }).orElse(0.0);
-        double cool = root.optional("cooling").map(n -> {
-            double k = 1 / n.field("lifetime").positive(Dimension.TIME, null);
-            n.finish();
-            return k;
-        }).orElse(0.0);
-        Set<Charge> charges = EnumSet.noneOf(Charge.class);
-        AugerIonisation ionisation = AugerIonisation.NONE;
-        double neut = 0;
-        if (root.has("charging")) {
-            Node ch = root.field("charging");
-            for (Node c : ch.field("charges").items(1)) {
-                charges.add(c.choice("negative", "positive").equals("negative") ? Charge.NEGATIVE : Charge.POSITIVE);
-            }
-            double p = ch.field("ionisationProbability").probability();
-            Node leaves = ch.field("ionisationLeaves");
-            Charge left = leaves.choice("negative", "positive").equals("negative") ? Charge.NEGATIVE : Charge.POSITIVE;
-            if (!charges.contains(left)) {
-                throw leaves.error("ionisation leaves " + leaves.string() + " dots but 'charges' does not list them");
-            }
-            ionisation = new AugerIonisation(p, left);
-            neut = 1 / ch.field("neutralisationTime").positive(Dimension.TIME, null);
-            if (charges.contains(Charge.NEGATIVE) && negTrion == 0) {
-                throw auger.error("negative dots need 'negativeTrionLifetime' in 'auger'");
-            }
-            if (charges.contains(Charge.POSITIVE) && posTrion == 0) {
-                throw auger.error("positive dots need 'positiveTrionLifetime' in 'auger'");
-            }
-            ch.finish();
-        }
-        double refresh = root.optional("refresh").map(n -> {
-            double k = 1 / n.field("exchangeTime").positive(Dimension.TIME, null);
-            n.finish();
-            return k;
-        }).orElse(0.0);
         int g = root.field("bandEdgeDegeneracy").integer(1, 1000);
         int nMax = root.optional("nMax").map(n -> n.integer(1, 400)).orElse(0);
         Map<String, String> sources = new LinkedHashMap<>();
@@ -107,36 +61,101 @@ public final class ModelCodec {
             }
             s.finish();
         });
-        root.finish();
+        LadderModel model;
         try {
-            ModelParameters params = new ModelParameters(radRate, radScaling, chargedFactor, augerRate, augerScaling,
-                    negTrion, posTrion, trap, cool, charges, ionisation, neut, refresh, g, nMax);
-            return new ModelFile(name, params, Map.copyOf(sources));
+            model = ProcessRegistry.read(t -> section(root, t), g, nMax);
         } catch (IllegalArgumentException e) {
             throw root.error(e.getMessage());
         }
+        root.finish();
+        return new ModelFile(name, model, Map.copyOf(sources));
     }
 
-    private static double nonNegativeNumber(Node n) {
-        double x = n.number();
-        if (x < 0) {
-            throw n.error("must be >= 0, was " + x);
+    private static Optional<ParameterSource> section(Node root, ProcessType<?> type) {
+        if (!type.required() && !root.has(type.section())) {
+            return Optional.empty();
         }
-        return x;
+        Node section = root.field(type.section());
+        return Optional.of(new SectionSource(section));
     }
 
-    /** "linear" | "statistical" | "pairs" | "quadratic", or {"table": [...]} (from N = 1 radiative, N = 2 Auger). */
-    private static ExcitonScaling scaling(Node n, boolean radiative) {
-        if (n.kind() == Node.Kind.OBJECT) {
-            double[] f = n.field("table").items(1).stream().mapToDouble(Node::number).toArray();
-            n.finish();
-            try {
-                return new TableScaling(radiative ? 1 : 2, f);
-            } catch (IllegalArgumentException e) {
-                throw n.error(e.getMessage());
+    /** One process's section; once the process has read what it knows, unknown fields are rejected. */
+    private static final class SectionSource implements ParameterSource {
+        private final Node section;
+
+        SectionSource(Node section) {
+            this.section = section;
+        }
+
+        private Node at(ProcessParameter p) {
+            return section.field(p.key());
+        }
+
+        @Override
+        public void done() {
+            section.finish();
+        }
+
+        @Override
+        public boolean has(ProcessParameter p) {
+            return section.has(p.key());
+        }
+
+        @Override
+        public double seconds(ProcessParameter p) {
+            return at(p).positive(Dimension.TIME, null);
+        }
+
+        @Override
+        public double number(ProcessParameter p) {
+            Node n = at(p);
+            if (p.kind() == ParameterKind.PROBABILITY) {
+                return n.probability();
             }
+            double x = n.number();
+            if (x < 0) {
+                throw n.error("must be >= 0, was " + x);
+            }
+            return x;
         }
-        String key = radiative ? n.choice("linear", "statistical") : n.choice("statistical", "pairs", "quadratic");
-        return radiative ? ModelParameters.radiativeScaling(key) : ModelParameters.augerScaling(key);
+
+        @Override
+        public String choice(ProcessParameter p) {
+            return at(p).choice(p.choices().toArray(String[]::new));
+        }
+
+        @Override
+        public List<String> choices(ProcessParameter p) {
+            String[] allowed = p.choices().toArray(String[]::new);
+            return at(p).items(1).stream().map(n -> n.choice(allowed)).toList();
+        }
+
+        /** A law by name, or {"table": [...]} starting at N = {@code firstN}. */
+        @Override
+        public ExcitonScaling scaling(ProcessParameter p, int firstN) {
+            Node n = at(p);
+            if (n.kind() == Node.Kind.OBJECT) {
+                double[] f = n.field("table").items(1).stream().mapToDouble(Node::number).toArray();
+                n.finish();
+                try {
+                    return new TableScaling(firstN, f);
+                } catch (IllegalArgumentException e) {
+                    throw n.error(e.getMessage());
+                }
+            }
+            String key = n.choice(p.choices().toArray(String[]::new));
+            return p == RadiativeProcess.SCALING ? RadiativeProcess.law(key) : AugerProcess.law(key);
+        }
+
+        @Override
+        public RuntimeException missing(ProcessParameter p) {
+            section.field(p.key()); // throws the reader's own located "missing field" error
+            throw new IllegalStateException("'" + p.key() + "' was reported missing but is present");
+        }
+
+        @Override
+        public RuntimeException error(ProcessParameter p, String problem) {
+            return p == null || !section.has(p.key()) ? section.error(problem) : section.field(p.key()).error(problem);
+        }
     }
 }

@@ -11,6 +11,14 @@ import org.ladderkin.plan.Goal;
 import org.ladderkin.plan.Instrument;
 import org.ladderkin.plan.LaserSetup;
 import org.ladderkin.plan.Limits;
+import org.ladderkin.kinetics.process.ParameterKind;
+import org.ladderkin.kinetics.process.ParameterReader;
+import org.ladderkin.kinetics.process.ParameterSource;
+import org.ladderkin.kinetics.process.ProcessParameter;
+import org.ladderkin.kinetics.process.ProcessRegistry;
+import org.ladderkin.kinetics.process.ProcessSpec;
+import org.ladderkin.kinetics.process.ProcessType;
+import org.ladderkin.kinetics.rate.ExcitonScaling;
 import org.ladderkin.plan.ModelAssumptions;
 import org.ladderkin.kinetics.rate.AugerScaling;
 import org.ladderkin.kinetics.rate.RadiativeScaling;
@@ -216,8 +224,63 @@ public final class PlanCodec {
         double ion = n.optional("ionisationProbability").map(Node::probability).orElse(Double.NaN);
         double neut = optionalTime(n, "photochargeLifetime");
         double cooling = optionalTime(n, "coolingTime");
+        List<ProcessSpec> processes = new ArrayList<>();
+        for (ProcessType<?> t : ProcessRegistry.types()) {
+            if (t.parameters().stream().anyMatch(p -> p.planKey() != null && n.has(p.planKey()))) {
+                processes.add(t.read(new ParameterReader(new PlanModelSource(n))));
+            }
+        }
         n.finish();
-        return new ModelAssumptions.Overrides(tau1, qy, tau2, auger, rad, trionNeg, trionPos, ion, neut, cooling);
+        return new ModelAssumptions.Overrides(tau1, qy, tau2, auger, rad, trionNeg, trionPos, ion, neut, cooling, processes);
+    }
+
+    /**
+     * A plan's model section as the source of a registry process: only parameters with a plan key can be given there;
+     * the others take their defaults.
+     */
+    private record PlanModelSource(Node section) implements ParameterSource {
+        @Override
+        public boolean has(ProcessParameter p) {
+            return p.planKey() != null && section.has(p.planKey());
+        }
+
+        @Override
+        public double seconds(ProcessParameter p) {
+            return section.field(p.planKey()).positive(Dimension.TIME, null);
+        }
+
+        @Override
+        public double number(ProcessParameter p) {
+            Node v = section.field(p.planKey());
+            return p.kind() == ParameterKind.PROBABILITY ? v.probability() : v.number();
+        }
+
+        @Override
+        public String choice(ProcessParameter p) {
+            return section.field(p.planKey()).choice(p.choices().toArray(String[]::new));
+        }
+
+        @Override
+        public List<String> choices(ProcessParameter p) {
+            return section.field(p.planKey()).items(1).stream().map(v -> v.choice(p.choices().toArray(String[]::new))).toList();
+        }
+
+        @Override
+        public ExcitonScaling scaling(ProcessParameter p, int firstN) {
+            throw error(p, "a scaling law is set by the plan's own fields");
+        }
+
+        @Override
+        public RuntimeException missing(ProcessParameter p) {
+            return section.error("'" + (p.planKey() != null ? p.planKey() : p.key()) + "' is needed with the other "
+                    + ProcessRegistry.owner(p).section() + " values");
+        }
+
+        @Override
+        public RuntimeException error(ProcessParameter p, String problem) {
+            return p != null && p.planKey() != null && section.has(p.planKey()) ? section.field(p.planKey()).error(problem)
+                    : section.error(problem);
+        }
     }
 
     private static double optionalTime(Node n, String field) {

@@ -1,5 +1,7 @@
 package org.ladderkin.kinetics;
 
+import org.ladderkin.kinetics.process.CoolingProcess;
+import org.ladderkin.kinetics.process.LadderModel;
 import org.ladderkin.kinetics.rate.AugerScaling;
 import org.ladderkin.kinetics.rate.RadiativeScaling;
 import org.ladderkin.kinetics.train.PulseExcitation;
@@ -22,17 +24,14 @@ public final class BenchCases {
 
     /** The 31-state benchmark model. */
     public static KineticModel ladder31() {
-        return ModelParameters.simple(1 / 20e-9, RadiativeScaling.STATISTICAL, 1 / 50e-12, AugerScaling.STATISTICAL, 2)
+        return LadderModel.radiativeAndAuger(20e-9, RadiativeScaling.STATISTICAL, 50e-12, AugerScaling.STATISTICAL, 2)
                 .toModel().withFixedNMax(30);
     }
 
     /** The benchmark model with hot excitons cooling in 0.5 ps, Nmax = 20 (231 states). */
     public static KineticModel cooling21() {
-        ModelParameters s = ModelParameters.simple(1 / 20e-9, RadiativeScaling.STATISTICAL, 1 / 50e-12,
-                AugerScaling.STATISTICAL, 2);
-        return new ModelParameters(s.radiativeRatePerS(), s.radiativeScaling(), s.chargedRadiativeFactor(),
-                s.biexcitonAugerRatePerS(), s.augerScaling(), 0, 0, 0, 1 / 0.5e-12, s.charges(), s.ionisation(), 0, 0,
-                2, 20).toModel();
+        return LadderModel.radiativeAndAuger(20e-9, RadiativeScaling.STATISTICAL, 50e-12, AugerScaling.STATISTICAL, 2)
+                .with(new CoolingProcess(0.5e-12)).withNMax(20).toModel();
     }
 
     /** Case 1 and 4: build the engine for a model and compute one trace after one pulse of ⟨N⟩ = 3. */

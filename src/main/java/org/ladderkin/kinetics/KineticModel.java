@@ -47,6 +47,16 @@ public record KineticModel(List<RateLaw> processes, Set<Charge> charges, boolean
         return processes.stream().filter(Emitting.class::isInstance).map(Emitting.class::cast).toList();
     }
 
+    /**
+     * A copy in which every law of class {@code type} is replaced by {@code change} applied to it (e.g. the Auger law
+     * of a smaller dot of a size ensemble: {@code a -> a.scaled(f)}).
+     */
+    public <L extends RateLaw> KineticModel withLaws(Class<L> type, java.util.function.UnaryOperator<L> change) {
+        List<RateLaw> next = processes.stream()
+                .map(l -> type.isInstance(l) ? (RateLaw) change.apply(type.cast(l)) : l).toList();
+        return new KineticModel(next, charges, hotResolved, degeneracy, fixedNMax);
+    }
+
     /** A copy with a different Nmax setting. */
     public KineticModel withFixedNMax(int nMax) {
         return new KineticModel(processes, charges, hotResolved, degeneracy, nMax);

@@ -1,17 +1,18 @@
 package org.ladderkin.plan;
 
 import java.util.ArrayList;
-import java.util.EnumSet;
 import java.util.List;
-import java.util.Set;
 import org.ladderkin.kinetics.KineticModel;
+import org.ladderkin.kinetics.process.LadderBuilder;
+import org.ladderkin.kinetics.process.ProcessParameter;
+import org.ladderkin.kinetics.process.ProcessRegistry;
+import org.ladderkin.kinetics.process.ProcessSpec;
 import org.ladderkin.kinetics.rate.AugerIonisation;
 import org.ladderkin.kinetics.rate.AugerRecombination;
 import org.ladderkin.kinetics.rate.AugerScaling;
 import org.ladderkin.kinetics.rate.Neutralisation;
 import org.ladderkin.kinetics.rate.RadiativeDecay;
 import org.ladderkin.kinetics.rate.RadiativeScaling;
-import org.ladderkin.kinetics.rate.RateLaw;
 import org.ladderkin.kinetics.rate.SampleRefresh;
 import org.ladderkin.kinetics.rate.Trapping;
 import org.ladderkin.kinetics.state.Charge;
@@ -34,11 +35,13 @@ import org.ladderkin.sample.Sample;
  * @param refreshS               time in which stirring or flow replaces the excited volume (s), +∞ for a static sample
  * @param coolingS               intraband cooling time (s), used for delay windows
  * @param bases                  one line per value saying where it comes from
+ * @param processes              further processes the plan sets through {@link ProcessRegistry#planParameters()}
+ *                               (e.g. a measured triexciton lifetime), added after the plan's own ladder
  */
 public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, double tauBiexcitonS,
                                AugerScaling augerScaling, RadiativeScaling radiativeScaling, double tauTrionNegativeS,
                                double tauTrionPositiveS, double ionisationProbability, double neutralisationS,
-                               double refreshS, double coolingS, List<String> bases) {
+                               double refreshS, double coolingS, List<String> bases, List<ProcessSpec> processes) {
 
     /** Default PL quantum yield of the single exciton (from memory: typical of good colloidal dots). */
     public static final double DEFAULT_QUANTUM_YIELD = 0.5;
@@ -53,6 +56,7 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
 
     public ModelAssumptions {
         bases = List.copyOf(bases);
+        processes = List.copyOf(processes);
         for (double t : new double[] {tauSingleExcitonS, tauBiexcitonS, tauTrionNegativeS, tauTrionPositiveS,
             neutralisationS, coolingS}) {
             if (!(t > 0)) {
@@ -67,15 +71,30 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
         }
     }
 
+    /** Assumptions with no further registry processes. */
+    public ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, double tauBiexcitonS,
+                            AugerScaling augerScaling, RadiativeScaling radiativeScaling, double tauTrionNegativeS,
+                            double tauTrionPositiveS, double ionisationProbability, double neutralisationS,
+                            double refreshS, double coolingS, List<String> bases) {
+        this(tauSingleExcitonS, plQuantumYield, tauBiexcitonS, augerScaling, radiativeScaling, tauTrionNegativeS,
+                tauTrionPositiveS, ionisationProbability, neutralisationS, refreshS, coolingS, bases, List.of());
+    }
+
     /**
-     * Values overridden by the plan; NaN or null means "derive from the material".
+     * Values overridden by the plan; NaN or null means "derive from the material". {@code processes} are further
+     * registry processes the plan switches on.
      */
     public record Overrides(double tauSingleExcitonS, double plQuantumYield, double tauBiexcitonS, AugerScaling augerScaling,
                             RadiativeScaling radiativeScaling, double tauTrionNegativeS, double tauTrionPositiveS,
-                            double ionisationProbability, double neutralisationS, double coolingS) {
+                            double ionisationProbability, double neutralisationS, double coolingS,
+                            List<ProcessSpec> processes) {
         /** Nothing overridden. */
         public static final Overrides NONE = new Overrides(Double.NaN, Double.NaN, Double.NaN, null, null, Double.NaN,
-                Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+                Double.NaN, Double.NaN, Double.NaN, Double.NaN, List.of());
+
+        public Overrides {
+            processes = List.copyOf(processes);
+        }
     }
 
     /** The model for a sample: material values scaled to its size, then the plan's overrides. */
@@ -130,12 +149,20 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
             case STIRRED -> "stirred, excited volume renewed in ~0.1 s (common practice, no source)";
             case FLOWING -> "flowing, cell volume / flow rate";
         });
-        return new ModelAssumptions(tau1, qy, tau2, auger, rad, trionNeg, trionPos, pIon, neut, refreshS, cooling, bases);
+        for (ProcessSpec p : o.processes()) {
+            for (ProcessParameter pp : p.type().parameters()) {
+                if (pp.planKey() != null) {
+                    bases.add(pp.label() + ": plan");
+                }
+            }
+        }
+        return new ModelAssumptions(tau1, qy, tau2, auger, rad, trionNeg, trionPos, pIon, neut, refreshS, cooling, bases,
+                o.processes());
     }
 
     /** The ladder model: neutral and negative dots, no hot-exciton resolution (instantaneous cooling). */
     public KineticModel kineticModel(int degeneracy) {
-        List<RateLaw> laws = new ArrayList<>();
+        LadderBuilder laws = new LadderBuilder();
         laws.add(new RadiativeDecay(plQuantumYield / tauSingleExcitonS, radiativeScaling, RadiativeDecay.DEFAULT_CHARGED_FACTOR));
         if (plQuantumYield < 1) {
             laws.add(new Trapping((1 - plQuantumYield) / tauSingleExcitonS));
@@ -146,26 +173,31 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
         if (Double.isFinite(refreshS)) {
             laws.add(new SampleRefresh(1 / refreshS));
         }
-        Set<Charge> charges = ionisationProbability > 0 ? EnumSet.of(Charge.NEUTRAL, Charge.NEGATIVE) : EnumSet.of(Charge.NEUTRAL);
-        return new KineticModel(laws, charges, false, degeneracy, 0);
+        if (ionisationProbability > 0) {
+            laws.allowCharge(Charge.NEGATIVE);
+        }
+        for (ProcessSpec p : processes) {
+            p.addTo(laws);
+        }
+        return laws.build(degeneracy, 0);
     }
 
     /** A copy with the biexciton lifetime changed (the instance is not changed). */
     public ModelAssumptions withTauBiexcitonS(double tau) {
         return new ModelAssumptions(tauSingleExcitonS, plQuantumYield, tau, augerScaling, radiativeScaling, tauTrionNegativeS,
-                tauTrionPositiveS, ionisationProbability, neutralisationS, refreshS, coolingS, bases);
+                tauTrionPositiveS, ionisationProbability, neutralisationS, refreshS, coolingS, bases, processes);
     }
 
     /** A copy with the single-exciton lifetime changed (the instance is not changed). */
     public ModelAssumptions withTauSingleExcitonS(double tau) {
         return new ModelAssumptions(tau, plQuantumYield, tauBiexcitonS, augerScaling, radiativeScaling, tauTrionNegativeS,
-                tauTrionPositiveS, ionisationProbability, neutralisationS, refreshS, coolingS, bases);
+                tauTrionPositiveS, ionisationProbability, neutralisationS, refreshS, coolingS, bases, processes);
     }
 
     /** A copy with a different refresh time (the instance is not changed). */
     public ModelAssumptions withRefreshS(double refresh) {
         return new ModelAssumptions(tauSingleExcitonS, plQuantumYield, tauBiexcitonS, augerScaling, radiativeScaling,
-                tauTrionNegativeS, tauTrionPositiveS, ionisationProbability, neutralisationS, refresh, coolingS, bases);
+                tauTrionNegativeS, tauTrionPositiveS, ionisationProbability, neutralisationS, refresh, coolingS, bases, processes);
     }
 
     private static double pick(double override, double derived, String what, String overrideBasis, String derivedBasis,

@@ -1,9 +1,16 @@
 package org.ladderkin.plan;
 
-import java.util.EnumSet;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Objects;
 import java.util.Set;
-import org.ladderkin.kinetics.ModelParameters;
+import org.ladderkin.kinetics.process.AugerProcess;
+import org.ladderkin.kinetics.process.ChargingProcess;
+import org.ladderkin.kinetics.process.LadderModel;
+import org.ladderkin.kinetics.process.ProcessSpec;
+import org.ladderkin.kinetics.process.RadiativeProcess;
+import org.ladderkin.kinetics.process.RefreshProcess;
+import org.ladderkin.kinetics.process.TrappingProcess;
 import org.ladderkin.kinetics.rate.AugerIonisation;
 import org.ladderkin.kinetics.rate.RadiativeDecay;
 import org.ladderkin.kinetics.state.Charge;
@@ -14,7 +21,7 @@ import org.ladderkin.kinetics.state.Charge;
  * (σ at that wavelength; probe-averaged ⟨N⟩ per joule of pulse energy), so that "before a fit" the traces are drawn
  * over the plan's own prediction.
  *
- * @param base                the plan's ladder as {@link ModelParameters}, the same rate laws as
+ * @param base                the plan's ladder as a {@link LadderModel}, the same rate laws as
  *                            {@link ModelAssumptions#kineticModel(int)}
  * @param model               the plan's model values (τ₁, QY, τ₂ …)
  * @param repetitionRateHz    the plan's chosen repetition rate (Hz)
@@ -22,7 +29,7 @@ import org.ladderkin.kinetics.state.Charge;
  * @param crossSectionM2      σ at that wavelength (m²)
  * @param occupancyPerJ       probe-averaged ⟨N⟩ per joule of pulse energy at that wavelength and rate
  */
-public record PlanFitBasis(ModelParameters base, ModelAssumptions model, double repetitionRateHz, double pumpWavelengthM,
+public record PlanFitBasis(LadderModel base, ModelAssumptions model, double repetitionRateHz, double pumpWavelengthM,
                            double crossSectionM2, double occupancyPerJ) {
 
     public PlanFitBasis {
@@ -54,13 +61,22 @@ public record PlanFitBasis(ModelParameters base, ModelAssumptions model, double 
      * into a radiative rate QY/τ₁ and a trapping rate (1 − QY)/τ₁; hot excitons are not resolved (the plan's model
      * cools instantly).
      */
-    static ModelParameters parameters(ModelAssumptions m, int degeneracy) {
-        boolean charged = m.ionisationProbability() > 0;
-        Set<Charge> charges = charged ? EnumSet.of(Charge.NEGATIVE) : Set.of();
-        return new ModelParameters(m.plQuantumYield() / m.tauSingleExcitonS(), m.radiativeScaling(),
-                RadiativeDecay.DEFAULT_CHARGED_FACTOR, 1 / m.tauBiexcitonS(), m.augerScaling(), 1 / m.tauTrionNegativeS(),
-                1 / m.tauTrionPositiveS(), (1 - m.plQuantumYield()) / m.tauSingleExcitonS(), 0, charges,
-                charged ? new AugerIonisation(m.ionisationProbability(), Charge.NEGATIVE) : AugerIonisation.NONE,
-                1 / m.neutralisationS(), Double.isFinite(m.refreshS()) ? 1 / m.refreshS() : 0, degeneracy, 0);
+    static LadderModel parameters(ModelAssumptions m, int degeneracy) {
+        List<ProcessSpec> processes = new ArrayList<>();
+        processes.add(new RadiativeProcess(m.tauSingleExcitonS() / m.plQuantumYield(), m.radiativeScaling(),
+                RadiativeDecay.DEFAULT_CHARGED_FACTOR));
+        processes.add(new AugerProcess(m.tauBiexcitonS(), m.augerScaling(), m.tauTrionNegativeS(), m.tauTrionPositiveS()));
+        if (m.plQuantumYield() < 1) {
+            processes.add(new TrappingProcess(m.tauSingleExcitonS() / (1 - m.plQuantumYield())));
+        }
+        if (m.ionisationProbability() > 0) {
+            processes.add(new ChargingProcess(Set.of(Charge.NEGATIVE),
+                    new AugerIonisation(m.ionisationProbability(), Charge.NEGATIVE), m.neutralisationS()));
+        }
+        if (Double.isFinite(m.refreshS())) {
+            processes.add(new RefreshProcess(m.refreshS()));
+        }
+        processes.addAll(m.processes());
+        return new LadderModel(processes, degeneracy, 0);
     }
 }

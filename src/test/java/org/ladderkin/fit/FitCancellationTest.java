@@ -3,8 +3,8 @@ package org.ladderkin.fit;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
-import java.util.EnumSet;
 import java.util.List;
+import java.util.Set;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
@@ -33,8 +33,8 @@ class FitCancellationTest {
 
     private static LadderFitSetup setup() {
         // τ₂ starts well away from the truth (40 ps) so the optimiser needs many evaluations
-        return new LadderFitSetup(LadderSeries.BASE.withRates(LadderSeries.BASE.radiativeRatePerS(), 1 / 90e-12, 0),
-                Double.NaN, EnumSet.of(LadderParameter.SCALE, LadderParameter.TAU_AUGER2), 0.5 * SIGMA_M2, 0, Double.NaN,
+        return new LadderFitSetup(LadderSeries.BASE.withSeconds(org.ladderkin.kinetics.process.AugerProcess.BIEXCITON_LIFETIME, 90e-12),
+                Double.NaN, Set.of(LadderParameter.SCALE, LadderParameter.TAU_AUGER2), 0.5 * SIGMA_M2, 0, Double.NaN,
                 false, false);
     }
 

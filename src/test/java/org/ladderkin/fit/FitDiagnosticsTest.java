@@ -3,7 +3,6 @@ package org.ladderkin.fit;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.ArrayList;
-import java.util.EnumSet;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
@@ -11,7 +10,12 @@ import java.util.Set;
 import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 import org.ladderkin.fit.LadderFitSetup.LadderParameter;
-import org.ladderkin.kinetics.ModelParameters;
+import org.ladderkin.kinetics.process.AugerProcess;
+import org.ladderkin.kinetics.process.ChargingProcess;
+import org.ladderkin.kinetics.process.LadderModel;
+import org.ladderkin.kinetics.process.RadiativeProcess;
+import org.ladderkin.kinetics.rate.AugerScaling;
+import org.ladderkin.kinetics.rate.RadiativeScaling;
 import org.ladderkin.kinetics.rate.AugerIonisation;
 import org.ladderkin.kinetics.state.Charge;
 
@@ -20,10 +24,10 @@ class FitDiagnosticsTest {
 
     private static final double SIGMA_M2 = 1e-18;
     private static final double[] DELAYS = SyntheticSeries.logDelays(0.3e-12, 2e-9, 80);
-    private static final Set<LadderParameter> FREE = EnumSet.of(LadderParameter.SCALE, LadderParameter.TAU_AUGER2);
+    private static final Set<LadderParameter> FREE = Set.of(LadderParameter.SCALE, LadderParameter.TAU_AUGER2);
 
     /** Traces made by averaging the bleach over ⟨N⟩ = f·σ·J for each weight/factor pair, with noise. */
-    private static Dataset series(ModelParameters truth, double periodS, double[] j, double[][] spread, long seed) {
+    private static Dataset series(LadderModel truth, double periodS, double[] j, double[][] spread, long seed) {
         LadderBleachModel model = LadderBleachModel.forModel(truth, "crossSectionM2", j, periodS);
         SplittableRandom rng = new SplittableRandom(seed);
         List<Trace> traces = new ArrayList<>();
@@ -61,7 +65,7 @@ class FitDiagnosticsTest {
 
     @Test
     void aModelThatHoldsDotsChargedAtLowFluenceIsFlaggedWithWhatToChange() {
-        ModelParameters charging = charging(0.02);
+        LadderModel charging = charging(0.02);
         double[] j = LadderSeries.fluencesPerM2(4, SIGMA_M2);
         Dataset d = series(charging, 1e-4, j, new double[][] {{1, 1}}, 2);
         LadderFit.Outcome o = LadderFit.fit(d, new LadderFitSetup(charging, 1e-4, FREE, Double.NaN, 0, Double.NaN, false, false),
@@ -70,16 +74,16 @@ class FitDiagnosticsTest {
         assertThat(o.diagnostics()).anySatisfy(m -> assertThat(m).contains("photocharging").contains("charged").contains("stir"));
     }
 
-    private static ModelParameters charging(double ionisation) {
-        return new ModelParameters(1 / 20e-9, LadderSeries.BASE.radiativeScaling(), 2, 1 / 40e-12,
-                LadderSeries.BASE.augerScaling(), 1 / 80e-12, 0, 0, 0, Set.of(Charge.NEGATIVE),
-                new AugerIonisation(ionisation, Charge.NEGATIVE), 1 / 1.0, 0, 2, 0);
+    private static LadderModel charging(double ionisation) {
+        return new LadderModel(List.of(new RadiativeProcess(20e-9, RadiativeScaling.STATISTICAL, 2),
+                new AugerProcess(40e-12, AugerScaling.STATISTICAL, 80e-12, Double.POSITIVE_INFINITY),
+                new ChargingProcess(Set.of(Charge.NEGATIVE), new AugerIonisation(ionisation, Charge.NEGATIVE), 1.0)), 2, 0);
     }
 
     @Test
     void photochargedDotsFittedWithANeutralLadderAreFlaggedWithWhatToChange() {
         // Auger ionisation leaves long-lived negative dots; at 10 kHz without stirring they pile up even at low ⟨N⟩
-        ModelParameters charging = charging(0.2);
+        LadderModel charging = charging(0.2);
         double[] j = LadderSeries.fluencesPerM2(6, SIGMA_M2);
         Dataset d = series(charging, 1e-4, j, new double[][] {{1, 1}}, 2);
         // σ given as measured from the absorption spectrum: the neutral fit has to inflate it to mimic the trions

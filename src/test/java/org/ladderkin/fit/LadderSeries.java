@@ -3,7 +3,7 @@ package org.ladderkin.fit;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.SplittableRandom;
-import org.ladderkin.kinetics.ModelParameters;
+import org.ladderkin.kinetics.process.LadderModel;
 import org.ladderkin.kinetics.rate.AugerScaling;
 import org.ladderkin.kinetics.rate.RadiativeScaling;
 
@@ -11,7 +11,7 @@ import org.ladderkin.kinetics.rate.RadiativeScaling;
 public final class LadderSeries {
 
     /** A neutral CdSe-like ladder: τ_rad 20 ns, τ₂ 40 ps, statistical scaling, g = 2. */
-    public static final ModelParameters BASE = ModelParameters.simple(1 / 20e-9, RadiativeScaling.STATISTICAL, 1 / 40e-12,
+    public static final LadderModel BASE = LadderModel.radiativeAndAuger(20e-9, RadiativeScaling.STATISTICAL, 40e-12,
             AugerScaling.STATISTICAL, 2);
 
     private LadderSeries() {

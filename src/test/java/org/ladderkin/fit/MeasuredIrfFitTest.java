@@ -4,14 +4,14 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.util.ArrayList;
-import java.util.EnumSet;
 import java.util.List;
+import java.util.Set;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 import org.ladderkin.fit.LadderFitSetup.LadderParameter;
-import org.ladderkin.kinetics.ModelParameters;
+import org.ladderkin.kinetics.process.LadderModel;
 import org.ladderkin.kinetics.rate.AugerScaling;
 import org.ladderkin.kinetics.rate.RadiativeScaling;
 import org.ladderkin.observe.MeasuredIrf;
@@ -106,7 +106,7 @@ class MeasuredIrfFitTest {
         double c = irf.centroidS();
         double[] t = irf.timesS();
         double[] g = irf.densityPerS();
-        ModelParameters fast = ModelParameters.simple(1 / 20e-9, RadiativeScaling.STATISTICAL, 1 / 0.5e-12, AugerScaling.STATISTICAL, 2);
+        LadderModel fast = LadderModel.radiativeAndAuger(20e-9, RadiativeScaling.STATISTICAL, 0.5e-12, AugerScaling.STATISTICAL, 2);
         double[] n = {3};
         // a 2 ns period leaves a bleach from earlier pulses, so the step part before time zero is not zero
         LadderBleachModel measured = LadderBleachModel.forModel(fast, "scale", n, 2e-9, irf);
@@ -143,7 +143,7 @@ class MeasuredIrfFitTest {
         double tau2 = 2e-12;
         double sigmaM2 = 1e-19;
         double t0 = 0.2e-12;
-        ModelParameters truth = ModelParameters.simple(1 / 20e-9, RadiativeScaling.STATISTICAL, 1 / tau2, AugerScaling.STATISTICAL, 2);
+        LadderModel truth = LadderModel.radiativeAndAuger(20e-9, RadiativeScaling.STATISTICAL, tau2, AugerScaling.STATISTICAL, 2);
         double[] j = LadderSeries.fluencesPerM2(5, sigmaM2);
         double[] delays = delaysAcrossZero();
         for (int m = 0; m < delays.length; m++) {
@@ -163,9 +163,9 @@ class MeasuredIrfFitTest {
             traces.add(new Trace(delays, y, null, new TraceMetadata("J" + i, Optional.of(e), OptionalDouble.empty()), 0));
         }
         Dataset data = new Dataset(traces, List.of());
-        ModelParameters start = ModelParameters.simple(1 / 20e-9, RadiativeScaling.STATISTICAL, 1 / 3.5e-12, AugerScaling.STATISTICAL, 2);
+        LadderModel start = LadderModel.radiativeAndAuger(20e-9, RadiativeScaling.STATISTICAL, 3.5e-12, AugerScaling.STATISTICAL, 2);
         LadderFit.Outcome o = LadderFit.fit(data, new LadderFitSetup(start, Double.NaN,
-                EnumSet.of(LadderParameter.SCALE, LadderParameter.TAU_AUGER2, LadderParameter.TIME_ZERO), Double.NaN, 0,
+                Set.of(LadderParameter.SCALE, LadderParameter.TAU_AUGER2, LadderParameter.TIME_ZERO), Double.NaN, 0,
                 Double.NaN, false, false, irf), FitProgress.NONE);
         FitResult r = o.result();
         assertThat(r.ok()).as(r.message()).isTrue();
@@ -239,11 +239,11 @@ class MeasuredIrfFitTest {
     @Test
     void theWidthOfAMeasuredIrfIsNotAFitParameter() {
         MeasuredIrf irf = sampledGaussian(0.3e-12, 0, 10e-15);
-        assertThatThrownBy(() -> new LadderFitSetup(LadderSeries.BASE, Double.NaN, EnumSet.of(LadderParameter.IRF), Double.NaN,
+        assertThatThrownBy(() -> new LadderFitSetup(LadderSeries.BASE, Double.NaN, Set.of(LadderParameter.IRF), Double.NaN,
                 0, 0.3e-12, false, false, irf))
                 .hasMessage("the IRF width cannot be fitted with a measured IRF (sampled Gaussian fixes its shape and width; "
                         + "time zero stays free): remove 'irf' from the fitted parameters");
-        assertThatThrownBy(() -> new LadderFitSetup(LadderSeries.BASE, Double.NaN, EnumSet.of(LadderParameter.SCALE), Double.NaN,
+        assertThatThrownBy(() -> new LadderFitSetup(LadderSeries.BASE, Double.NaN, Set.of(LadderParameter.SCALE), Double.NaN,
                 0, 0.3e-12, false, false, irf))
                 .hasMessageStartingWith("give either a Gaussian IRF width (3.0E-13 s) or a measured IRF (sampled Gaussian), not both");
         LadderBleachModel model = LadderBleachModel.forModel(LadderSeries.BASE, "scale", new double[] {1}, Double.NaN, irf);

@@ -4,7 +4,7 @@ import org.ladderkin.plan.PlanFitBasis;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.EnumSet;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
@@ -58,7 +58,7 @@ public final class FitSession implements AutoCloseable {
     private List<String> texts = List.of();
     private List<ExcitationText.Reading> readings = List.of();
     private String loadProblem = "";
-    private final Set<LadderParameter> free = EnumSet.of(LadderParameter.SCALE, LadderParameter.TAU_AUGER2);
+    private final Set<LadderParameter> free = new LinkedHashSet<>(List.of(LadderParameter.SCALE, LadderParameter.TAU_AUGER2));
     private boolean pulseTrain;
     private boolean instrumentResponse;
     private PlanInputs plan;

@@ -6,6 +6,9 @@ import java.util.Arrays;
 import java.util.List;
 import org.ladderkin.plan.Goal;
 import org.ladderkin.plan.Instrument;
+import org.ladderkin.kinetics.process.ParameterKind;
+import org.ladderkin.kinetics.process.ProcessParameter;
+import org.ladderkin.kinetics.process.ProcessRegistry;
 import org.ladderkin.units.Dimension;
 
 /**
@@ -105,7 +108,7 @@ public final class PlanForms {
      * The optional {@code model} section: values that replace the ones the planner derives from the material. Blank
      * means "derive it"; the fit view writes τ₂ (and, where the mapping is exact, τ₁ and σ) here.
      */
-    public static final List<FieldSpec> MODEL = List.of(
+    public static final List<FieldSpec> MODEL = withRegistryFields(List.of(
             FieldSpec.optionalQuantity("Single-exciton lifetime τ₁", "model.singleExcitonLifetime", Dimension.TIME,
                     "total single-exciton decay (radiative and trapping); blank: from the material library"),
             FieldSpec.fraction("PL quantum yield", "model.plQuantumYield", true,
@@ -125,7 +128,19 @@ public final class PlanForms {
             FieldSpec.optionalQuantity("Photocharge lifetime", "model.photochargeLifetime", Dimension.TIME,
                     "how long an ejected charge stays away; blank: the default"),
             FieldSpec.optionalQuantity("Cooling time", "model.coolingTime", Dimension.TIME,
-                    "intraband cooling time, used for delay windows; blank: the default"));
+                    "intraband cooling time, used for delay windows; blank: the default")));
+
+    /** The plan's own model fields, then one per process parameter a plan may set through the registry. */
+    private static List<FieldSpec> withRegistryFields(List<FieldSpec> own) {
+        List<FieldSpec> all = new ArrayList<>(own);
+        for (ProcessParameter p : ProcessRegistry.planParameters()) {
+            if (p.kind() != ParameterKind.LIFETIME) {
+                throw new IllegalStateException("the planner's form shows registry lifetimes only, not " + p.key());
+            }
+            all.add(FieldSpec.optionalQuantity(p.label(), "model." + p.planKey(), Dimension.TIME, p.help()));
+        }
+        return List.copyOf(all);
+    }
 
     /** A pick list with a blank first entry that removes the key. */
     private static FieldSpec optionalChoice(String label, String path, List<String> choices, String help) {

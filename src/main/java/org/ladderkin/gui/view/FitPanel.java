@@ -6,7 +6,7 @@ import java.io.File;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.EnumMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -50,8 +50,8 @@ import org.ladderkin.units.Quantity;
 public final class FitPanel extends JPanel {
 
     /** Parameters offered as checkboxes; the IRF width needs a start value the view does not ask for. */
-    private static final List<LadderParameter> OFFERED = List.of(LadderParameter.SCALE, LadderParameter.TAU_AUGER2,
-            LadderParameter.TAU_RAD, LadderParameter.TAU_TRAP, LadderParameter.TIME_ZERO);
+    private static final List<LadderParameter> OFFERED = LadderParameter.values().stream()
+            .filter(p -> !p.equals(LadderParameter.IRF)).toList();
 
     private final FitSession session;
     private final PlanEditor editor;
@@ -66,7 +66,7 @@ public final class FitPanel extends JPanel {
     private final JLabel status = new JLabel(" ");
     private final ExcitationModel excitationModel = new ExcitationModel();
     private final JTable excitations = new JTable(excitationModel);
-    private final Map<LadderParameter, JCheckBox> freeBoxes = new EnumMap<>(LadderParameter.class);
+    private final Map<LadderParameter, JCheckBox> freeBoxes = new LinkedHashMap<>();
     private final JCheckBox pulseTrain = new JCheckBox("Pulse-train steady state at the plan's rate");
     private final JCheckBox response = new JCheckBox("Plan's instrument response");
     private final java.util.Map<String, JSplitPane> splits = new java.util.LinkedHashMap<>();
@@ -317,14 +317,7 @@ public final class FitPanel extends JPanel {
     }
 
     private static String label(LadderParameter p) {
-        return switch (p) {
-            case SCALE -> "scale (σ, ⟨N⟩ per J or factor)";
-            case TAU_AUGER2 -> "τ₂ (biexciton Auger)";
-            case TAU_RAD -> "τ_rad (radiative)";
-            case TAU_TRAP -> "τ_trap (trapping)";
-            case TIME_ZERO -> "time zero";
-            case IRF -> "IRF FWHM";
-        };
+        return p.label();
     }
 
     private static String escape(String s) {

@@ -1,9 +1,10 @@
 package org.ladderkin.kinetics.ensemble;
 
 import org.ladderkin.kinetics.LadderKinetics;
-import org.ladderkin.kinetics.ModelParameters;
+import org.ladderkin.kinetics.KineticModel;
 import org.ladderkin.kinetics.Populations;
 import org.ladderkin.kinetics.Trace;
+import org.ladderkin.kinetics.rate.AugerRecombination;
 import org.ladderkin.kinetics.train.PulseExcitation;
 
 /**
@@ -17,11 +18,12 @@ public final class EnsembleAverage {
     }
 
     /**
-     * @param base model whose biexciton Auger rate is replaced per size (trion rates scale by the same factor)
+     * @param base model of the mean size; per size its Auger law is scaled so that its biexciton rate is the size
+     *             law's (trion and overridden rates scale by the same factor)
      * @param photonFluencePerM2 pump photon fluence j (photons/m²)
      * @param periodS pulse period (s), or NaN for one pulse on fresh dots
      */
-    public static Trace trace(ModelParameters base, SizeScaling law, SizeDistribution sizes, int nodes,
+    public static Trace trace(KineticModel base, SizeScaling law, SizeDistribution sizes, int nodes,
                               double photonFluencePerM2, double periodS, double[] delaysS) {
         SizeDistribution.Nodes q = sizes.nodes(nodes);
         double[] bleach = new double[delaysS.length];
@@ -29,13 +31,10 @@ public final class EnsembleAverage {
         for (int i = 0; i < q.diametersM().length; i++) {
             double d = q.diametersM()[i];
             double kA = law.biexcitonAugerRatePerS(d);
-            double f = base.biexcitonAugerRatePerS() > 0 ? kA / base.biexcitonAugerRatePerS() : 0;
-            ModelParameters p = new ModelParameters(base.radiativeRatePerS(), base.radiativeScaling(),
-                    base.chargedRadiativeFactor(), kA, base.augerScaling(), base.negativeTrionAugerRatePerS() * f,
-                    base.positiveTrionAugerRatePerS() * f, base.trappingRatePerS(), base.coolingRatePerS(), base.charges(),
-                    base.ionisation(), base.neutralisationRatePerS(), base.refreshRatePerS(), base.degeneracy(), base.nMax());
+            KineticModel sized = base.withLaws(AugerRecombination.class,
+                    a -> a.biexcitonRatePerS() > 0 ? a.scaled(kA / a.biexcitonRatePerS()) : a);
             PulseExcitation pulse = new PulseExcitation.Poisson(law.crossSectionM2(d) * photonFluencePerM2);
-            LadderKinetics k = LadderKinetics.forPulses(p.toModel(), pulse);
+            LadderKinetics k = LadderKinetics.forPulses(sized, pulse);
             Populations after = Double.isNaN(periodS)
                     ? k.applyPulse(Populations.ground(k.space()), pulse)
                     : k.steadyState(pulse, periodS, false).afterPulse();

@@ -2,7 +2,8 @@ package org.ladderkin.kinetics.ensemble;
 
 import org.hipparchus.analysis.integration.IterativeLegendreGaussIntegrator;
 import org.junit.jupiter.api.Test;
-import org.ladderkin.kinetics.ModelParameters;
+import org.ladderkin.kinetics.KineticModel;
+import org.ladderkin.kinetics.process.LadderModel;
 import org.ladderkin.kinetics.Trace;
 import org.ladderkin.kinetics.rate.AugerScaling;
 import org.ladderkin.kinetics.rate.RadiativeScaling;
@@ -20,7 +21,8 @@ class EnsembleAverageTest {
         VolumeScaling law = new VolumeScaling(d0, 2e-19, 1 / 50e-12);
         double j = 5e18;
         // g = 1: after all Auger decay (1 ns ≫ τ₂, ≪ τ_rad = 1 s) the bleach is the excited fraction
-        ModelParameters base = ModelParameters.simple(1.0, RadiativeScaling.LINEAR, 1 / 50e-12, AugerScaling.STATISTICAL, 1);
+        KineticModel base = LadderModel.radiativeAndAuger(1.0, RadiativeScaling.LINEAR, 50e-12, AugerScaling.STATISTICAL, 1)
+                .toModel();
         Trace t = EnsembleAverage.trace(base, law, new SizeDistribution(d0, w), 24, j, Double.NaN, new double[] {1e-9});
         double sd = w * d0;
         double ref = new IterativeLegendreGaussIntegrator(8, 1e-13, 1e-15).integrate(100000,
