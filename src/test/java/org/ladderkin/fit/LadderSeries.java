@@ -41,4 +41,16 @@ public final class LadderSeries {
         }
         return new Dataset(traces, List.of());
     }
+
+    /** The same traces, each recorded at photon fluence {@code fluencesPerM2[i]}. */
+    public static Dataset withFluences(Dataset d, double[] fluencesPerM2) {
+        List<Trace> traces = new ArrayList<>();
+        for (int i = 0; i < d.size(); i++) {
+            Trace t = d.traces().get(i);
+            Excitation e = new Excitation(Excitation.Kind.PHOTON_FLUENCE_PER_M2, fluencesPerM2[i]);
+            traces.add(new Trace(t.delaysS(), t.signal(), null, new TraceMetadata(t.label(), java.util.Optional.of(e),
+                    java.util.OptionalDouble.empty()), 0));
+        }
+        return new Dataset(traces, List.of());
+    }
 }
