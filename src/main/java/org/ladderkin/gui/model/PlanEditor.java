@@ -18,6 +18,7 @@ import java.util.Optional;
 import java.util.concurrent.CopyOnWriteArrayList;
 import org.ladderkin.io.AtomicFiles;
 import org.ladderkin.io.InputException;
+import org.ladderkin.io.InputProblem;
 import org.ladderkin.io.ResolvedJson;
 import org.ladderkin.io.SampleCodec;
 import org.ladderkin.io.SourceLocation;
@@ -283,10 +284,10 @@ public final class PlanEditor {
         try {
             parsed = MAPPER.readTree(Files.readString(planFile, StandardCharsets.UTF_8));
         } catch (IOException e) {
-            throw new InputException(SourceLocation.of(planFile.toString()), null, "cannot read: " + e.getMessage(), e);
+            throw new InputException(SourceLocation.of(planFile.toString()), null, InputProblem.UNREADABLE, "cannot read: " + e.getMessage(), e);
         }
         if (!(parsed instanceof ObjectNode object)) {
-            throw new InputException(SourceLocation.of(planFile.toString()), null, "a plan file must hold one JSON object");
+            throw new InputException(SourceLocation.of(planFile.toString()), null, InputProblem.WRONG_TYPE, "a plan file must hold one JSON object");
         }
         replace(object, planFile.toAbsolutePath().normalize());
         fire(Change.REPLACED, null);
