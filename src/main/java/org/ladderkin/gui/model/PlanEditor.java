@@ -1,5 +1,7 @@
 package org.ladderkin.gui.model;
 
+// Over 400 lines: one editor state (document, positions, history, file, check) kept consistent in one place.
+
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
