@@ -6,6 +6,7 @@ import java.util.concurrent.Callable;
 import java.util.function.BooleanSupplier;
 import org.ladderkin.gui.app.PlannerApp;
 import org.ladderkin.io.InputException;
+import org.ladderkin.io.InputProblem;
 import org.ladderkin.io.SourceLocation;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Parameters;
@@ -33,7 +34,7 @@ final class GuiCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         Path plan = planFile != null ? planFile : demoPlan();
         if (!Files.isRegularFile(plan)) {
-            throw new InputException(SourceLocation.of(plan.toString()), null, "file not found");
+            throw new InputException(SourceLocation.of(plan.toString()), null, InputProblem.NOT_FOUND, "file not found");
         }
         if (!display.getAsBoolean()) {
             spec.commandLine().getErr().println("ladderkin: gui: no display available (headless environment); "
@@ -55,7 +56,7 @@ final class GuiCommand implements Callable<Integer> {
     private static Path demoPlan() {
         String home = System.getProperty("ladderkin.home");
         if (home == null || home.isBlank()) {
-            throw new InputException(SourceLocation.of(DEMO_PLAN), null,
+            throw new InputException(SourceLocation.of(DEMO_PLAN), null, InputProblem.NOT_FOUND,
                     "cannot find the demo plan: the 'ladderkin.home' property is not set (start through ./ladderkin, "
                             + "or give a plan file)");
         }

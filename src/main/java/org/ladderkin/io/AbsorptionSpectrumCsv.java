@@ -31,11 +31,11 @@ public final class AbsorptionSpectrumCsv {
             lines = List.of(StandardCharsets.UTF_8.newDecoder().decode(java.nio.ByteBuffer.wrap(Files.readAllBytes(file)))
                     .toString().split("\\R", -1));
         } catch (NoSuchFileException e) {
-            throw new InputException(SourceLocation.of(displayName), null, "file not found");
+            throw new InputException(SourceLocation.of(displayName), null, InputProblem.NOT_FOUND, "file not found");
         } catch (CharacterCodingException e) {
-            throw new InputException(SourceLocation.of(displayName), null, "not UTF-8 text (save the file as UTF-8)");
+            throw new InputException(SourceLocation.of(displayName), null, InputProblem.UNREADABLE, "not UTF-8 text (save the file as UTF-8)");
         } catch (IOException e) {
-            throw new InputException(SourceLocation.of(displayName), null, "cannot read file: " + e.getMessage());
+            throw new InputException(SourceLocation.of(displayName), null, InputProblem.UNREADABLE, "cannot read file: " + e.getMessage());
         }
         return parse(lines, displayName);
     }
@@ -54,34 +54,34 @@ public final class AbsorptionSpectrumCsv {
             }
             if (!headerSeen) {
                 if (!line.replace(" ", "").toLowerCase(Locale.ROOT).equals(HEADER)) {
-                    throw at(displayName, lineNo, "expected the header '" + HEADER + "', found '" + line + "'");
+                    throw at(displayName, lineNo, InputProblem.MISSING_FIELD, "expected the header '" + HEADER + "', found '" + line + "'");
                 }
                 headerSeen = true;
                 continue;
             }
             String[] cells = line.split(",", -1);
             if (cells.length != 2) {
-                throw at(displayName, lineNo, "expected two values 'wavelength_nm,absorbance', found " + cells.length);
+                throw at(displayName, lineNo, InputProblem.BAD_SYNTAX, "expected two values 'wavelength_nm,absorbance', found " + cells.length);
             }
             double w = number(cells[0], displayName, lineNo, "wavelength");
             double a = number(cells[1], displayName, lineNo, "absorbance");
             if (!(w > 0)) {
-                throw at(displayName, lineNo, "wavelength must be > 0 nm, was " + cells[0].strip());
+                throw at(displayName, lineNo, InputProblem.OUT_OF_RANGE, "wavelength must be > 0 nm, was " + cells[0].strip());
             }
             points.add(new double[] {w / 1e9, a});
             lineOf.add(lineNo);
         }
         if (!headerSeen) {
-            throw at(displayName, Math.max(1, lines.size()), "no header '" + HEADER + "' found (empty file?)");
+            throw at(displayName, Math.max(1, lines.size()), InputProblem.EMPTY, "no header '" + HEADER + "' found (empty file?)");
         }
         if (points.size() < 2) {
-            throw at(displayName, Math.max(1, lines.size()), "needs at least two data lines, found " + points.size());
+            throw at(displayName, Math.max(1, lines.size()), InputProblem.EMPTY, "needs at least two data lines, found " + points.size());
         }
         boolean falling = points.get(1)[0] < points.get(0)[0];
         for (int i = 1; i < points.size(); i++) {
             boolean ok = falling ? points.get(i)[0] < points.get(i - 1)[0] : points.get(i)[0] > points.get(i - 1)[0];
             if (!ok) {
-                throw at(displayName, lineOf.get(i), "wavelengths must keep " + (falling ? "falling" : "rising")
+                throw at(displayName, lineOf.get(i), InputProblem.BAD_ORDER, "wavelengths must keep " + (falling ? "falling" : "rising")
                         + " without repeats, but " + fmt(points.get(i)[0]) + " nm follows " + fmt(points.get(i - 1)[0]) + " nm");
             }
         }
@@ -101,11 +101,11 @@ public final class AbsorptionSpectrumCsv {
         try {
             double v = Double.parseDouble(s);
             if (!Double.isFinite(v)) {
-                throw at(file, line, what + " must be a finite number, was '" + s + "'");
+                throw at(file, line, InputProblem.OUT_OF_RANGE, what + " must be a finite number, was '" + s + "'");
             }
             return v;
         } catch (NumberFormatException e) {
-            throw at(file, line, what + " is not a number: '" + s + "'");
+            throw at(file, line, InputProblem.BAD_NUMBER, what + " is not a number: '" + s + "'");
         }
     }
 
@@ -113,7 +113,7 @@ public final class AbsorptionSpectrumCsv {
         return org.ladderkin.material.Numbers.sig(m * 1e9, 6);
     }
 
-    private static InputException at(String file, int line, String problem) {
-        return new InputException(new SourceLocation(file, line, 0), null, problem);
+    private static InputException at(String file, int line, InputProblem key, String problem) {
+        return new InputException(new SourceLocation(file, line, 0), null, key, problem);
     }
 }

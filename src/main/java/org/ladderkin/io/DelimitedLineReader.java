@@ -37,9 +37,9 @@ final class DelimitedLineReader implements AutoCloseable {
             BufferedReader r = new BufferedReader(new InputStreamReader(Files.newInputStream(path), decoder), 1 << 16);
             return new DelimitedLineReader(r, displayName);
         } catch (NoSuchFileException e) {
-            throw new InputException(SourceLocation.of(displayName), null, "file not found");
+            throw new InputException(SourceLocation.of(displayName), null, InputProblem.NOT_FOUND, "file not found");
         } catch (IOException e) {
-            throw new InputException(SourceLocation.of(displayName), null, "cannot read file: " + e.getMessage());
+            throw new InputException(SourceLocation.of(displayName), null, InputProblem.UNREADABLE, "cannot read file: " + e.getMessage());
         }
     }
 
@@ -81,9 +81,9 @@ final class DelimitedLineReader implements AutoCloseable {
             }
             return null;
         } catch (CharacterCodingException e) {
-            throw new InputException(new SourceLocation(file, lineNumber + 1, 0), null, "not UTF-8 text (save the file as UTF-8)");
+            throw new InputException(new SourceLocation(file, lineNumber + 1, 0), null, InputProblem.UNREADABLE, "not UTF-8 text (save the file as UTF-8)");
         } catch (IOException e) {
-            throw new InputException(new SourceLocation(file, lineNumber, 0), null, "cannot read file: " + e.getMessage());
+            throw new InputException(new SourceLocation(file, lineNumber, 0), null, InputProblem.UNREADABLE, "cannot read file: " + e.getMessage());
         }
     }
 
@@ -96,7 +96,7 @@ final class DelimitedLineReader implements AutoCloseable {
         } else if (headerLine.indexOf(',') >= 0) {
             delimiter = ',';
         } else {
-            throw new InputException(here(0), null,
+            throw new InputException(here(0), null, InputProblem.BAD_SYNTAX,
                     "cannot find the column delimiter in the header line (separate columns with comma, semicolon or tab)");
         }
     }
@@ -197,18 +197,18 @@ final class DelimitedLineReader implements AutoCloseable {
             t = t.replace(',', '.');
         }
         if (!looksNumeric(t)) {
-            throw new InputException(here(column), field, "'" + cell.strip() + "' is not a number"
+            throw new InputException(here(column), field, InputProblem.BAD_NUMBER, "'" + cell.strip() + "' is not a number"
                     + (delimiter == ',' && t.indexOf(',') >= 0 ? " (a decimal comma needs ';' or tab as the delimiter)" : "")
                     + " (write a number such as 1.5e-3, or leave the cell empty / NaN for a missing value)");
         }
         try {
             double v = Double.parseDouble(t);
             if (Double.isInfinite(v)) {
-                throw new InputException(here(column), field, "'" + cell.strip() + "' is out of range for a double");
+                throw new InputException(here(column), field, InputProblem.OUT_OF_RANGE, "'" + cell.strip() + "' is out of range for a double");
             }
             return v;
         } catch (NumberFormatException e) {
-            throw new InputException(here(column), field, "'" + cell.strip() + "' is not a number");
+            throw new InputException(here(column), field, InputProblem.BAD_NUMBER, "'" + cell.strip() + "' is not a number");
         }
     }
 

@@ -33,7 +33,7 @@ final class HeaderUnit {
             String text = m.group(2);
             Unit u = Units.find(text);
             if (u == null || u.dimension() != dimension) {
-                throw new InputException(where, h, "unknown " + dimension.label() + " unit '" + text + "' in header (units: "
+                throw new InputException(where, h, InputProblem.UNKNOWN_UNIT, "unknown " + dimension.label() + " unit '" + text + "' in header (units: "
                         + Units.accepted(dimension) + ")");
             }
             return u;
@@ -46,7 +46,7 @@ final class HeaderUnit {
             }
         }
         if (fallback == null) {
-            throw new InputException(where, h, "no " + dimension.label() + " unit in header (write it like '"
+            throw new InputException(where, h, InputProblem.WRONG_UNIT, "no " + dimension.label() + " unit in header (write it like '"
                     + exampleName(dimension) + " (" + Units.of(dimension).get(1).symbol() + ")' or give " + flag + ")");
         }
         return fallback;

@@ -5,27 +5,31 @@ import java.util.Objects;
 /**
  * Bad input, located as precisely as known. The message reads
  * {@code FILE:LINE:COLUMN: field 'x': what is wrong (what is allowed)}, the form compilers use, so editors can jump to it.
+ * The {@link #key()} says what kind of problem it is, so callers and tests need not parse the wording.
  */
 public final class InputException extends RuntimeException {
 
     private final SourceLocation location;
     private final String field;
-    private final String problem;
+    private final InputProblem key;
+    private final String detail;
 
     /**
      * @param location where (file, and line/column when known)
      * @param field    the dotted path of the field, or null when the problem is not about one field
-     * @param problem  what is wrong, with what is allowed in parentheses
+     * @param key      what kind of problem
+     * @param detail   what is wrong, with what is allowed in parentheses
      */
-    public InputException(SourceLocation location, String field, String problem) {
-        super(compose(location, field, problem));
+    public InputException(SourceLocation location, String field, InputProblem key, String detail) {
+        super(compose(location, field, detail));
         this.location = Objects.requireNonNull(location, "location");
         this.field = field;
-        this.problem = Objects.requireNonNull(problem, "problem");
+        this.key = Objects.requireNonNull(key, "key");
+        this.detail = Objects.requireNonNull(detail, "detail");
     }
 
-    public InputException(SourceLocation location, String field, String problem, Throwable cause) {
-        this(location, field, problem);
+    public InputException(SourceLocation location, String field, InputProblem key, String detail, Throwable cause) {
+        this(location, field, key, detail);
         initCause(cause);
     }
 
@@ -38,16 +42,21 @@ public final class InputException extends RuntimeException {
         return field;
     }
 
-    /** What is wrong, without the location prefix. */
-    public String problem() {
-        return problem;
+    /** What kind of problem this is. */
+    public InputProblem key() {
+        return key;
     }
 
-    private static String compose(SourceLocation location, String field, String problem) {
+    /** What is wrong, without the location prefix. */
+    public String problem() {
+        return detail;
+    }
+
+    private static String compose(SourceLocation location, String field, String detail) {
         StringBuilder b = new StringBuilder(location.toString()).append(": ");
         if (field != null && !field.isEmpty()) {
             b.append("field '").append(field).append("': ");
         }
-        return b.append(problem).toString();
+        return b.append(detail).toString();
     }
 }

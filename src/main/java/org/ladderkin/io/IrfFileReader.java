@@ -37,7 +37,7 @@ public final class IrfFileReader {
     private static MeasuredIrf read(DelimitedLineReader in) {
         String header = in.nextContentLine();
         if (header == null) {
-            throw new InputException(SourceLocation.of(in.file()), null,
+            throw new InputException(SourceLocation.of(in.file()), null, InputProblem.EMPTY,
                     "no data (expected a header line such as 'time (ps),response' and rows of numbers)");
         }
         in.detectDelimiter(header);
@@ -45,13 +45,13 @@ public final class IrfFileReader {
         int[] starts = new int[2];
         int cells = in.split(header, names, starts);
         if (cells != 2) {
-            throw new InputException(in.here(0), null, "an IRF file has exactly two columns, time and response; the header "
+            throw new InputException(in.here(0), null, InputProblem.BAD_SYNTAX, "an IRF file has exactly two columns, time and response; the header "
                     + "has " + cells + " (write e.g. 'time (ps)" + in.delimiter() + "response')");
         }
         String timeName = TraceTableReader.unquote(names[0]);
         String valueName = TraceTableReader.unquote(names[1]);
         if (valueName.isEmpty()) {
-            throw new InputException(in.here(starts[1]), null, "column 2 has an empty header (name the response column)");
+            throw new InputException(in.here(starts[1]), null, InputProblem.MISSING_FIELD, "column 2 has an empty header (name the response column)");
         }
         SourceLocation valueHeader = in.here(starts[1]);
         Unit unit = timeUnit(timeName, in.here(starts[0]));
@@ -68,21 +68,21 @@ public final class IrfFileReader {
         while ((line = in.nextContentLine()) != null) {
             int n = in.bounds(line, from, to);
             if (n != 2) {
-                throw new InputException(in.here(0), null, "row has " + n + " cell" + (n == 1 ? "" : "s")
+                throw new InputException(in.here(0), null, InputProblem.BAD_SYNTAX, "row has " + n + " cell" + (n == 1 ? "" : "s")
                         + " but an IRF file has two, time and response (check for a missing or extra delimiter)");
             }
             double t = in.number(line, from[0], to[0], timeName);
             if (Double.isNaN(t)) {
-                throw new InputException(in.here(from[0] + 1), timeName, "missing time (every row needs one)");
+                throw new InputException(in.here(from[0] + 1), timeName, InputProblem.MISSING_VALUE, "missing time (every row needs one)");
             }
             double v = in.number(line, from[1], to[1], valueName);
             if (Double.isNaN(v)) {
-                throw new InputException(in.here(from[1] + 1), valueName, "missing value (an IRF file has no gaps)");
+                throw new InputException(in.here(from[1] + 1), valueName, InputProblem.MISSING_VALUE, "missing value (an IRF file has no gaps)");
             }
             double tS = t * factor;
             if (times.size() > 0 && !(tS > times.get(times.size() - 1))) {
                 double before = times.get(times.size() - 1) / factor;
-                throw new InputException(in.here(from[0] + 1), timeName, (tS == times.get(times.size() - 1) ? "duplicate time "
+                throw new InputException(in.here(from[0] + 1), timeName, InputProblem.BAD_ORDER, (tS == times.get(times.size() - 1) ? "duplicate time "
                         : "time ") + fmt(t) + " " + unit.symbol() + (tS == times.get(times.size() - 1) ? " (also at line "
                         + previousLine + ")" : " is smaller than " + fmt(before) + " " + unit.symbol() + " at line "
                         + previousLine) + " (times must increase strictly down the file)");
@@ -94,7 +94,7 @@ public final class IrfFileReader {
             previousLine = in.lineNumber();
         }
         if (times.size() < MeasuredIrf.MIN_POINTS) {
-            throw new InputException(new SourceLocation(in.file(), Math.max(1, in.lineNumber()), 0), null, "only "
+            throw new InputException(new SourceLocation(in.file(), Math.max(1, in.lineNumber()), 0), null, InputProblem.EMPTY, "only "
                     + times.size() + " data row" + (times.size() == 1 ? "" : "s") + " (an IRF needs at least "
                     + MeasuredIrf.MIN_POINTS + " samples)");
         }
@@ -105,11 +105,11 @@ public final class IrfFileReader {
             peak = Math.max(peak, x);
         }
         if (!(peak > 0)) {
-            throw new InputException(valueHeader, valueName, "no positive value (an IRF is a peak above zero)");
+            throw new InputException(valueHeader, valueName, InputProblem.OUT_OF_RANGE, "no positive value (an IRF is a peak above zero)");
         }
         for (int i = 0; i < v.length; i++) {
             if (v[i] < -NEGATIVE_LIMIT_PERCENT / 100 * peak) {
-                throw new InputException(new SourceLocation(in.file(), (int) lines.get(i), (int) columns.get(i)), valueName,
+                throw new InputException(new SourceLocation(in.file(), (int) lines.get(i), (int) columns.get(i)), valueName, InputProblem.OUT_OF_RANGE,
                         String.format(Locale.ROOT, "%s is %.1f %% of the peak %s below zero (noise down to -%.0f %% of the peak "
                                 + "is clipped to zero; subtract the background before saving the IRF)", fmt(v[i]),
                                 -100 * v[i] / peak, fmt(peak), NEGATIVE_LIMIT_PERCENT));
@@ -121,7 +121,7 @@ public final class IrfFileReader {
         } catch (IllegalArgumentException e) {
             String m = e.getMessage();
             String prefix = in.file() + ": ";
-            throw new InputException(valueHeader, valueName, m.startsWith(prefix) ? m.substring(prefix.length()) : m, e);
+            throw new InputException(valueHeader, valueName, InputProblem.INVALID_VALUE, m.startsWith(prefix) ? m.substring(prefix.length()) : m, e);
         }
     }
 
@@ -130,8 +130,8 @@ public final class IrfFileReader {
         try {
             return HeaderUnit.of(header, Dimension.TIME, null, where, "");
         } catch (InputException e) {
-            if (e.problem().startsWith("no ")) {
-                throw new InputException(where, header, "no time unit in the header (write it like 'time (ps)')");
+            if (e.key() == InputProblem.WRONG_UNIT) {
+                throw new InputException(where, header, InputProblem.WRONG_UNIT, "no time unit in the header (write it like 'time (ps)')");
             }
             throw e;
         }

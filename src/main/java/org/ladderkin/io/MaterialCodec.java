@@ -62,7 +62,7 @@ public final class MaterialCodec {
         try {
             return new Material(key, name, shape, gap, molar, density, heat, n, ge, gh, sizing, edge, high, auger, tauX, tauT, notes);
         } catch (IllegalArgumentException e) {
-            throw root.error(e.getMessage());
+            throw root.error(InputProblem.INVALID_VALUE, e.getMessage());
         }
     }
 
@@ -88,7 +88,7 @@ public final class MaterialCodec {
         }
         double x = v.get().number();
         if (!(x > 0)) {
-            throw v.get().error("must be > 0, was " + x);
+            throw v.get().error(InputProblem.OUT_OF_RANGE, "must be > 0, was " + x);
         }
         return source(n, x * toSi, source);
     }
@@ -97,7 +97,7 @@ public final class MaterialCodec {
         try {
             return new Sourced(si, source);
         } catch (IllegalArgumentException e) {
-            throw n.error(e.getMessage());
+            throw n.error(InputProblem.INVALID_VALUE, e.getMessage());
         }
     }
 
@@ -114,7 +114,7 @@ public final class MaterialCodec {
                 }
                 double[] range = range(n.field("validFirstPeak"), Dimension.LENGTH);
                 if (!gap.known()) {
-                    throw n.error("a wavelength polynomial needs the bulk gap to recognise impossible peaks");
+                    throw n.error(InputProblem.MISSING_FIELD, "a wavelength polynomial needs the bulk gap to recognise impossible peaks");
                 }
                 curve = new WavelengthPolynomialSizing(c.stream().mapToDouble(Double::doubleValue).toArray(),
                         range[0], range[1], gap.value(), source);
@@ -127,7 +127,7 @@ public final class MaterialCodec {
                 curve = new ReciprocalQuadraticSizing(offsetEv, a, b, c, range[0], range[1], source);
             }
         } catch (IllegalArgumentException e) {
-            throw n.error(e.getMessage());
+            throw n.error(InputProblem.INVALID_VALUE, e.getMessage());
         }
         n.finish();
         return curve;
@@ -136,7 +136,7 @@ public final class MaterialCodec {
     private static double nonNegative(Node n) {
         double x = n.number();
         if (x < 0) {
-            throw n.error("must be >= 0, was " + x);
+            throw n.error(InputProblem.OUT_OF_RANGE, "must be >= 0, was " + x);
         }
         return x;
     }
@@ -144,12 +144,12 @@ public final class MaterialCodec {
     private static double[] range(Node n, Dimension d) {
         List<Node> ends = n.items(2);
         if (ends.size() != 2) {
-            throw n.error("needs exactly two values [lowest, highest], found " + ends.size());
+            throw n.error(InputProblem.OUT_OF_RANGE, "needs exactly two values [lowest, highest], found " + ends.size());
         }
         double lo = ends.get(0).positive(d, null);
         double hi = ends.get(1).positive(d, null);
         if (!(hi > lo)) {
-            throw n.error("lowest must be below highest (write [lowest, highest])");
+            throw n.error(InputProblem.BAD_ORDER, "lowest must be below highest (write [lowest, highest])");
         }
         return new double[] {lo, hi};
     }
@@ -175,7 +175,7 @@ public final class MaterialCodec {
         Node unitNode = n.field("lengthUnit");
         Unit unit = Units.find(unitNode.string());
         if (unit == null || unit.dimension() != Dimension.LENGTH) {
-            throw unitNode.error("expected a length unit (" + Units.accepted(Dimension.LENGTH) + ")");
+            throw unitNode.error(InputProblem.WRONG_UNIT, "expected a length unit (" + Units.accepted(Dimension.LENGTH) + ")");
         }
         double exponent = n.field("exponent").number();
         String source = n.field("source").string();
@@ -183,7 +183,7 @@ public final class MaterialCodec {
         try {
             return new AbsorptionLaw(wavelength, coefficientM2, per, unit.toSi(1), exponent, asExtinction, source);
         } catch (IllegalArgumentException e) {
-            throw n.error(e.getMessage());
+            throw n.error(InputProblem.INVALID_VALUE, e.getMessage());
         }
     }
 }

@@ -69,21 +69,21 @@ public final class MaterialLibrary {
     private static void checkKey(Path f, String key) {
         String stem = f.getFileName().toString().replaceFirst("\\.json$", "");
         if (!stem.equals(key)) {
-            throw new InputException(SourceLocation.of(f.toString()), "key",
+            throw new InputException(SourceLocation.of(f.toString()), "key", InputProblem.MISMATCH,
                     "key '" + key + "' differs from the file name '" + stem + "' (they must match)");
         }
     }
 
     private static List<Path> jsonFiles(Path dir) {
         if (!Files.isDirectory(dir)) {
-            throw new InputException(SourceLocation.of(dir.toString()), null,
+            throw new InputException(SourceLocation.of(dir.toString()), null, InputProblem.NOT_FOUND,
                     "library folder not found (is ladderkin.home set to the ladderkin folder?)");
         }
         try (Stream<Path> s = Files.list(dir)) {
             List<Path> files = new ArrayList<>(s.filter(p -> p.getFileName().toString().endsWith(".json")).sorted().toList());
             return files;
         } catch (IOException e) {
-            throw new InputException(SourceLocation.of(dir.toString()), null, "cannot list folder: " + e.getMessage());
+            throw new InputException(SourceLocation.of(dir.toString()), null, InputProblem.UNREADABLE, "cannot list folder: " + e.getMessage());
         }
     }
 

@@ -39,7 +39,7 @@ public final class MatrixCodec {
         try {
             return new Matrix(key, name, kind, density, heat, k, bp);
         } catch (IllegalArgumentException e) {
-            throw n.error(e.getMessage());
+            throw n.error(InputProblem.INVALID_VALUE, e.getMessage());
         }
     }
 }

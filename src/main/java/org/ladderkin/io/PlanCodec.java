@@ -28,6 +28,7 @@ import org.ladderkin.sample.Sample;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Photon;
 import org.ladderkin.units.Quantity;
+import org.ladderkin.units.QuantityFormatException;
 
 /** Reads campaign plan files, schema {@code ladderkin.plan/1}. */
 public final class PlanCodec {
@@ -63,10 +64,10 @@ public final class PlanCodec {
         for (Node g : goalsNode.field("measure").items(1)) {
             Goal goal = Goal.byKey(g.string());
             if (goal == null) {
-                throw g.error("unknown goal '" + g.string() + "' (allowed: " + Goal.keys() + ")");
+                throw g.error(InputProblem.BAD_CHOICE, "unknown goal '" + g.string() + "' (allowed: " + Goal.keys() + ")");
             }
             if (!goals.add(goal)) {
-                throw g.error("goal '" + g.string() + "' is listed twice");
+                throw g.error(InputProblem.DUPLICATE, "goal '" + g.string() + "' is listed twice");
             }
         }
         List<Double> cmEnergies = new ArrayList<>();
@@ -76,7 +77,7 @@ public final class PlanCodec {
             }
         });
         if (goals.contains(Goal.MULTIPLICATION_YIELD) && cmEnergies.isEmpty()) {
-            throw goalsNode.error("goal 'multiplication-yield' needs 'multiplicationPhotonEnergies' (e.g. [\"3.1 eV\"])");
+            throw goalsNode.error(InputProblem.MISSING_FIELD, "goal 'multiplication-yield' needs 'multiplicationPhotonEnergies' (e.g. [\"3.1 eV\"])");
         }
         goalsNode.finish();
         Limits limits = limits(root.field("limits"));
@@ -102,12 +103,12 @@ public final class PlanCodec {
         Node range = n.field("pulseEnergyRange");
         List<Node> ends = range.items(2);
         if (ends.size() != 2) {
-            throw range.error("needs exactly two energies [lowest, highest], found " + ends.size());
+            throw range.error(InputProblem.OUT_OF_RANGE, "needs exactly two energies [lowest, highest], found " + ends.size());
         }
         double lo = ends.get(0).positive(Dimension.ENERGY, null);
         double hi = ends.get(1).positive(Dimension.ENERGY, null);
         if (lo > hi) {
-            throw range.error("lowest energy is above the highest (write [lowest, highest])");
+            throw range.error(InputProblem.BAD_ORDER, "lowest energy is above the highest (write [lowest, highest])");
         }
         double pump = n.field("pumpRadius").positive(Dimension.LENGTH, null);
         double probe = n.field("probeRadius").positive(Dimension.LENGTH, null);
@@ -125,19 +126,19 @@ public final class PlanCodec {
             Response irf = response(n);
             double countFraction = n.optional("maxCountFraction").map(Node::probability).orElse(0.05);
             if (bin >= range) {
-                throw rangeNode.error("time range must exceed the time bin");
+                throw rangeNode.error(InputProblem.OUT_OF_RANGE, "time range must exceed the time bin");
             }
             inst = new Instrument(Instrument.Kind.TCSPC, bin, range, 0, irf.fwhmS(), countFraction, irf.measured());
         } else {
             Node range = n.field("delayRange");
             List<Node> ends = range.items(2);
             if (ends.size() != 2) {
-                throw range.error("needs exactly two delays [shortest, longest], found " + ends.size());
+                throw range.error(InputProblem.OUT_OF_RANGE, "needs exactly two delays [shortest, longest], found " + ends.size());
             }
             double lo = ends.get(0).positive(Dimension.TIME, null);
             double hi = ends.get(1).positive(Dimension.TIME, null);
             if (lo >= hi) {
-                throw range.error("shortest delay must be below the longest (write [shortest, longest])");
+                throw range.error(InputProblem.BAD_ORDER, "shortest delay must be below the longest (write [shortest, longest])");
             }
             double noise = n.field("noiseFloor").positive(Dimension.ABSORBANCE, null);
             Response irf = response(n);
@@ -160,20 +161,20 @@ public final class PlanCodec {
         Node fwhm = n.optional("irfFwhm").orElse(null);
         if (file == null) {
             if (fwhm == null) {
-                throw new InputException(n.location(), n.path() + ".irfFwhm", "missing required field in '" + n.path()
+                throw new InputException(n.location(), n.path() + ".irfFwhm", InputProblem.MISSING_FIELD, "missing required field in '" + n.path()
                         + "' (add \"irfFwhm\": ... for a Gaussian response, or \"irfFile\": ... for a measured one)");
             }
             return new Response(fwhm.positive(Dimension.TIME, null), null);
         }
         if (fwhm != null) {
-            throw file.error("give either 'irfFwhm' or 'irfFile', not both (a measured response fixes the width)");
+            throw file.error(InputProblem.CONFLICT, "give either 'irfFwhm' or 'irfFile', not both (a measured response fixes the width)");
         }
         if (file.string().isBlank()) {
-            throw file.error("expected the path of an IRF table such as \"fh-ta-irf.csv\"");
+            throw file.error(InputProblem.MISSING_VALUE, "expected the path of an IRF table such as \"fh-ta-irf.csv\"");
         }
         Path p = SampleCodec.baseDir(Path.of(file.location().file())).resolve(file.string());
         if (!java.nio.file.Files.isRegularFile(p)) {
-            throw file.error("IRF file not found: " + p + " (relative paths start at the plan file's folder)");
+            throw file.error(InputProblem.NOT_FOUND, "IRF file not found: " + p + " (relative paths start at the plan file's folder)");
         }
         MeasuredIrf irf = IrfFileReader.read(p, file.string());
         return new Response(irf.fwhmS(), irf);
@@ -183,7 +184,7 @@ public final class PlanCodec {
         Node riseNode = n.field("maxTemperatureRise");
         Quantity rise = riseNode.quantity(Dimension.TEMPERATURE, null);
         if (rise.unit().offsetSi() != 0 || !(rise.si() > 0)) {
-            throw riseNode.error("a temperature rise must be > 0 and given in K (e.g. \"5 K\"), was " + rise.format());
+            throw riseNode.error(rise.unit().offsetSi() != 0 ? InputProblem.WRONG_UNIT : InputProblem.OUT_OF_RANGE, "a temperature rise must be > 0 and given in K (e.g. \"5 K\"), was " + rise.format());
         }
         double dT = rise.si();
         double charged = n.field("maxChargedFraction").probability();
@@ -198,7 +199,7 @@ public final class PlanCodec {
         double tau1 = optionalTime(n, "singleExcitonLifetime");
         double qy = n.optional("plQuantumYield").map(Node::probability).orElse(Double.NaN);
         if (qy == 0) {
-            throw n.field("plQuantumYield").error("must be > 0 (a dot that never emits has no radiative rate to plan with)");
+            throw n.field("plQuantumYield").error(InputProblem.OUT_OF_RANGE, "must be > 0 (a dot that never emits has no radiative rate to plan with)");
         }
         double tau2 = optionalTime(n, "biexcitonLifetime");
         AugerScaling auger = n.optional("augerScaling").map(a -> {
@@ -208,7 +209,7 @@ public final class PlanCodec {
                     return s;
                 }
             }
-            throw a.error("unknown Auger scaling");
+            throw a.error(InputProblem.BAD_CHOICE, "unknown Auger scaling");
         }).orElse(null);
         RadiativeScaling rad = n.optional("radiativeScaling").map(a -> {
             String k = a.choice("linear", "statistical");
@@ -217,7 +218,7 @@ public final class PlanCodec {
                     return s;
                 }
             }
-            throw a.error("unknown radiative scaling");
+            throw a.error(InputProblem.BAD_CHOICE, "unknown radiative scaling");
         }).orElse(null);
         double trionNeg = optionalTime(n, "negativeTrionLifetime");
         double trionPos = optionalTime(n, "positiveTrionLifetime");
@@ -290,12 +291,12 @@ public final class PlanCodec {
     /** A photon given as an energy ("3.1 eV") or a vacuum wavelength ("400 nm"), returned as energy (J). */
     static double photonEnergyJ(Node n) {
         if (n.kind() != Node.Kind.STRING) {
-            throw n.error("expected a photon energy or wavelength such as \"3.1 eV\" or \"400 nm\"");
+            throw n.error(InputProblem.WRONG_TYPE, "expected a photon energy or wavelength such as \"3.1 eV\" or \"400 nm\"");
         }
         try {
             return Photon.parseEnergyJ(n.string());
         } catch (IllegalArgumentException e) {
-            throw n.error(e.getMessage());
+            throw n.error(e instanceof QuantityFormatException q ? InputProblem.of(q) : InputProblem.INVALID_VALUE, e.getMessage());
         }
     }
 }

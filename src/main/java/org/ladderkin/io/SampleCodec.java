@@ -61,7 +61,7 @@ public final class SampleCodec {
         try {
             material = library.material(materialNode.string());
         } catch (IllegalArgumentException e) {
-            throw materialNode.error(e.getMessage());
+            throw materialNode.error(InputProblem.BAD_CHOICE, e.getMessage());
         }
         String sizeBy = n.oneOf("diameter", "firstExcitonPeak");
         Node sizeNode = n.field(sizeBy);
@@ -71,7 +71,7 @@ public final class SampleCodec {
         Node dispersionNode = n.optional("sizeDispersion").orElse(null);
         double dispersion = dispersionNode == null ? 0 : dispersionNode.probability();
         if (dispersion >= 1) {
-            throw dispersionNode.error("must be below 100 %, was " + dispersion * 100 + " %");
+            throw dispersionNode.error(InputProblem.OUT_OF_RANGE, "must be below 100 %, was " + dispersion * 100 + " %");
         }
         String amountBy = n.oneOf("concentration", "absorbance");
         Node amountNode = n.field(amountBy);
@@ -95,14 +95,14 @@ public final class SampleCodec {
             try {
                 matrix = library.matrix(matrixNode.string());
             } catch (IllegalArgumentException e) {
-                throw matrixNode.error(e.getMessage());
+                throw matrixNode.error(InputProblem.BAD_CHOICE, e.getMessage());
             }
         }
         Refresh refresh = refresh(n.field("refresh"));
         Optional<AbsorptionSpectrum> spectrum = n.optional("absorptionSpectrum").map(s -> {
             Path p = baseDir.resolve(s.string());
             if (!java.nio.file.Files.isRegularFile(p)) {
-                throw s.error("spectrum file not found: " + p + " (relative paths start at the sample file's folder)");
+                throw s.error(InputProblem.NOT_FOUND, "spectrum file not found: " + p + " (relative paths start at the sample file's folder)");
             }
             return AbsorptionSpectrumCsv.read(p, s.string());
         });
@@ -119,7 +119,7 @@ public final class SampleCodec {
         try {
             spec = new SampleSpec(name, material, size, dispersion, amount, path, Optional.of(matrix), refresh, spectrum, given);
         } catch (IllegalArgumentException e) {
-            throw n.error(e.getMessage());
+            throw n.error(InputProblem.INVALID_VALUE, e.getMessage());
         }
         return new Located(spec, sizeNode, amountNode, csNode == null ? amountNode : csNode);
     }
@@ -133,9 +133,9 @@ public final class SampleCodec {
                 case AMOUNT -> l.amount();
                 case CROSS_SECTION -> l.crossSection();
             };
-            throw at.error(e.getMessage());
+            throw at.error(InputProblem.INVALID_VALUE, e.getMessage());
         } catch (IllegalArgumentException e) {
-            throw whole.error(e.getMessage());
+            throw whole.error(InputProblem.INVALID_VALUE, e.getMessage());
         }
     }
 

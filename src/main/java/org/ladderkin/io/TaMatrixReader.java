@@ -44,12 +44,12 @@ public final class TaMatrixReader {
     private static Trace read(DelimitedLineReader in, String label, MatrixOptions options) {
         String header = in.nextContentLine();
         if (header == null) {
-            throw new InputException(SourceLocation.of(in.file()), null, "no data (expected a TA matrix: first row one axis, first column the other)");
+            throw new InputException(SourceLocation.of(in.file()), null, InputProblem.EMPTY, "no data (expected a TA matrix: first row one axis, first column the other)");
         }
         in.detectDelimiter(header);
         int width = in.count(header);
         if (width < 2) {
-            throw new InputException(in.here(0), null, "the first row needs a corner cell and at least one axis value");
+            throw new InputException(in.here(0), null, InputProblem.EMPTY, "the first row needs a corner cell and at least one axis value");
         }
         String[] cells = new String[width];
         int[] starts = new int[width];
@@ -60,7 +60,7 @@ public final class TaMatrixReader {
         for (int c = 1; c < width; c++) {
             axis[c - 1] = in.number(cells[c], starts[c], "first row");
             if (Double.isNaN(axis[c - 1])) {
-                throw new InputException(in.here(starts[c]), "first row", "missing axis value (every column needs one)");
+                throw new InputException(in.here(starts[c]), "first row", InputProblem.MISSING_VALUE, "missing axis value (every column needs one)");
             }
         }
         MatrixOptions.Orientation o = orientation(options, corner, axis, in);
@@ -69,7 +69,7 @@ public final class TaMatrixReader {
             delayUnit = options.defaultDelayUnit();
         }
         if (delayUnit == null) {
-            throw new InputException(in.here(starts[0]), "corner cell", "no time unit for the delays (write the corner as "
+            throw new InputException(in.here(starts[0]), "corner cell", InputProblem.WRONG_UNIT, "no time unit for the delays (write the corner as "
                     + "'delay (ps) \\ wavelength (nm)' or give --delay-unit)");
         }
         Unit lambdaUnit = HeaderUnit.find(corner, Dimension.LENGTH);
@@ -99,7 +99,7 @@ public final class TaMatrixReader {
         if (delays && !wavelengths) {
             return MatrixOptions.Orientation.DELAYS_ACROSS;
         }
-        throw new InputException(in.here(0), null, "cannot tell whether the first row holds wavelengths or delays "
+        throw new InputException(in.here(0), null, InputProblem.WRONG_UNIT, "cannot tell whether the first row holds wavelengths or delays "
                 + "(name both in the corner cell, e.g. 'delay (ps) \\ wavelength (nm)', or give the orientation)");
     }
 
@@ -135,7 +135,7 @@ public final class TaMatrixReader {
             selected += inWindow[c] ? 1 : 0;
         }
         if (selected == 0) {
-            throw new InputException(new SourceLocation(in.file(), headerLine, 0), "first row", "no wavelength lies in the window "
+            throw new InputException(new SourceLocation(in.file(), headerLine, 0), "first row", InputProblem.EMPTY, "no wavelength lies in the window "
                     + window(options, lambdaUnit) + " (the file covers " + range(axis) + " " + lambdaUnit.symbol() + ")");
         }
         String[] cells = new String[width];
@@ -150,10 +150,10 @@ public final class TaMatrixReader {
             checkWidth(in, n, width, headerLine);
             double dS = delayUnit.toSi(in.number(cells[0], starts[0], "delay"));
             if (Double.isNaN(dS)) {
-                throw new InputException(in.here(starts[0]), "delay", "missing delay (every row needs one)");
+                throw new InputException(in.here(starts[0]), "delay", InputProblem.MISSING_VALUE, "missing delay (every row needs one)");
             }
             if (delays.size() > 0 && !(dS > previous)) {
-                throw new InputException(in.here(starts[0]), "delay", (dS == previous ? "duplicate delay (also at line " + previousLine + ")"
+                throw new InputException(in.here(starts[0]), "delay", InputProblem.BAD_ORDER, (dS == previous ? "duplicate delay (also at line " + previousLine + ")"
                         : "delay is smaller than the one at line " + previousLine) + " (delays must increase strictly down the file)");
             }
             previous = dS;
@@ -186,7 +186,7 @@ public final class TaMatrixReader {
         for (int c = 1; c < width; c++) {
             double dS = delayUnit.toSi(axis[c - 1]);
             if (c > 1 && !(dS > delays.last())) {
-                throw new InputException(new SourceLocation(in.file(), headerLine, headerStarts[c]), "first row",
+                throw new InputException(new SourceLocation(in.file(), headerLine, headerStarts[c]), "first row", InputProblem.BAD_ORDER,
                         (dS == delays.last() ? "duplicate delay" : "delay smaller than the one before it")
                                 + " (delays must increase strictly along the first row)");
             }
@@ -206,7 +206,7 @@ public final class TaMatrixReader {
             checkWidth(in, n, width, headerLine);
             double lambda = in.number(cells[0], starts[0], "wavelength");
             if (Double.isNaN(lambda)) {
-                throw new InputException(in.here(starts[0]), "wavelength", "missing wavelength (every row needs one)");
+                throw new InputException(in.here(starts[0]), "wavelength", InputProblem.MISSING_VALUE, "missing wavelength (every row needs one)");
             }
             lowSeen = Math.min(lowSeen, lambda);
             highSeen = Math.max(highSeen, lambda);
@@ -226,7 +226,7 @@ public final class TaMatrixReader {
             }
         }
         if (rowsInWindow == 0) {
-            throw new InputException(SourceLocation.of(in.file()), "first column", "no wavelength lies in the window "
+            throw new InputException(SourceLocation.of(in.file()), "first column", InputProblem.EMPTY, "no wavelength lies in the window "
                     + window(options, lambdaUnit) + (lowSeen <= highSeen ? " (the file covers " + fmt(lowSeen) + "–" + fmt(highSeen)
                     + " " + lambdaUnit.symbol() + ")" : " (the file has no wavelength rows)"));
         }
@@ -240,21 +240,21 @@ public final class TaMatrixReader {
 
     private static void rejectMissing(DelimitedLineReader in, MatrixOptions options, int column, int c) {
         if (options.missing() == MissingValuePolicy.REJECT) {
-            throw new InputException(in.here(column), "column " + (c + 1),
+            throw new InputException(in.here(column), "column " + (c + 1), InputProblem.MISSING_VALUE,
                     "missing value in the wavelength window (missing values are refused here; allow them to drop the point)");
         }
     }
 
     private static void checkWidth(DelimitedLineReader in, int n, int width, int headerLine) {
         if (n != width) {
-            throw new InputException(in.here(0), null, "row has " + n + " cell" + (n == 1 ? "" : "s") + " but the first row (line "
+            throw new InputException(in.here(0), null, InputProblem.BAD_SYNTAX, "row has " + n + " cell" + (n == 1 ? "" : "s") + " but the first row (line "
                     + headerLine + ") has " + width + " (ragged row: check for a missing or extra delimiter)");
         }
     }
 
     private static void checkRows(DelimitedLineReader in, int delays) {
         if (delays < TraceAssembler.MIN_POINTS) {
-            throw new InputException(new SourceLocation(in.file(), Math.max(in.lineNumber(), 1), 0), null, "only " + delays
+            throw new InputException(new SourceLocation(in.file(), Math.max(in.lineNumber(), 1), 0), null, InputProblem.EMPTY, "only " + delays
                     + " delay" + (delays == 1 ? "" : "s") + " (a trace needs at least " + TraceAssembler.MIN_POINTS + ")");
         }
     }

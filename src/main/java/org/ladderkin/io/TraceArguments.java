@@ -32,13 +32,13 @@ public final class TraceArguments {
         if (pump != null) {
             Quantity q = parse(pump, "--pump", null);
             if (!(q.si() > 0) || q.dimension() != Dimension.LENGTH && q.dimension() != Dimension.ENERGY) {
-                throw new InputException(SourceLocation.of("--pump"), null, "'" + pump
+                throw new InputException(SourceLocation.of("--pump"), null, InputProblem.OUT_OF_RANGE, "'" + pump
                         + "' is not a positive wavelength or photon energy (write e.g. 400nm or 3.1eV)");
             }
             pumpJ = OptionalDouble.of(q.dimension() == Dimension.LENGTH ? Photon.energyJ(q.si()) : q.si());
         }
         if (excitations.size() != data.size()) {
-            throw new InputException(SourceLocation.of(option), null, excitations.size() + " values for " + data.size()
+            throw new InputException(SourceLocation.of(option), null, InputProblem.MISMATCH, excitations.size() + " values for " + data.size()
                     + " traces (" + String.join(", ", data.labels()) + ")");
         }
         List<TraceMetadata> out = new ArrayList<>();
@@ -47,10 +47,10 @@ public final class TraceArguments {
             Quantity q = parse(excitations.get(i), option, field);
             Excitation e;
             try {
-                e = excitation(q, pumpJ).orElseThrow(() -> new InputException(SourceLocation.of(option), field,
+                e = excitation(q, pumpJ).orElseThrow(() -> new InputException(SourceLocation.of(option), field, InputProblem.MISSING_FIELD,
                         "an energy fluence needs the pump photon energy to count photons (add --pump 400nm)"));
             } catch (IllegalArgumentException bad) {
-                throw new InputException(SourceLocation.of(option), field, bad.getMessage());
+                throw new InputException(SourceLocation.of(option), field, InputProblem.INVALID_VALUE, bad.getMessage());
             }
             out.add(data.traces().get(i).metadata().with(Optional.of(e), pumpJ));
         }
@@ -83,7 +83,7 @@ public final class TraceArguments {
         try {
             return Quantity.parse(text);
         } catch (QuantityFormatException e) {
-            throw new InputException(SourceLocation.of(option), field, e.getMessage());
+            throw new InputException(SourceLocation.of(option), field, InputProblem.of(e), e.getMessage());
         }
     }
 }

@@ -30,10 +30,10 @@ final class TraceAssembler {
             }
         }
         if (present == 0) {
-            throw new InputException(where, field, "no numeric values in this column (all " + n + " are missing)");
+            throw new InputException(where, field, InputProblem.EMPTY, "no numeric values in this column (all " + n + " are missing)");
         }
         if (present < MIN_POINTS) {
-            throw new InputException(where, field, "only " + present + " numeric value" + (present == 1 ? "" : "s")
+            throw new InputException(where, field, InputProblem.EMPTY, "only " + present + " numeric value" + (present == 1 ? "" : "s")
                     + " in this column (a trace needs at least " + MIN_POINTS + ")");
         }
         double[] t = new double[present];
@@ -47,7 +47,7 @@ final class TraceAssembler {
                 continue;
             }
             if (s != null && !(e > 0)) {
-                throw new InputException(where, field, "uncertainty " + e + " at delay " + delaysS.get(i)
+                throw new InputException(where, field, InputProblem.OUT_OF_RANGE, "uncertainty " + e + " at delay " + delaysS.get(i)
                         + " s is not > 0 (uncertainties must be positive)");
             }
             t[k] = delaysS.get(i);
@@ -62,7 +62,7 @@ final class TraceAssembler {
             constant = y[i] == y[0];
         }
         if (constant) {
-            throw new InputException(where, field, "all " + present + " values equal " + y[0]
+            throw new InputException(where, field, InputProblem.INVALID_VALUE, "all " + present + " values equal " + y[0]
                     + " (a constant column carries no kinetics: wrong column, or a detector that was off?)");
         }
         return new Trace(t, y, s, TraceMetadata.labelled(label), n - present);

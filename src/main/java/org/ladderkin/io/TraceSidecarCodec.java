@@ -56,10 +56,10 @@ public final class TraceSidecarCodec {
         boolean byLabel = entries.stream().allMatch(e -> e.has("label"));
         boolean someLabel = entries.stream().anyMatch(e -> e.has("label"));
         if (someLabel && !byLabel) {
-            throw tracesNode.error("either every entry has a 'label' or none does (labels match traces; without labels entries go in order)");
+            throw tracesNode.error(InputProblem.MISMATCH, "either every entry has a 'label' or none does (labels match traces; without labels entries go in order)");
         }
         if (!byLabel && entries.size() != labels.size()) {
-            throw tracesNode.error(entries.size() + " entries for " + labels.size() + " traces (" + String.join(", ", labels)
+            throw tracesNode.error(InputProblem.MISMATCH, entries.size() + " entries for " + labels.size() + " traces (" + String.join(", ", labels)
                     + "); give one entry per trace in order, or label the entries");
         }
         List<TraceMetadata> result = new ArrayList<>();
@@ -75,10 +75,10 @@ public final class TraceSidecarCodec {
                 String label = labelNode.string();
                 index = labels.indexOf(label);
                 if (index < 0) {
-                    throw labelNode.error("no trace is labelled '" + label + "' (traces: " + String.join(", ", labels) + ")");
+                    throw labelNode.error(InputProblem.MISMATCH, "no trace is labelled '" + label + "' (traces: " + String.join(", ", labels) + ")");
                 }
                 if (seen.put(label, labelNode) != null) {
-                    throw labelNode.error("trace '" + label + "' is described twice");
+                    throw labelNode.error(InputProblem.DUPLICATE, "trace '" + label + "' is described twice");
                 }
             }
             OptionalDouble ownPump = e.optional("pump").map(TraceSidecarCodec::photonEnergyJ).orElse(pump);
@@ -95,7 +95,7 @@ public final class TraceSidecarCodec {
         for (String k : kinds) {
             if (e.has(k)) {
                 if (kind != null) {
-                    throw e.error("give only one of '" + kind + "' and '" + k + "' (they say the same thing)");
+                    throw e.error(InputProblem.CONFLICT, "give only one of '" + kind + "' and '" + k + "' (they say the same thing)");
                 }
                 kind = k;
             }
@@ -116,13 +116,13 @@ public final class TraceSidecarCodec {
                 default -> {
                     double jPerM2 = v.positive(Dimension.ENERGY_FLUENCE, null);
                     if (pumpJ.isEmpty()) {
-                        throw v.error("an energy fluence needs the pump photon energy to count photons (add \"pump\": \"400 nm\")");
+                        throw v.error(InputProblem.MISSING_FIELD, "an energy fluence needs the pump photon energy to count photons (add \"pump\": \"400 nm\")");
                     }
                     yield new Excitation(Excitation.Kind.PHOTON_FLUENCE_PER_M2, jPerM2 / pumpJ.getAsDouble());
                 }
             });
         } catch (IllegalArgumentException ex) {
-            throw v.error(ex.getMessage());
+            throw v.error(InputProblem.INVALID_VALUE, ex.getMessage());
         }
     }
 
@@ -130,16 +130,16 @@ public final class TraceSidecarCodec {
     static OptionalDouble photonEnergyJ(Node n) {
         String text = n.kind() == Node.Kind.STRING ? n.string() : null;
         if (text == null) {
-            throw n.error("expected a pump wavelength or photon energy as a string such as \"400 nm\" or \"3.1 eV\"");
+            throw n.error(InputProblem.WRONG_TYPE, "expected a pump wavelength or photon energy as a string such as \"400 nm\" or \"3.1 eV\"");
         }
         Quantity q;
         try {
             q = Quantity.parse(text);
         } catch (QuantityFormatException e) {
-            throw n.error(e.getMessage());
+            throw n.error(InputProblem.of(e), e.getMessage());
         }
         if (!(q.si() > 0)) {
-            throw n.error("must be > 0, was " + q.format());
+            throw n.error(InputProblem.OUT_OF_RANGE, "must be > 0, was " + q.format());
         }
         if (q.dimension() == Dimension.LENGTH) {
             return OptionalDouble.of(Photon.energyJ(q.si()));
@@ -147,6 +147,6 @@ public final class TraceSidecarCodec {
         if (q.dimension() == Dimension.ENERGY) {
             return OptionalDouble.of(q.si());
         }
-        throw n.error("'" + text + "' is neither a wavelength nor a photon energy (write e.g. \"400 nm\" or \"3.1 eV\")");
+        throw n.error(InputProblem.WRONG_UNIT, "'" + text + "' is neither a wavelength nor a photon energy (write e.g. \"400 nm\" or \"3.1 eV\")");
     }
 }

@@ -54,7 +54,7 @@ public final class TraceTableReader {
                 String label = traces.size() == 1 && paths.size() > 1 ? stem(p)
                         : labels.contains(t.label()) ? stem(p) + ":" + t.label() : t.label();
                 if (!labels.add(label)) {
-                    throw new InputException(SourceLocation.of(name), null, "trace label '" + label
+                    throw new InputException(SourceLocation.of(name), null, InputProblem.DUPLICATE, "trace label '" + label
                             + "' is used by an earlier file (rename the file or the column)");
                 }
                 all.add(t.withMetadata(new TraceMetadata(label, t.metadata().excitation(), t.metadata().photonEnergyJ())));
@@ -73,7 +73,7 @@ public final class TraceTableReader {
     private static List<Trace> readTraces(DelimitedLineReader in, TableOptions options) {
         String header = in.nextContentLine();
         if (header == null) {
-            throw new InputException(SourceLocation.of(in.file()), null,
+            throw new InputException(SourceLocation.of(in.file()), null, InputProblem.EMPTY,
                     "no data (expected a header line such as 'delay (ps),1 nJ,2 nJ' and rows of numbers)");
         }
         in.detectDelimiter(header);
@@ -89,11 +89,11 @@ public final class TraceTableReader {
         boolean trailingDelimiter = cellsPerRow > 2 && names[cellsPerRow - 1].isEmpty();
         int width = trailingDelimiter ? cellsPerRow - 1 : cellsPerRow;
         if (allNumeric(java.util.Arrays.copyOf(names, width))) {
-            throw new InputException(in.here(0), null, "missing header line: the first line holds numbers "
+            throw new InputException(in.here(0), null, InputProblem.MISSING_FIELD, "missing header line: the first line holds numbers "
                     + "(add a line naming the columns, e.g. 'delay (ps)" + in.delimiter() + "1 nJ" + in.delimiter() + "2 nJ')");
         }
         if (width < 2) {
-            throw new InputException(in.here(0), null, "needs a delay column and at least one signal column");
+            throw new InputException(in.here(0), null, InputProblem.EMPTY, "needs a delay column and at least one signal column");
         }
         Unit delayUnit = HeaderUnit.of(names[0], Dimension.TIME, options.defaultDelayUnit(), in.here(starts[0]), "--delay-unit");
 
@@ -105,11 +105,11 @@ public final class TraceTableReader {
         for (int c = 1; c < width; c++) {
             String h = names[c].strip();
             if (h.isEmpty()) {
-                throw new InputException(in.here(starts[c]), null, "column " + (c + 1) + " has an empty header (name every column)");
+                throw new InputException(in.here(starts[c]), null, InputProblem.MISSING_FIELD, "column " + (c + 1) + " has an empty header (name every column)");
             }
             if (errorBase(h) == null) {
                 if (signalByName.put(h, c) != null) {
-                    throw new InputException(in.here(starts[c]), h, "two columns have this header (headers must be unique)");
+                    throw new InputException(in.here(starts[c]), h, InputProblem.DUPLICATE, "two columns have this header (headers must be unique)");
                 }
                 signalColumns.add(c);
             }
@@ -119,14 +119,14 @@ public final class TraceTableReader {
             if (base != null) {
                 Integer target = signalByName.get(base);
                 if (target == null) {
-                    throw new InputException(in.here(starts[c]), names[c].strip(),
+                    throw new InputException(in.here(starts[c]), names[c].strip(), InputProblem.MISMATCH,
                             "uncertainty column for '" + base + "', but no column has that header");
                 }
                 sigmaOf[target] = c;
             }
         }
         if (signalColumns.isEmpty()) {
-            throw new InputException(in.here(0), null, "no signal column (only uncertainty columns follow the delays)");
+            throw new InputException(in.here(0), null, InputProblem.EMPTY, "no signal column (only uncertainty columns follow the delays)");
         }
 
         GrowableDoubles delays = new GrowableDoubles();
@@ -144,20 +144,20 @@ public final class TraceTableReader {
         while ((line = in.nextContentLine()) != null) {
             int n = in.bounds(line, cellFrom, cellTo);
             if (n != cellsPerRow || trailingDelimiter && !line.substring(cellFrom[width], cellTo[width]).isBlank()) {
-                throw new InputException(in.here(0), null, "row has " + n + " cell" + (n == 1 ? "" : "s") + " but the header at line "
+                throw new InputException(in.here(0), null, InputProblem.BAD_SYNTAX, "row has " + n + " cell" + (n == 1 ? "" : "s") + " but the header at line "
                         + headerLine + " has " + cellsPerRow + (trailingDelimiter ? " (the last one empty)" : "")
                         + " (ragged row: check for a missing or extra delimiter)");
             }
             double d = in.number(line, cellFrom[0], cellTo[0], names[0].strip());
             if (Double.isNaN(d)) {
-                throw new InputException(in.here(cellFrom[0] + 1), names[0].strip(), "missing delay (every row needs one)");
+                throw new InputException(in.here(cellFrom[0] + 1), names[0].strip(), InputProblem.MISSING_VALUE, "missing delay (every row needs one)");
             }
             double dS = d * factor + offset;
             if (delays.size() > 0 && !(dS > previous)) {
                 String what = dS == previous ? "duplicate delay " + fmt(d) + " " + delayUnit.symbol() + " (also at line " + previousLine + ")"
                         : "delay " + fmt(d) + " " + delayUnit.symbol() + " is smaller than " + fmt((previous - offset) / factor) + " "
                         + delayUnit.symbol() + " at line " + previousLine;
-                throw new InputException(in.here(cellFrom[0] + 1), names[0].strip(), what + " (delays must increase strictly down the file)");
+                throw new InputException(in.here(cellFrom[0] + 1), names[0].strip(), InputProblem.BAD_ORDER, what + " (delays must increase strictly down the file)");
             }
             delays.add(dS);
             previous = dS;
@@ -165,14 +165,14 @@ public final class TraceTableReader {
             for (int c = 1; c < width; c++) {
                 double v = in.number(line, cellFrom[c], cellTo[c], names[c].strip());
                 if (Double.isNaN(v) && options.missing() == MissingValuePolicy.REJECT) {
-                    throw new InputException(in.here(cellFrom[c] + 1), names[c].strip(),
+                    throw new InputException(in.here(cellFrom[c] + 1), names[c].strip(), InputProblem.MISSING_VALUE,
                             "missing value (missing values are refused here; allow them to drop the point)");
                 }
                 columns[c].add(v);
             }
         }
         if (delays.size() < TraceAssembler.MIN_POINTS) {
-            throw new InputException(new SourceLocation(in.file(), in.lineNumber(), 0), null, "only " + delays.size()
+            throw new InputException(new SourceLocation(in.file(), in.lineNumber(), 0), null, InputProblem.EMPTY, "only " + delays.size()
                     + " data row" + (delays.size() == 1 ? "" : "s") + " (a trace needs at least " + TraceAssembler.MIN_POINTS + " delays)");
         }
         List<Trace> traces = new ArrayList<>();

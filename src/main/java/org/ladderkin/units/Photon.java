@@ -36,7 +36,7 @@ public final class Photon {
         if (q.si() > 0 && q.dimension() == Dimension.ENERGY) {
             return q.si();
         }
-        throw new QuantityFormatException(text, "expected a photon energy or wavelength such as \"3.1 eV\" or \"400 nm\", was '"
+        throw new QuantityFormatException(text, QuantityFormatException.Reason.WRONG_DIMENSION, "expected a photon energy or wavelength such as \"3.1 eV\" or \"400 nm\", was '"
                 + text + "'");
     }
 

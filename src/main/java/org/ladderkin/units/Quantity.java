@@ -68,11 +68,11 @@ public record Quantity(double value, Unit unit) {
         Matcher m = NUMBER_THEN_UNIT.matcher(text);
         String wanted = expected == null ? "a quantity such as 50 ps" : "a " + expected.label() + " such as " + expected.example();
         if (!m.matches()) {
-            throw new QuantityFormatException(text, "cannot read a number in '" + text + "': expected " + wanted);
+            throw new QuantityFormatException(text, QuantityFormatException.Reason.BAD_NUMBER, "cannot read a number in '" + text + "': expected " + wanted);
         }
         double number = Double.parseDouble(m.group(1));
         if (!Double.isFinite(number)) {
-            throw new QuantityFormatException(text, "number out of range in '" + text + "'");
+            throw new QuantityFormatException(text, QuantityFormatException.Reason.OUT_OF_RANGE, "number out of range in '" + text + "'");
         }
         String unitText = m.group(2);
         if (unitText.isEmpty()) {
@@ -82,17 +82,17 @@ public record Quantity(double value, Unit unit) {
             if (expected == Dimension.ABSORBANCE) {
                 return new Quantity(number, Units.of("OD"));
             }
-            throw new QuantityFormatException(text, "missing unit in '" + text + "': expected " + wanted
+            throw new QuantityFormatException(text, QuantityFormatException.Reason.MISSING_UNIT, "missing unit in '" + text + "': expected " + wanted
                     + " (units: " + Units.accepted(expected) + ")");
         }
         Unit unit = Units.find(unitText);
         if (unit == null) {
             String list = expected == null ? "see 'ladderkin --help'" : Units.accepted(expected);
-            throw new QuantityFormatException(text, "unknown unit '" + unitText + "' in '" + text + "': expected "
+            throw new QuantityFormatException(text, QuantityFormatException.Reason.UNKNOWN_UNIT, "unknown unit '" + unitText + "' in '" + text + "': expected "
                     + (expected == null ? "a known unit" : "a " + expected.label() + " in " + list));
         }
         if (expected != null && unit.dimension() != expected) {
-            throw new QuantityFormatException(text, "'" + text + "' is " + article(unit.dimension().label()) + ", expected "
+            throw new QuantityFormatException(text, QuantityFormatException.Reason.WRONG_DIMENSION, "'" + text + "' is " + article(unit.dimension().label()) + ", expected "
                     + wanted + " (units: " + Units.accepted(expected) + ")");
         }
         return new Quantity(number, unit);

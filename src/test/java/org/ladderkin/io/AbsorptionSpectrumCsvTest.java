@@ -2,6 +2,7 @@ package org.ladderkin.io;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.ladderkin.io.InputAssertions.input;
 
 import java.nio.file.Path;
 import java.util.List;
@@ -27,17 +28,17 @@ class AbsorptionSpectrumCsvTest {
     @Test
     void problemsNameFileAndLine() {
         assertThatThrownBy(() -> parse("lambda,A\n400,0.5\n"))
-                .hasMessage("a.csv:1: expected the header 'wavelength_nm,absorbance', found 'lambda,A'");
+                .satisfies(input(InputProblem.MISSING_FIELD, "a.csv:1", null));
         assertThatThrownBy(() -> parse("wavelength_nm,absorbance\n400,0.5\n450;0.3\n"))
-                .hasMessage("a.csv:3: expected two values 'wavelength_nm,absorbance', found 1");
+                .satisfies(input(InputProblem.BAD_SYNTAX, "a.csv:3", null));
         assertThatThrownBy(() -> parse("wavelength_nm,absorbance\n400,0.5\n450,abc\n"))
-                .hasMessage("a.csv:3: absorbance is not a number: 'abc'");
+                .satisfies(input(InputProblem.BAD_NUMBER, "a.csv:3", null));
         assertThatThrownBy(() -> parse("wavelength_nm,absorbance\n400,0.5\n450,0.4\n450,0.3\n"))
-                .hasMessage("a.csv:4: wavelengths must keep rising without repeats, but 450 nm follows 450 nm");
+                .satisfies(input(InputProblem.BAD_ORDER, "a.csv:4", null));
         assertThatThrownBy(() -> parse("wavelength_nm,absorbance\n400,0.5\n"))
-                .hasMessage("a.csv:3: needs at least two data lines, found 1");
+                .satisfies(input(InputProblem.EMPTY, "a.csv:3", null));
         assertThatThrownBy(() -> parse("wavelength_nm,absorbance\n-400,0.5\n450,0.3\n"))
-                .hasMessage("a.csv:2: wavelength must be > 0 nm, was -400");
+                .satisfies(input(InputProblem.OUT_OF_RANGE, "a.csv:2", null));
     }
 
     @Test
@@ -48,6 +49,6 @@ class AbsorptionSpectrumCsvTest {
 
     @Test
     void missingFile(@TempDir Path dir) {
-        assertThatThrownBy(() -> AbsorptionSpectrumCsv.read(dir.resolve("x.csv"), "x.csv")).hasMessage("x.csv: file not found");
+        assertThatThrownBy(() -> AbsorptionSpectrumCsv.read(dir.resolve("x.csv"), "x.csv")).satisfies(input(InputProblem.NOT_FOUND, "x.csv", null));
     }
 }

@@ -2,6 +2,7 @@ package org.ladderkin.io;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.ladderkin.io.InputAssertions.input;
 import static org.assertj.core.api.Assertions.within;
 
 import java.nio.file.Files;
@@ -51,7 +52,7 @@ class IrfFileReaderTest {
     @Test
     void missingFile(@TempDir Path dir) {
         assertThatThrownBy(() -> IrfFileReader.read(dir.resolve("none.csv"), "none.csv")).isInstanceOf(InputException.class)
-                .hasMessage("none.csv: file not found");
+                .satisfies(input(InputProblem.NOT_FOUND, "none.csv", null));
     }
 
     @ParameterizedTest(name = "{0}")

@@ -2,6 +2,7 @@ package org.ladderkin.io;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.ladderkin.io.InputAssertions.input;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -88,6 +89,6 @@ class PlanIrfFileTest {
         Path plan = dir.resolve("p.plan.json");
         Files.writeString(plan, demoWith("\"irfFile\": \"ta.csv\""));
         assertThatThrownBy(() -> PlanCodec.read(plan)).isInstanceOf(InputException.class)
-                .hasMessageStartingWith("ta.csv:4:3: field 'response': 'oops' is not a number");
+                .satisfies(input(InputProblem.BAD_NUMBER, "ta.csv:4:3", "response"));
     }
 }

@@ -2,6 +2,7 @@ package org.ladderkin.io;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.ladderkin.io.InputAssertions.input;
 import static org.assertj.core.api.Assertions.within;
 
 import java.io.IOException;
@@ -67,7 +68,7 @@ class TaMatrixReaderTest {
         // 1, 2, 5: too short for wavelengths in nm, too narrow a span to be sure they are delays
         Path p = write("e.csv", ",1,2,5\n580,1,2,3\n590,1,2,3\n600,3,2,1\n");
         assertThatThrownBy(() -> TaMatrixReader.read(p, "e.csv", WINDOW))
-                .hasMessageStartingWith("e.csv:1: cannot tell whether the first row holds wavelengths or delays");
+                .satisfies(input(InputProblem.WRONG_UNIT, "e.csv:1", null));
         Trace t = TaMatrixReader.read(p, "e.csv", WINDOW.withOrientation(MatrixOptions.Orientation.DELAYS_ACROSS));
         assertThat(t.delaysS()).containsExactly(1e-12, 2e-12, 5e-12);
     }
@@ -85,31 +86,31 @@ class TaMatrixReaderTest {
     void rejections() throws IOException {
         Path outside = write("g.csv", DOWN);
         assertThatThrownBy(() -> TaMatrixReader.read(outside, "g.csv", MatrixOptions.window(400e-9, 410e-9, null)))
-                .hasMessage("g.csv:1: field 'first row': no wavelength lies in the window 400–410 nm (the file covers 570–590 nm)");
+                .satisfies(input(InputProblem.EMPTY, "g.csv:1", "first row"));
         Path unsorted = write("h.csv", "delay (ps) \\ wavelength (nm),580\n0,1\n2,0.5\n1,0.2\n");
         assertThatThrownBy(() -> TaMatrixReader.read(unsorted, "h.csv", WINDOW))
-                .hasMessageStartingWith("h.csv:4:1: field 'delay': delay is smaller than the one at line 3");
+                .satisfies(input(InputProblem.BAD_ORDER, "h.csv:4:1", "delay"));
         Path ragged = write("i.csv", "delay (ps) \\ wavelength (nm),580,590\n0,1,1\n1,0.5\n2,0.2,0.1\n");
         assertThatThrownBy(() -> TaMatrixReader.read(ragged, "i.csv", WINDOW))
-                .hasMessageStartingWith("i.csv:3: row has 2 cells but the first row (line 1) has 3");
+                .satisfies(input(InputProblem.BAD_SYNTAX, "i.csv:3", null));
         Path text = write("j.csv", "delay (ps) \\ wavelength (nm),580\n0,1\n1,x\n2,0.2\n");
         assertThatThrownBy(() -> TaMatrixReader.read(text, "j.csv", WINDOW))
-                .hasMessageStartingWith("j.csv:3:3: field 'column 2': 'x' is not a number");
+                .satisfies(input(InputProblem.BAD_NUMBER, "j.csv:3:3", "column 2"));
         Path two = write("k.csv", "delay (ps) \\ wavelength (nm),580\n0,1\n1,0.5\n");
         assertThatThrownBy(() -> TaMatrixReader.read(two, "k.csv", WINDOW))
-                .hasMessageStartingWith("k.csv:3: only 2 delays (a trace needs at least 3)");
+                .satisfies(input(InputProblem.EMPTY, "k.csv:3", null));
         Path flat = write("l.csv", "delay (ps) \\ wavelength (nm),580\n0,1\n1,1\n2,1\n");
         assertThatThrownBy(() -> TaMatrixReader.read(flat, "l.csv", WINDOW))
-                .hasMessageStartingWith("l.csv:1: field 'window 575–585 nm': all 3 values equal 1.0");
+                .satisfies(input(InputProblem.INVALID_VALUE, "l.csv:1", "window 575–585 nm"));
         Path nan = write("m.csv", "delay (ps) \\ wavelength (nm),580\n0,NaN\n1,\n2,nan\n");
         assertThatThrownBy(() -> TaMatrixReader.read(nan, "m.csv", WINDOW))
-                .hasMessageStartingWith("m.csv:1: field 'window 575–585 nm': no numeric values in this column (all 3 are missing)");
+                .satisfies(input(InputProblem.EMPTY, "m.csv:1", "window 575–585 nm"));
         Path dupAcross = write("n.csv", "wavelength (nm) \\ delay (ps),0,1,1\n580,1,2,3\n");
         assertThatThrownBy(() -> TaMatrixReader.read(dupAcross, "n.csv", WINDOW))
-                .hasMessageStartingWith("n.csv:1:34: field 'first row': duplicate delay");
+                .satisfies(input(InputProblem.BAD_ORDER, "n.csv:1:34", "first row"));
         Path noUnit = write("o.csv", ",570,580,590\n-1,0,0,0\n0,1,2,3\n10,0.5,1,1.5\n");
         assertThatThrownBy(() -> TaMatrixReader.read(noUnit, "o.csv", MatrixOptions.window(575e-9, 585e-9, null)))
-                .hasMessageStartingWith("o.csv:1:1: field 'corner cell': no time unit for the delays");
+                .satisfies(input(InputProblem.WRONG_UNIT, "o.csv:1:1", "corner cell"));
     }
 
     @Test
@@ -128,6 +129,6 @@ class TaMatrixReaderTest {
         MatrixOptions strict = new MatrixOptions(MatrixOptions.Orientation.DETECT, 575e-9, 585e-9, Units.of("ps"), Units.of("nm"),
                 MissingValuePolicy.REJECT);
         assertThatThrownBy(() -> TaMatrixReader.read(missing, "r.csv", strict))
-                .hasMessageStartingWith("r.csv:3:3: field 'column 2': missing value in the wavelength window");
+                .satisfies(input(InputProblem.MISSING_VALUE, "r.csv:3:3", "column 2"));
     }
 }

@@ -5,15 +5,15 @@ import java.util.Deque;
 import java.util.Objects;
 
 /**
- * Undo and redo as snapshots of the whole plan document (its JSON text). A plan is a few kilobytes, so snapshots are
- * cheaper to get right than inverse operations. Consecutive edits with the same coalescing key (typing in one field)
+ * Undo and redo as snapshots of the whole plan document. A plan is a few kilobytes, so snapshots are cheaper to get
+ * right than inverse operations. Snapshots must not change once handed over. Consecutive edits with the same coalescing key (typing in one field)
  * make one undo step until {@link #boundary()} is called (focus left the field, a save, an undo).
  */
-public final class EditHistory {
+public final class EditHistory<S> {
 
     private final int capacity;
-    private final Deque<String> undo = new ArrayDeque<>();
-    private final Deque<String> redo = new ArrayDeque<>();
+    private final Deque<S> undo = new ArrayDeque<>();
+    private final Deque<S> redo = new ArrayDeque<>();
     private String openKey;
 
     /** @param capacity how many undo steps are kept; older ones are dropped */
@@ -30,7 +30,7 @@ public final class EditHistory {
      * @param before the document as it was before this edit
      * @param key    coalescing key (the field's path), or null for an edit that never merges
      */
-    public void beforeEdit(String before, String key) {
+    public void beforeEdit(S before, String key) {
         Objects.requireNonNull(before, "before");
         redo.clear();
         if (key != null && key.equals(openKey)) {
@@ -57,7 +57,7 @@ public final class EditHistory {
     }
 
     /** The snapshot to return to, given the current document; the current one becomes redoable. */
-    public String undo(String current) {
+    public S undo(S current) {
         if (undo.isEmpty()) {
             throw new IllegalStateException("nothing to undo");
         }
@@ -67,7 +67,7 @@ public final class EditHistory {
     }
 
     /** The snapshot undone last, given the current document; the current one becomes undoable. */
-    public String redo(String current) {
+    public S redo(S current) {
         if (redo.isEmpty()) {
             throw new IllegalStateException("nothing to redo");
         }

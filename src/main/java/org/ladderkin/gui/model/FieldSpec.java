@@ -216,7 +216,7 @@ public record FieldSpec(String label, JsonPath path, Kind kind, Dimension dimens
 
     private static void positiveOrZero(Quantity q) {
         if (q.si() < 0 && q.unit().offsetSi() == 0) {
-            throw new QuantityFormatException(q.format(), "must not be negative, was " + q.format());
+            throw new QuantityFormatException(q.format(), QuantityFormatException.Reason.OUT_OF_RANGE, "must not be negative, was " + q.format());
         }
     }
 

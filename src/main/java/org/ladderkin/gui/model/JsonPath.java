@@ -1,32 +1,33 @@
 package org.ladderkin.gui.model;
 
+import com.fasterxml.jackson.core.JsonPointer;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.util.ArrayList;
-import java.util.List;
 import java.util.Objects;
 
 /**
- * A dotted path into a JSON document, spelled the way {@link org.ladderkin.io.InputException#field()} names fields:
- * {@code laser.pulseEnergyRange[1]}, {@code instruments[0].irfFwhm}. Forms bind their fields to such paths, so an
- * error from the plan reader lands on the field that shows the offending value.
+ * A form field's place in the plan document, spelled the way {@link org.ladderkin.io.InputException#field()} names
+ * fields ({@code laser.pulseEnergyRange[1]}, {@code instruments[0].irfFwhm}) so an error from the plan reader lands
+ * on the field that shows the offending value. Reading and removing go through the equivalent Jackson
+ * {@link JsonPointer}; only setting is done here, because a form may fill an item beyond the end of a list and
+ * Jackson has no "grow the list up to this index" operation.
  */
 public final class JsonPath {
 
     private final String text;
-    private final List<Object> steps;
+    private final JsonPointer pointer;
 
-    private JsonPath(String text, List<Object> steps) {
+    private JsonPath(String text, JsonPointer pointer) {
         this.text = text;
-        this.steps = List.copyOf(steps);
+        this.pointer = pointer;
     }
 
     /** Parses {@code a.b[2].c}; names are non-empty, indexes are whole numbers ≥ 0. */
     public static JsonPath of(String text) {
         Objects.requireNonNull(text, "path");
-        List<Object> steps = new ArrayList<>();
+        JsonPointer p = JsonPointer.empty();
         int i = 0;
         while (i < text.length()) {
             char c = text.charAt(i);
@@ -35,7 +36,7 @@ public final class JsonPath {
                 if (close < 0) {
                     throw new IllegalArgumentException("unclosed '[' in path '" + text + "'");
                 }
-                steps.add(Integer.parseInt(text.substring(i + 1, close)));
+                p = p.appendIndex(Integer.parseInt(text.substring(i + 1, close)));
                 i = close + 1;
             } else if (c == '.') {
                 i++;
@@ -44,26 +45,25 @@ public final class JsonPath {
                 while (end < text.length() && text.charAt(end) != '.' && text.charAt(end) != '[') {
                     end++;
                 }
-                steps.add(text.substring(i, end));
+                p = p.appendProperty(text.substring(i, end));
                 i = end;
             }
         }
-        if (steps.isEmpty()) {
+        if (p.matches()) {
             throw new IllegalArgumentException("empty path");
         }
-        return new JsonPath(text, steps);
+        return new JsonPath(text, p);
+    }
+
+    /** The same place as a JSON Pointer ("/laser/pulseEnergyRange/1"). */
+    public JsonPointer pointer() {
+        return pointer;
     }
 
     /** The node at this path, or null when any step is missing. */
     public JsonNode get(JsonNode root) {
-        JsonNode n = root;
-        for (Object step : steps) {
-            if (n == null) {
-                return null;
-            }
-            n = step instanceof Integer index ? (n.isArray() ? n.get(index) : null) : (n.isObject() ? n.get((String) step) : null);
-        }
-        return n;
+        JsonNode n = root.at(pointer);
+        return n.isMissingNode() ? null : n;
     }
 
     /**
@@ -71,52 +71,45 @@ public final class JsonPath {
      * strings up to the index.
      */
     public void set(ObjectNode root, JsonNode value) {
-        JsonNode parent = parent(root, true);
-        Object last = steps.get(steps.size() - 1);
-        if (last instanceof Integer index) {
-            ArrayNode array = (ArrayNode) parent;
-            while (array.size() <= index) {
-                array.add("");
+        JsonNode n = root;
+        for (JsonPointer step = pointer; ; step = step.tail()) {
+            JsonPointer rest = step.tail();
+            if (rest.matches()) {
+                put(n, step, value);
+                return;
             }
-            array.set(index, value);
-        } else {
-            ((ObjectNode) parent).set((String) last, value);
+            JsonNode child = child(n, step);
+            if (child == null || !child.isContainerNode()) {
+                // a pointer cannot say "[1]" from ".1"; the forms' paths never name a field with a number
+                child = rest.getMatchingIndex() >= 0
+                        ? JsonNodeFactory.instance.arrayNode() : JsonNodeFactory.instance.objectNode();
+                put(n, step, child);
+            }
+            n = child;
         }
     }
 
     /** Removes the value at this path if present (an object field; array items are never removed by a form). */
     public void remove(ObjectNode root) {
-        JsonNode parent = parent(root, false);
-        Object last = steps.get(steps.size() - 1);
-        if (parent instanceof ObjectNode o && last instanceof String name) {
-            o.remove(name);
+        if (root.at(pointer.head()) instanceof ObjectNode parent) {
+            parent.remove(pointer.last().getMatchingProperty());
         }
     }
 
-    private JsonNode parent(ObjectNode root, boolean create) {
-        JsonNode n = root;
-        for (int i = 0; i < steps.size() - 1; i++) {
-            Object step = steps.get(i);
-            Object next = steps.get(i + 1);
-            JsonNode child = step instanceof Integer index ? n.get(index) : n.get((String) step);
-            if (child == null || child.isNull() || !(child.isContainerNode())) {
-                if (!create) {
-                    return null;
-                }
-                child = next instanceof Integer ? JsonNodeFactory.instance.arrayNode() : JsonNodeFactory.instance.objectNode();
-                if (step instanceof Integer index) {
-                    ArrayNode array = (ArrayNode) n;
-                    while (array.size() <= index) {
-                        array.add("");
-                    }
-                    array.set(index, child);
-                } else {
-                    ((ObjectNode) n).set((String) step, child);
-                }
+    private static JsonNode child(JsonNode n, JsonPointer step) {
+        return n.isArray() ? n.get(step.getMatchingIndex()) : n.get(step.getMatchingProperty());
+    }
+
+    private static void put(JsonNode parent, JsonPointer step, JsonNode value) {
+        if (parent instanceof ArrayNode array) {
+            int index = step.getMatchingIndex();
+            while (array.size() <= index) {
+                array.add("");
             }
-            n = child;
+            array.set(index, value);
+        } else {
+            ((ObjectNode) parent).set(step.getMatchingProperty(), value);
         }
-        return n;
     }
 
     /**

@@ -1,13 +1,13 @@
 package org.ladderkin.gui.model;
 
+// Over 400 lines: one editor state (document, positions, history, file, check) kept consistent in one place.
+
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.fasterxml.jackson.databind.node.TextNode;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -18,10 +18,12 @@ import java.util.Optional;
 import java.util.concurrent.CopyOnWriteArrayList;
 import org.ladderkin.io.AtomicFiles;
 import org.ladderkin.io.InputException;
+import org.ladderkin.io.InputProblem;
 import org.ladderkin.io.ResolvedJson;
 import org.ladderkin.io.SampleCodec;
 import org.ladderkin.io.SourceLocation;
 import org.ladderkin.io.json.JsonTree;
+import org.ladderkin.io.json.SourcePositions;
 import org.ladderkin.plan.PlanInputs;
 
 /**
@@ -50,18 +52,24 @@ public final class PlanEditor {
     private static final ObjectMapper MAPPER = new ObjectMapper();
     private static final int UNDO_STEPS = 200;
 
-    private final EditHistory history = new EditHistory(UNDO_STEPS);
+    /** An undo step: the document and where its values stood in the file (both never changed once stored). */
+    private record Snapshot(ObjectNode document, SourcePositions positions) {
+    }
+
+    private final EditHistory<Snapshot> history = new EditHistory<>(UNDO_STEPS);
     private final Map<String, String> typedProblems = new LinkedHashMap<>();
     private final List<Listener> listeners = new CopyOnWriteArrayList<>();
+    // edited by replacement only: every change builds a new tree, so a snapshot handed to the history stays as it was
     private ObjectNode document;
-    private String savedText;
+    private SourcePositions positions = SourcePositions.NONE;
+    private ObjectNode saved;
     private Path file;
     private PlanCheck check;
     private PlanInputs lastValid;
 
     /** An editor on a new, untitled, blank plan. */
     public PlanEditor() {
-        replace(PlanTemplate.blank(), null);
+        replace(PlanTemplate.blank().deepCopy(), SourcePositions.NONE, null);
     }
 
     public void addListener(Listener l) {
@@ -101,7 +109,7 @@ public final class PlanEditor {
 
     /** Whether the document differs from what was last opened or saved. */
     public boolean isDirty() {
-        return !text().equals(savedText);
+        return saved == null || !saved.equals(document);
     }
 
     /** The outcome of reading the current document as a plan. */
@@ -200,18 +208,17 @@ public final class PlanEditor {
         Optional<String> typed = field.check(text);
         boolean problemChanged = !Objects.equals(typedProblems.get(path), typed.orElse(null));
         typed.ifPresentOrElse(p -> typedProblems.put(path, p), () -> typedProblems.remove(path));
-        String before = text();
         ObjectNode next = document.deepCopy();
         field.toJson(text).ifPresentOrElse(v -> field.path().set(next, v), () -> field.path().remove(next));
-        String after = ResolvedJson.toText(next);
-        if (after.equals(before)) {
+        if (next.equals(document)) {
             if (problemChanged) {
                 fire(Change.EDIT, path);
             }
             return;
         }
-        history.beforeEdit(before, path);
+        history.beforeEdit(new Snapshot(document, positions), path);
         document = next;
+        positions = positions.without(field.path().pointer());
         recheck();
         fire(Change.EDIT, path);
     }
@@ -225,8 +232,8 @@ public final class PlanEditor {
         if (edits.isEmpty()) {
             return;
         }
-        String before = text();
         ObjectNode next = document.deepCopy();
+        SourcePositions nextPositions = positions;
         boolean problemChanged = false;
         for (Map.Entry<FieldSpec, String> e : edits) {
             FieldSpec field = e.getKey();
@@ -235,17 +242,19 @@ public final class PlanEditor {
             problemChanged |= !Objects.equals(typedProblems.get(path), typed.orElse(null));
             typed.ifPresentOrElse(p -> typedProblems.put(path, p), () -> typedProblems.remove(path));
             field.toJson(e.getValue()).ifPresentOrElse(v -> field.path().set(next, v), () -> field.path().remove(next));
+            nextPositions = nextPositions.without(field.path().pointer());
         }
-        if (ResolvedJson.toText(next).equals(before)) {
+        if (next.equals(document)) {
             if (problemChanged) {
                 fire(Change.REPLACED, null);
             }
             return;
         }
         history.boundary();
-        history.beforeEdit(before, null);
+        history.beforeEdit(new Snapshot(document, positions), null);
         history.boundary();
         document = next;
+        positions = nextPositions;
         recheck();
         fire(Change.REPLACED, null);
     }
@@ -256,18 +265,18 @@ public final class PlanEditor {
     }
 
     public void undo() {
-        restoreSnapshot(history.undo(text()));
+        restoreSnapshot(history.undo(new Snapshot(document, positions)));
     }
 
     public void redo() {
-        restoreSnapshot(history.redo(text()));
+        restoreSnapshot(history.redo(new Snapshot(document, positions)));
     }
 
     // ---- files -------------------------------------------------------------------------------------------------
 
     /** Replaces the document with a blank plan, untitled. */
     public void newPlan() {
-        replace(PlanTemplate.blank(), null);
+        replace(PlanTemplate.blank().deepCopy(), SourcePositions.NONE, null);
         fire(Change.REPLACED, null);
     }
 
@@ -278,17 +287,13 @@ public final class PlanEditor {
      * @throws InputException when the file is missing, not UTF-8 or not well-formed JSON (located)
      */
     public void open(Path planFile) {
-        JsonTree.read(planFile, planFile.toString());
-        JsonNode parsed;
-        try {
-            parsed = MAPPER.readTree(Files.readString(planFile, StandardCharsets.UTF_8));
-        } catch (IOException e) {
-            throw new InputException(SourceLocation.of(planFile.toString()), null, "cannot read: " + e.getMessage(), e);
+        JsonTree tree = JsonTree.load(planFile, planFile.toString());
+        if (!(tree.json() instanceof ObjectNode object)) {
+            throw new InputException(SourceLocation.of(planFile.toString()), null, InputProblem.WRONG_TYPE,
+                    "a plan file must hold one JSON object");
         }
-        if (!(parsed instanceof ObjectNode object)) {
-            throw new InputException(SourceLocation.of(planFile.toString()), null, "a plan file must hold one JSON object");
-        }
-        replace(object, planFile.toAbsolutePath().normalize());
+        // the tree was built for this editor alone, so it is taken without a copy
+        replace(object, tree.positions(), planFile.toAbsolutePath().normalize());
         fire(Change.REPLACED, null);
     }
 
@@ -308,10 +313,13 @@ public final class PlanEditor {
         ObjectNode toSave = rebased(SampleCodec.baseDir(target.toAbsolutePath().normalize()));
         String text = ResolvedJson.toText(toSave);
         AtomicFiles.writeString(target, text);
-        boolean pathsChanged = !text.equals(text());
-        document = toSave;
+        boolean pathsChanged = !toSave.equals(document);
         file = target.toAbsolutePath().normalize();
-        savedText = text;
+        // positions from now on refer to the text just written (read back once per save, never per edit)
+        JsonTree written = JsonTree.of(text, file.toString());
+        document = (ObjectNode) written.json();
+        positions = written.positions();
+        saved = document.deepCopy();
         history.boundary();
         recheck();
         if (pathsChanged) {
@@ -349,28 +357,26 @@ public final class PlanEditor {
      * but what is on disk there stays as it was until the user saves.
      */
     public void restore(ObjectNode recovered, Path originalFile) {
-        replace(recovered, originalFile);
-        savedText = null;
+        replace(recovered.deepCopy(), SourcePositions.NONE, originalFile);
+        saved = null;
         fire(Change.REPLACED, null);
     }
 
     // ---- internals ---------------------------------------------------------------------------------------------
 
-    private void replace(ObjectNode doc, Path newFile) {
-        document = doc.deepCopy();
+    private void replace(ObjectNode doc, SourcePositions newPositions, Path newFile) {
+        document = doc;
+        positions = newPositions;
         file = newFile;
         history.clear();
-        savedText = text();
+        saved = doc.deepCopy();
         lastValid = null;
         recheckAllFields();
     }
 
-    private void restoreSnapshot(String snapshot) {
-        try {
-            document = (ObjectNode) MAPPER.readTree(snapshot);
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException("undo snapshot is not JSON (a bug)", e);
-        }
+    private void restoreSnapshot(Snapshot snapshot) {
+        document = snapshot.document();
+        positions = snapshot.positions();
         recheckAllFields();
         fire(Change.REPLACED, null);
     }
@@ -385,7 +391,7 @@ public final class PlanEditor {
 
     private void recheck() {
         // the full path, so the reader resolves relative data-file paths from the plan's folder
-        check = PlanCheck.of(text(), file == null ? displayName() : file.toString());
+        check = PlanCheck.of(document, positions, file == null ? displayName() : file.toString());
         if (check.valid()) {
             lastValid = check.inputs();
         }

@@ -1,14 +1,20 @@
 package org.ladderkin.io.json;
 
+import com.fasterxml.jackson.core.JsonPointer;
+import com.fasterxml.jackson.databind.JsonNode;
 import java.util.ArrayList;
 import java.util.Collections;
+import java.util.HashMap;
+import java.util.Iterator;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 import java.util.Optional;
 import java.util.Set;
 import java.util.function.Function;
 import org.ladderkin.io.InputException;
+import org.ladderkin.io.InputProblem;
 import org.ladderkin.io.SourceLocation;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Quantity;
@@ -16,47 +22,74 @@ import org.ladderkin.units.QuantityFormatException;
 import org.ladderkin.units.Unit;
 
 /**
- * One value of a JSON document with its position. Readers ask an object node for the fields they know and then
- * call {@link #finish()}, which rejects any field nobody asked for: a misspelt field never passes silently.
- * Every accessor throws {@link InputException} located at the offending value.
+ * One value of a JSON document with its position: a view over a Jackson node, its JSON Pointer, the document's
+ * {@link SourcePositions} and the name messages give the document. Readers ask an object node for the fields they know
+ * and then call {@link #finish()}, which rejects any field nobody asked for: a misspelt field never passes silently.
+ * Every accessor throws {@link InputException} located at the offending value; a value without a position (edited
+ * after the file was read) is located at the file alone and still names its field.
  */
 public final class Node {
 
     /** JSON value kinds. */
     public enum Kind { OBJECT, ARRAY, STRING, NUMBER, BOOLEAN, NULL }
 
-    private final Kind kind;
-    private final SourceLocation location;
+    private final JsonNode json;
+    private final JsonPointer pointer;
+    private final SourcePositions positions;
+    private final String file;
     private final String path;
+    private final Kind kind;
     private final String text;
-    private final double number;
-    private final boolean bool;
-    private final Map<String, Node> fields;
-    private final List<Node> items;
     private final Set<String> asked = new LinkedHashSet<>();
+    // one view per child, so that what a reader asked of a child is still known when it calls finish() on it
+    private final Map<String, Node> children = new HashMap<>();
+    private List<Node> items;
 
-    private Node(Kind kind, SourceLocation location, String path, String text, double number, boolean bool,
-                 Map<String, Node> fields, List<Node> items) {
-        this.kind = kind;
-        this.location = location;
+    private Node(JsonNode json, JsonPointer pointer, SourcePositions positions, String file, String path) {
+        this.json = json;
+        this.pointer = pointer;
+        this.positions = positions;
+        this.file = file;
         this.path = path;
-        this.text = text;
-        this.number = number;
-        this.bool = bool;
-        this.fields = fields;
-        this.items = items;
+        this.kind = kindOf(json);
+        this.text = switch (kind) {
+            case STRING -> json.textValue();
+            case NUMBER -> Objects.requireNonNullElseGet(positions.literal(pointer), json::asText);
+            case BOOLEAN -> json.asText();
+            case NULL -> "null";
+            default -> null;
+        };
     }
 
-    static Node object(SourceLocation loc, String path, Map<String, Node> fields) {
-        return new Node(Kind.OBJECT, loc, path, null, 0, false, fields, null);
+    /**
+     * The root of a document.
+     *
+     * @param json        the Jackson tree
+     * @param positions   where its values started ({@link SourcePositions#NONE} for a tree built in memory)
+     * @param displayName how messages name the document
+     */
+    public static Node of(JsonNode json, SourcePositions positions, String displayName) {
+        return new Node(Objects.requireNonNull(json, "json"), JsonPointer.empty(),
+                Objects.requireNonNull(positions, "positions"), Objects.requireNonNull(displayName, "displayName"), "");
     }
 
-    static Node array(SourceLocation loc, String path, List<Node> items) {
-        return new Node(Kind.ARRAY, loc, path, null, 0, false, null, List.copyOf(items));
-    }
-
-    static Node scalar(Kind kind, SourceLocation loc, String path, String text, double number, boolean bool) {
-        return new Node(kind, loc, path, text, number, bool, null, null);
+    private static Kind kindOf(JsonNode n) {
+        if (n == null || n.isNull() || n.isMissingNode()) {
+            return Kind.NULL;
+        }
+        if (n.isObject()) {
+            return Kind.OBJECT;
+        }
+        if (n.isArray()) {
+            return Kind.ARRAY;
+        }
+        if (n.isNumber()) {
+            return Kind.NUMBER;
+        }
+        if (n.isBoolean()) {
+            return Kind.BOOLEAN;
+        }
+        return Kind.STRING;
     }
 
     public Kind kind() {
@@ -64,7 +97,7 @@ public final class Node {
     }
 
     public SourceLocation location() {
-        return location;
+        return positions.location(pointer, file);
     }
 
     /** Dotted path from the document root, e.g. "laser.spots.pump". */
@@ -72,9 +105,37 @@ public final class Node {
         return path;
     }
 
-    /** An error located at this value and naming its field. */
+    /** JSON Pointer from the document root, e.g. "/laser/spots/pump". */
+    public JsonPointer pointer() {
+        return pointer;
+    }
+
+    /** The Jackson node this view reads. */
+    public JsonNode json() {
+        return json;
+    }
+
+    /** An error of kind {@code key} located at this value and naming its field. */
+    public InputException error(InputProblem key, String problem) {
+        return new InputException(location(), path.isEmpty() ? null : path, key, problem);
+    }
+
+    /**
+     * An error located at this value, of kind {@link InputProblem#INVALID_VALUE}: for readers that have not said
+     * what kind of problem they report. Prefer {@link #error(InputProblem, String)}.
+     */
     public InputException error(String problem) {
-        return new InputException(location, path.isEmpty() ? null : path, problem);
+        return error(InputProblem.INVALID_VALUE, problem);
+    }
+
+    private Node child(String name) {
+        return children.computeIfAbsent(name, n -> new Node(json.get(n), pointer.appendProperty(n), positions, file,
+                path.isEmpty() ? n : path + "." + n));
+    }
+
+    private boolean present(String name) {
+        JsonNode n = json.get(name);
+        return n != null && !n.isNull();
     }
 
     // ---- objects ---------------------------------------------------------------------------------------------
@@ -83,34 +144,33 @@ public final class Node {
     public Node field(String name) {
         requireKind(Kind.OBJECT, "an object");
         asked.add(name);
-        Node n = fields.get(name);
-        if (n == null || n.kind == Kind.NULL) {
+        if (!present(name)) {
             String where = path.isEmpty() ? "" : " in '" + path + "'";
-            throw new InputException(location, path.isEmpty() ? name : path + "." + name,
+            throw new InputException(location(), path.isEmpty() ? name : path + "." + name, InputProblem.MISSING_FIELD,
                     "missing required field" + where + " (add \"" + name + "\": ...)");
         }
-        return n;
+        return child(name);
     }
 
     /** The field {@code name} if present and not null. */
     public Optional<Node> optional(String name) {
         requireKind(Kind.OBJECT, "an object");
         asked.add(name);
-        Node n = fields.get(name);
-        return n == null || n.kind == Kind.NULL ? Optional.empty() : Optional.of(n);
+        return present(name) ? Optional.of(child(name)) : Optional.empty();
     }
 
     /** Whether this object has a non-null field {@code name}; does not count as reading it. */
     public boolean has(String name) {
         requireKind(Kind.OBJECT, "an object");
-        Node n = fields.get(name);
-        return n != null && n.kind != Kind.NULL;
+        return present(name);
     }
 
     /** Field names in document order. */
     public List<String> fieldNames() {
         requireKind(Kind.OBJECT, "an object");
-        return List.copyOf(fields.keySet());
+        List<String> names = new ArrayList<>();
+        json.fieldNames().forEachRemaining(names::add);
+        return List.copyOf(names);
     }
 
     /** Requires exactly one of the given fields and returns its name. */
@@ -124,7 +184,7 @@ public final class Node {
         }
         if (present.size() != 1) {
             String choices = String.join("', '", names);
-            throw error(present.isEmpty()
+            throw error(present.isEmpty() ? InputProblem.MISSING_FIELD : InputProblem.CONFLICT, present.isEmpty()
                     ? "needs one of '" + choices + "'"
                     : "give only one of '" + String.join("', '", present) + "' (they say the same thing)");
         }
@@ -134,9 +194,11 @@ public final class Node {
     /** Rejects any field that no reader asked for, naming the ones allowed here. */
     public void finish() {
         requireKind(Kind.OBJECT, "an object");
-        for (Map.Entry<String, Node> e : fields.entrySet()) {
-            if (!asked.contains(e.getKey())) {
-                throw new InputException(e.getValue().location, e.getValue().path,
+        for (Iterator<String> names = json.fieldNames(); names.hasNext(); ) {
+            String name = names.next();
+            if (!asked.contains(name)) {
+                Node unknown = child(name);
+                throw new InputException(unknown.location(), unknown.path, InputProblem.UNKNOWN_FIELD,
                         "unknown field (allowed here: " + String.join(", ", asked) + ")");
             }
         }
@@ -151,16 +213,16 @@ public final class Node {
         String v = s.string();
         String prefix = name + "/";
         if (!v.startsWith(prefix)) {
-            throw s.error("expected schema '" + name + "/" + newestVersion + "', found '" + v + "'");
+            throw s.error(InputProblem.WRONG_SCHEMA, "expected schema '" + name + "/" + newestVersion + "', found '" + v + "'");
         }
         int version;
         try {
             version = Integer.parseInt(v.substring(prefix.length()));
         } catch (NumberFormatException e) {
-            throw s.error("schema version must be a whole number, found '" + v + "'");
+            throw s.error(InputProblem.WRONG_SCHEMA, "schema version must be a whole number, found '" + v + "'");
         }
         if (version < 1 || version > newestVersion) {
-            throw s.error("unsupported schema version " + version + " (this build reads " + name + "/1 to /" + newestVersion + ")");
+            throw s.error(InputProblem.WRONG_SCHEMA, "unsupported schema version " + version + " (this build reads " + name + "/1 to /" + newestVersion + ")");
         }
         return version;
     }
@@ -170,6 +232,13 @@ public final class Node {
     /** The items of this array. */
     public List<Node> items() {
         requireKind(Kind.ARRAY, "an array");
+        if (items == null) {
+            List<Node> list = new ArrayList<>(json.size());
+            for (int i = 0; i < json.size(); i++) {
+                list.add(new Node(json.get(i), pointer.appendIndex(i), positions, file, path + "[" + i + "]"));
+            }
+            items = List.copyOf(list);
+        }
         return items;
     }
 
@@ -177,7 +246,7 @@ public final class Node {
     public List<Node> items(int min) {
         List<Node> list = items();
         if (list.size() < min) {
-            throw error("needs at least " + min + " item" + (min == 1 ? "" : "s") + ", found " + list.size());
+            throw error(InputProblem.EMPTY, "needs at least " + min + " item" + (min == 1 ? "" : "s") + ", found " + list.size());
         }
         return list;
     }
@@ -200,14 +269,15 @@ public final class Node {
 
     public boolean bool() {
         requireKind(Kind.BOOLEAN, "true or false");
-        return bool;
+        return json.booleanValue();
     }
 
     /** A finite JSON number. */
     public double number() {
         requireKind(Kind.NUMBER, "a number");
+        double number = json.doubleValue();
         if (!Double.isFinite(number)) {
-            throw error("number out of range: " + text);
+            throw error(InputProblem.OUT_OF_RANGE, "number out of range: " + text);
         }
         return number;
     }
@@ -215,11 +285,12 @@ public final class Node {
     /** A whole JSON number within [min, max]. */
     public int integer(int min, int max) {
         requireKind(Kind.NUMBER, "a whole number");
+        double number = json.doubleValue();
         if (number != Math.rint(number) || text.contains(".") || text.contains("e") || text.contains("E")) {
-            throw error("must be a whole number, was " + text);
+            throw error(InputProblem.OUT_OF_RANGE, "must be a whole number, was " + text);
         }
         if (number < min || number > max) {
-            throw error("must be between " + min + " and " + max + ", was " + text);
+            throw error(InputProblem.OUT_OF_RANGE, "must be between " + min + " and " + max + ", was " + text);
         }
         return (int) number;
     }
@@ -232,7 +303,7 @@ public final class Node {
                 return s;
             }
         }
-        throw error("'" + s + "' is not one of: " + String.join(", ", allowed));
+        throw error(InputProblem.BAD_CHOICE, "'" + s + "' is not one of: " + String.join(", ", allowed));
     }
 
     /**
@@ -243,18 +314,18 @@ public final class Node {
     public Quantity quantity(Dimension dimension, Unit documentedUnit) {
         if (kind == Kind.NUMBER) {
             if (documentedUnit == null) {
-                throw error("a bare number needs a unit here: write it as a string such as \"" + dimension.example() + "\"");
+                throw error(InputProblem.WRONG_UNIT, "a bare number needs a unit here: write it as a string such as \"" + dimension.example() + "\"");
             }
             return new Quantity(number(), documentedUnit);
         }
         if (kind != Kind.STRING) {
-            throw error("expected " + dimension.label() + " as a string with a unit such as \"" + dimension.example()
+            throw error(InputProblem.WRONG_TYPE, "expected " + dimension.label() + " as a string with a unit such as \"" + dimension.example()
                     + "\", found " + describe());
         }
         try {
             return Quantity.parse(text, dimension);
         } catch (QuantityFormatException e) {
-            throw error(e.getMessage());
+            throw error(InputProblem.of(e), e.getMessage());
         }
     }
 
@@ -262,7 +333,7 @@ public final class Node {
     public double positive(Dimension dimension, Unit documentedUnit) {
         Quantity q = quantity(dimension, documentedUnit);
         if (!(q.si() > 0)) {
-            throw error("must be > 0, was " + q.format());
+            throw error(InputProblem.OUT_OF_RANGE, "must be > 0, was " + q.format());
         }
         return q.si();
     }
@@ -271,7 +342,7 @@ public final class Node {
     public double nonNegative(Dimension dimension, Unit documentedUnit) {
         Quantity q = quantity(dimension, documentedUnit);
         if (q.si() < 0) {
-            throw error("must be >= 0, was " + q.format());
+            throw error(InputProblem.OUT_OF_RANGE, "must be >= 0, was " + q.format());
         }
         return q.si();
     }
@@ -280,14 +351,14 @@ public final class Node {
     public double probability() {
         double p = quantity(Dimension.DIMENSIONLESS, org.ladderkin.units.Units.of("")).si();
         if (p < 0 || p > 1) {
-            throw error("must be a probability between 0 and 1, was " + (kind == Kind.STRING ? text : p));
+            throw error(InputProblem.OUT_OF_RANGE, "must be a probability between 0 and 1, was " + (kind == Kind.STRING ? text : p));
         }
         return p;
     }
 
     private void requireKind(Kind wanted, String description) {
         if (kind != wanted) {
-            throw error("expected " + description + ", found " + describe());
+            throw error(InputProblem.WRONG_TYPE, "expected " + description + ", found " + describe());
         }
     }
 
