@@ -108,7 +108,7 @@ public final class FitDemoSeries {
     public static Path write(Series s, Path dir, String name) throws IOException {
         Path csv = dir.resolve(name + ".csv");
         AtomicFiles.writeString(csv, s.csv());
-        AtomicFiles.writeString(dir.resolve(name + FitSession.SIDECAR_SUFFIX), s.sidecar());
+        AtomicFiles.writeString(dir.resolve(name + FitData.SIDECAR_SUFFIX), s.sidecar());
         return csv;
     }
 
