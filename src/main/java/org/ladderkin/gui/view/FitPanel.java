@@ -1,3 +1,4 @@
+// Over 400 lines: the excitation table's model, renderer and live-checking editor read this view's models and stay private to it.
 package org.ladderkin.gui.view;
 
 import java.awt.Color;

@@ -1,3 +1,4 @@
+// Over 400 lines: the one planner window wires its menus, tabs, shortcuts and window state in one place.
 package org.ladderkin.gui.view;
 
 import java.awt.BorderLayout;
