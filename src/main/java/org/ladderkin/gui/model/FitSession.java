@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Executor;
 import org.ladderkin.fit.Dataset;
+import org.ladderkin.fit.LadderFit;
 import org.ladderkin.plan.PlanInputs;
 import org.ladderkin.report.ChartSpec;
 
@@ -176,7 +177,7 @@ public final class FitSession implements AutoCloseable {
         return List.copyOf(lines);
     }
 
-    private record Shown(Dataset data, org.ladderkin.fit.LadderFit.Outcome outcome, boolean fitted) {
+    private record Shown(Dataset data, LadderFit.Outcome outcome, boolean fitted) {
     }
 
     /** The fit's result, else the preview's curves, else the bare traces; read once so one drawing is consistent. */
