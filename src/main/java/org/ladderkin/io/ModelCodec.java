@@ -65,7 +65,7 @@ public final class ModelCodec {
         try {
             model = ProcessRegistry.read(t -> section(root, t), g, nMax);
         } catch (IllegalArgumentException e) {
-            throw root.error(e.getMessage());
+            throw root.error(InputProblem.CONFLICT, e.getMessage());
         }
         root.finish();
         return new ModelFile(name, model, Map.copyOf(sources));
@@ -114,7 +114,7 @@ public final class ModelCodec {
             }
             double x = n.number();
             if (x < 0) {
-                throw n.error("must be >= 0, was " + x);
+                throw n.error(InputProblem.OUT_OF_RANGE, "must be >= 0, was " + x);
             }
             return x;
         }
@@ -140,7 +140,7 @@ public final class ModelCodec {
                 try {
                     return new TableScaling(firstN, f);
                 } catch (IllegalArgumentException e) {
-                    throw n.error(e.getMessage());
+                    throw n.error(InputProblem.OUT_OF_RANGE, e.getMessage());
                 }
             }
             String key = n.choice(p.choices().toArray(String[]::new));
@@ -155,7 +155,8 @@ public final class ModelCodec {
 
         @Override
         public RuntimeException error(ProcessParameter p, String problem) {
-            return p == null || !section.has(p.key()) ? section.error(problem) : section.field(p.key()).error(problem);
+            return p == null || !section.has(p.key()) ? section.error(InputProblem.CONFLICT, problem)
+                    : section.field(p.key()).error(InputProblem.CONFLICT, problem);
         }
     }
 }

@@ -273,14 +273,14 @@ public final class PlanCodec {
 
         @Override
         public RuntimeException missing(ProcessParameter p) {
-            return section.error("'" + (p.planKey() != null ? p.planKey() : p.key()) + "' is needed with the other "
+            return section.error(InputProblem.MISSING_FIELD, "'" + (p.planKey() != null ? p.planKey() : p.key()) + "' is needed with the other "
                     + ProcessRegistry.owner(p).section() + " values");
         }
 
         @Override
         public RuntimeException error(ProcessParameter p, String problem) {
-            return p != null && p.planKey() != null && section.has(p.planKey()) ? section.field(p.planKey()).error(problem)
-                    : section.error(problem);
+            return p != null && p.planKey() != null && section.has(p.planKey())
+                    ? section.field(p.planKey()).error(InputProblem.CONFLICT, problem) : section.error(InputProblem.CONFLICT, problem);
         }
     }
 

@@ -1,3 +1,4 @@
+// Over 400 lines: the excitation table's model, renderer and live-checking editor read this view's models and stay private to it.
 package org.ladderkin.gui.view;
 
 import java.awt.Color;
@@ -32,9 +33,11 @@ import javax.swing.table.AbstractTableModel;
 import javax.swing.table.DefaultTableCellRenderer;
 import javax.swing.table.TableCellEditor;
 import net.miginfocom.swing.MigLayout;
-import org.ladderkin.fit.LadderFitSetup.LadderParameter;
 import org.ladderkin.gui.chart.ChartView;
 import org.ladderkin.gui.model.FitCharts;
+import org.ladderkin.gui.model.FitData;
+import org.ladderkin.gui.model.FitOptions;
+import org.ladderkin.gui.model.FitRun;
 import org.ladderkin.gui.model.FitSession;
 import org.ladderkin.gui.model.PlanEditor;
 import org.ladderkin.gui.model.PushBack;
@@ -45,15 +48,14 @@ import org.ladderkin.units.Quantity;
  * The "Measured data &amp; fit" view: load traces (file chooser or drag and drop), type each trace's excitation, choose
  * the freed parameters, run or cancel the fit with a progress bar, see the traces over the plan's model or the fit,
  * the residuals, the parameter table and diagnostics, and push the fitted values into the plan. State lives in the
- * {@link FitSession}; this panel lays out, forwards and redraws.
+ * {@link FitSession}'s models; this panel lays out, forwards and redraws, always on the event thread (the session
+ * delivers fit results and progress there).
  */
 public final class FitPanel extends JPanel {
 
-    /** Parameters offered as checkboxes; the IRF width needs a start value the view does not ask for. */
-    private static final List<LadderParameter> OFFERED = LadderParameter.values().stream()
-            .filter(p -> !p.equals(LadderParameter.IRF)).toList();
-
     private final FitSession session;
+    private final FitData data;
+    private final FitRun run;
     private final PlanEditor editor;
     private final Supplier<Optional<Path>> lastDirectory;
     private final Consumer<Path> directoryUsed;
@@ -66,7 +68,7 @@ public final class FitPanel extends JPanel {
     private final JLabel status = new JLabel(" ");
     private final ExcitationModel excitationModel = new ExcitationModel();
     private final JTable excitations = new JTable(excitationModel);
-    private final Map<LadderParameter, JCheckBox> freeBoxes = new LinkedHashMap<>();
+    private final Map<String, JCheckBox> freeBoxes = new LinkedHashMap<>();
     private final JCheckBox pulseTrain = new JCheckBox("Pulse-train steady state at the plan's rate");
     private final JCheckBox response = new JCheckBox("Plan's instrument response");
     private final java.util.Map<String, JSplitPane> splits = new java.util.LinkedHashMap<>();
@@ -84,12 +86,6 @@ public final class FitPanel extends JPanel {
     private final JTextArea diagnostics = new JTextArea(6, 30);
     private String pushNote = "";
 
-    /**
-     * @param session       the fit state
-     * @param editor        the plan the fitted values go into
-     * @param lastDirectory where the file chooser opens
-     * @param directoryUsed told the folder of loaded files
-     */
     /** The panel's split panes by name, so the window can remember where the user put their dividers. */
     java.util.Map<String, JSplitPane> splits() {
         return java.util.Collections.unmodifiableMap(splits);
@@ -101,9 +97,17 @@ public final class FitPanel extends JPanel {
         residuals.offerExport(export);
     }
 
+    /**
+     * @param session       the fit state
+     * @param editor        the plan the fitted values go into
+     * @param lastDirectory where the file chooser opens
+     * @param directoryUsed told the folder of loaded files
+     */
     public FitPanel(FitSession session, PlanEditor editor, Supplier<Optional<Path>> lastDirectory, Consumer<Path> directoryUsed) {
         super(new MigLayout("insets 6, fill", "[grow]", "[][][grow]"));
         this.session = session;
+        this.data = session.data();
+        this.run = session.fit();
         this.editor = editor;
         this.lastDirectory = lastDirectory;
         this.directoryUsed = directoryUsed;
@@ -120,9 +124,9 @@ public final class FitPanel extends JPanel {
         progress.setStringPainted(true);
         push.setName("fit:push");
         status.setName("fit:status");
-        load.addActionListener(e -> loadChosen());
+        load.addActionListener(e -> loadTracesWithChooser());
         fit.addActionListener(e -> runFit());
-        cancel.addActionListener(e -> session.cancel());
+        cancel.addActionListener(e -> run.cancel());
         push.addActionListener(e -> pushBack());
         fit.setToolTipText("Fit the loaded traces (Ctrl+R)");
 
@@ -140,11 +144,11 @@ public final class FitPanel extends JPanel {
         excitations.putClientProperty("terminateEditOnFocusLost", Boolean.TRUE);
 
         JPanel freePanel = new JPanel(new MigLayout("insets 0, wrap 2", "[][]"));
-        for (LadderParameter p : OFFERED) {
-            JCheckBox box = new JCheckBox(label(p));
+        for (FitOptions.FreeParameter p : FitRun.offered()) {
+            JCheckBox box = new JCheckBox(p.label());
             box.setName("fit:free:" + p.key());
-            box.addActionListener(e -> session.setFree(p, box.isSelected()));
-            freeBoxes.put(p, box);
+            box.addActionListener(e -> run.setFree(p.key(), box.isSelected()));
+            freeBoxes.put(p.key(), box);
             freePanel.add(box);
         }
         pulseTrain.setName("fit:pulse-train");
@@ -193,7 +197,7 @@ public final class FitPanel extends JPanel {
         add(body, "grow");
         setTransferHandler(new FileDropHandler(files -> {
             loadFiles(files);
-            return session.loadProblem().isEmpty();
+            return data.loadProblem().isEmpty();
         }));
         session.addListener(this::sessionChanged);
         sessionChanged();
@@ -206,7 +210,7 @@ public final class FitPanel extends JPanel {
         if (excitations.isEditing()) {
             excitations.getCellEditor().stopCellEditing();
         }
-        session.run();
+        session.startFit();
     }
 
     /** Loads trace files (errors go to the status line). */
@@ -226,10 +230,6 @@ public final class FitPanel extends JPanel {
 
     /** Asks for trace files with a file chooser and loads them. */
     public void loadTracesWithChooser() {
-        loadChosen();
-    }
-
-    private void loadChosen() {
         JFileChooser chooser = new JFileChooser(lastDirectory.get().map(Path::toFile).orElse(null));
         chooser.setMultiSelectionEnabled(true);
         chooser.setFileFilter(new FileNameExtensionFilter("Trace tables (*.csv, *.tsv, *.txt, *.dat)", "csv", "tsv", "txt", "dat"));
@@ -246,7 +246,7 @@ public final class FitPanel extends JPanel {
     }
 
     private void pushBack() {
-        PushBack p = session.applyTo(editor);
+        PushBack p = run.applyTo(editor);
         List<String> written = new ArrayList<>();
         for (var e : p.edits()) {
             written.add(e.getKey().label() + " = " + e.getValue());
@@ -259,21 +259,20 @@ public final class FitPanel extends JPanel {
     // ---- redraw -------------------------------------------------------------------------------------------------
 
     private void sessionChanged() {
-        FitSession.RunState state = session.state();
-        boolean running = state == FitSession.RunState.RUNNING;
+        FitRun.RunState state = run.state();
+        boolean running = state == FitRun.RunState.RUNNING;
         Optional<String> blocked = session.runProblem();
         load.setEnabled(true);
         fit.setEnabled(!running && blocked.isEmpty());
         fit.setToolTipText(blocked.map(b -> "Cannot fit yet: " + b).orElse("Fit the loaded traces (Ctrl+R)"));
         cancel.setEnabled(running);
-        progress.setValue((int) Math.round(1000 * session.progress()));
-        progress.setString(running ? session.stage() : state.name().toLowerCase(java.util.Locale.ROOT));
-        PushBack p = session.pushBack();
+        progress.setValue((int) Math.round(1000 * run.progress()));
+        progress.setString(running ? run.stage() : state.name().toLowerCase(java.util.Locale.ROOT));
+        PushBack p = run.pushBack();
         push.setEnabled(!p.edits().isEmpty());
         push.setToolTipText("<html>" + escape(String.join("<br>", pushLines(p))) + "</html>");
 
-        String line = !session.loadProblem().isEmpty() ? "⚠ " + session.loadProblem()
-                : blocked.isPresent() && session.traceCount() > 0 && !running ? "⚠ " + blocked.get() : session.message();
+        String line = session.statusLine();
         status.setText(line.isEmpty() ? " " : line);
         status.setToolTipText(line.isEmpty() ? null : line);
         Color fail = UIManager.getColor("Ladderkin.verdict.fail");
@@ -283,12 +282,13 @@ public final class FitPanel extends JPanel {
             excitationModel.fireTableDataChanged();
         }
         for (var e : freeBoxes.entrySet()) {
-            e.getValue().setSelected(session.free().contains(e.getKey()));
+            e.getValue().setSelected(run.free().contains(e.getKey()));
         }
-        pulseTrain.setSelected(session.pulseTrain());
-        response.setSelected(session.instrumentResponse());
-        Optional<String> planResponse = session.planResponse();
-        response.setEnabled(planResponse.isPresent() || session.instrumentResponse());
+        FitOptions options = run.options();
+        pulseTrain.setSelected(options.pulseTrain());
+        response.setSelected(options.instrumentResponse());
+        Optional<String> planResponse = session.preview().planResponse();
+        response.setEnabled(planResponse.isPresent() || options.instrumentResponse());
         response.setText(planResponse.map(r -> "Plan's instrument response: " + r)
                 .orElse("Instrument response (the plan has no TA instrument)"));
         session.planRepetitionRateHz().ifPresent(hz -> pulseTrain.setText("Pulse-train steady state at "
@@ -297,9 +297,6 @@ public final class FitPanel extends JPanel {
         residuals.show(session.residualChart());
         parameterModel.rows(session.parameterRows());
         List<String> lines = new ArrayList<>(session.diagnostics());
-        if (!session.previewProblem().isEmpty()) {
-            lines.add(0, session.previewProblem());
-        }
         if (!pushNote.isEmpty()) {
             lines.add(pushNote);
         }
@@ -316,10 +313,6 @@ public final class FitPanel extends JPanel {
         return lines;
     }
 
-    private static String label(LadderParameter p) {
-        return p.label();
-    }
-
     private static String escape(String s) {
         return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("&lt;br&gt;", "<br>");
     }
@@ -330,7 +323,7 @@ public final class FitPanel extends JPanel {
     private final class ExcitationModel extends AbstractTableModel {
         @Override
         public int getRowCount() {
-            return session.traceCount();
+            return data.traceCount();
         }
 
         @Override
@@ -345,7 +338,7 @@ public final class FitPanel extends JPanel {
 
         @Override
         public Object getValueAt(int r, int c) {
-            return c == 0 ? session.label(r) : session.excitationText(r);
+            return c == 0 ? data.label(r) : data.excitationText(r);
         }
 
         @Override
@@ -363,7 +356,7 @@ public final class FitPanel extends JPanel {
     private final class ExcitationRenderer extends DefaultTableCellRenderer {
         @Override
         public Component getTableCellRendererComponent(JTable table, Object value, boolean selected, boolean focus, int row, int col) {
-            Optional<String> problem = session.excitationProblem(row);
+            Optional<String> problem = data.excitationProblem(row);
             super.getTableCellRendererComponent(table, problem.isPresent() ? "⚠ " + value : value, selected, focus, row, col);
             Color fail = UIManager.getColor("Ladderkin.verdict.fail");
             setForeground(problem.isPresent() && fail != null ? fail : selected ? table.getSelectionForeground() : table.getForeground());
@@ -399,10 +392,10 @@ public final class FitPanel extends JPanel {
         }
 
         private void check() {
-            if (row >= session.traceCount()) {
+            if (row >= data.traceCount()) {
                 return;
             }
-            Optional<String> problem = session.checkExcitation(row, field.getText());
+            Optional<String> problem = data.checkExcitation(row, field.getText());
             field.putClientProperty("JComponent.outline", problem.isPresent() ? "error" : null);
             field.setToolTipText(problem.orElse(null));
         }

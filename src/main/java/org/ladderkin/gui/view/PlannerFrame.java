@@ -1,3 +1,4 @@
+// Over 400 lines: the one planner window wires its menus, tabs, shortcuts and window state in one place.
 package org.ladderkin.gui.view;
 
 import java.awt.BorderLayout;
@@ -392,7 +393,7 @@ public final class PlannerFrame extends JFrame {
 
     /** File ▸ Export Chart: the selected prediction chart, or the measured-data chart when the fit tab is in front. */
     private void exportChart(ChartExport.Format format) {
-        Optional<ChartSpec> spec = centreTabs.getSelectedComponent() == fitPanel && fitSession.data().isPresent()
+        Optional<ChartSpec> spec = centreTabs.getSelectedComponent() == fitPanel && fitSession.data().dataset().isPresent()
                 ? Optional.of(fitSession.overlayChart()) : charts.selected();
         spec.ifPresent(s -> exportChart(s, format));
     }
@@ -548,7 +549,7 @@ public final class PlannerFrame extends JFrame {
             showFitView();
             fitPanel.runFit();
         })).setName("menu:fit-run");
-        fitMenu.add(action("Cancel Fit", null, fitSession::cancel)).setName("menu:fit-cancel");
+        fitMenu.add(action("Cancel Fit", null, fitSession.fit()::cancel)).setName("menu:fit-cancel");
         bar.add(fitMenu);
 
         JMenu view = new JMenu("View");

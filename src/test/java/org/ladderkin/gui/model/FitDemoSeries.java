@@ -24,8 +24,8 @@ import org.ladderkin.plan.PlanInputs;
  * mvn -B -q test-compile dependency:build-classpath -Dmdep.outputFile=target/cp.txt -Dmdep.includeScope=test
  * java -Dladderkin.home=. -cp target/test-classes:target/classes:$(cat target/cp.txt) org.ladderkin.gui.model.FitDemoSeries
  * </pre>
- * {@code FitSessionTest.theDemoSeriesNextToTheDemoPlanLoadsAndFits} checks that the file still fits to the τ₂ it was
- * made with.
+ * {@code FitSessionTest.theDemoSeriesNextToTheDemoPlanLoadsAndFitsAndAPlanEditKeepsTheFit} checks that the file
+ * still fits to the τ₂ it was made with.
  */
 public final class FitDemoSeries {
 
@@ -108,7 +108,7 @@ public final class FitDemoSeries {
     public static Path write(Series s, Path dir, String name) throws IOException {
         Path csv = dir.resolve(name + ".csv");
         AtomicFiles.writeString(csv, s.csv());
-        AtomicFiles.writeString(dir.resolve(name + FitSession.SIDECAR_SUFFIX), s.sidecar());
+        AtomicFiles.writeString(dir.resolve(name + FitData.SIDECAR_SUFFIX), s.sidecar());
         return csv;
     }
 

@@ -23,7 +23,7 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.ladderkin.gui.model.FitDemoSeries;
-import org.ladderkin.gui.model.FitSession;
+import org.ladderkin.gui.model.FitRun;
 import org.ladderkin.units.Quantity;
 
 /**
@@ -72,25 +72,25 @@ class FitViewWindowTest {
             chooser.target().setSelectedFiles(new File[] {csv.toFile()});
             chooser.target().approveSelection();
         });
-        waitFor("the traces", () -> GuiActionRunner.execute(() -> frame.fitSession().traceCount()) == FitDemoSeries.MEAN_N.length);
+        waitFor("the traces", () -> GuiActionRunner.execute(() -> frame.fitSession().data().traceCount()) == FitDemoSeries.MEAN_N.length);
         window.table("fit:excitations").requireRowCount(FitDemoSeries.MEAN_N.length);
         assertThat(window.table("fit:excitations").valueAt(TableCell.row(0).column(0))).isEqualTo("F1");
         assertThat(window.table("fit:excitations").valueAt(TableCell.row(0).column(1))).endsWith("photons/cm²");
-        waitFor("the plan's curves", () -> GuiActionRunner.execute(() -> frame.fitSession().hasPreview()));
+        waitFor("the plan's curves", () -> GuiActionRunner.execute(() -> frame.fitSession().preview().hasCurves()));
 
         // an unusable excitation is marked and blocks the fit, with the reason
         String original = window.table("fit:excitations").valueAt(TableCell.row(1).column(1));
         window.table("fit:excitations").enterValue(TableCell.row(1).column(1), "3 nK");
-        waitFor("the mark", () -> GuiActionRunner.execute(() -> frame.fitSession().excitationProblem(1).isPresent()));
+        waitFor("the mark", () -> GuiActionRunner.execute(() -> frame.fitSession().data().excitationProblem(1).isPresent()));
         assertThat(window.table("fit:excitations").valueAt(TableCell.row(1).column(1))).startsWith("⚠");
         window.button("fit:run").requireDisabled();
         assertThat(window.label("fit:status").text()).startsWith("⚠ trace 'F2'");
         window.table("fit:excitations").enterValue(TableCell.row(1).column(1), original);
-        waitFor("the mark to go", () -> GuiActionRunner.execute(() -> frame.fitSession().excitationProblem(1).isEmpty()));
+        waitFor("the mark to go", () -> GuiActionRunner.execute(() -> frame.fitSession().data().excitationProblem(1).isEmpty()));
         window.button("fit:run").requireEnabled();
 
         window.pressAndReleaseKey(KeyPressInfo.keyCode(KeyEvent.VK_R).modifiers(PlannerWindowTest.CTRL));
-        waitFor("the fit", () -> GuiActionRunner.execute(() -> frame.fitSession().state()) == FitSession.RunState.DONE);
+        waitFor("the fit", () -> GuiActionRunner.execute(() -> frame.fitSession().fit().state()) == FitRun.RunState.DONE);
         assertThat(window.progressBar("fit:progress").target().getValue()).isEqualTo(1000);
         var table = window.table("fit:parameters");
         int tauRow = -1;
@@ -107,7 +107,7 @@ class FitViewWindowTest {
         assertThat(window.textBox("fit:diagnostics").text()).contains("χ²/dof");
         PlannerWindowTest.screenshot(frame, "planner-fit-light.png");
 
-        double fittedTauS = GuiActionRunner.execute(() -> frame.fitSession().outcome().orElseThrow().result().estimate("tauAuger2S").value());
+        double fittedTauS = GuiActionRunner.execute(() -> frame.fitSession().fit().outcome().orElseThrow().result().estimate("tauAuger2S").value());
         window.button("fit:push").requireEnabled().click();
         waitFor("the plan to change", () -> GuiActionRunner.execute(() -> frame.editor().isDirty()));
         selectForm("Model");
@@ -148,7 +148,7 @@ class FitViewWindowTest {
         });
         assertThat(imported).isTrue();
         window.table("fit:excitations").requireRowCount(FitDemoSeries.MEAN_N.length);
-        waitFor("the plan's curves", () -> GuiActionRunner.execute(() -> frame.fitSession().hasPreview()));
+        waitFor("the plan's curves", () -> GuiActionRunner.execute(() -> frame.fitSession().preview().hasCurves()));
 
         // Fit and Cancel in one event-thread step: the fit is certainly still running when Cancel is pressed
         boolean cancelWasEnabled = GuiActionRunner.execute(() -> {
@@ -158,7 +158,7 @@ class FitViewWindowTest {
             return enabled;
         });
         assertThat(cancelWasEnabled).isTrue();
-        assertThat(GuiActionRunner.execute(() -> frame.fitSession().state())).isEqualTo(FitSession.RunState.CANCELLED);
+        assertThat(GuiActionRunner.execute(() -> frame.fitSession().fit().state())).isEqualTo(FitRun.RunState.CANCELLED);
         window.button("fit:cancel").requireDisabled();
         window.button("fit:run").requireEnabled();
         assertThat(window.label("fit:status").text()).isEqualTo("fit cancelled");

@@ -82,8 +82,8 @@ class PlannerScreenshots {
             GuiActionRunner.execute(() -> frame.fitPanel().loadFiles(java.util.List.of(
                     PlannerWindowTest.HOME.resolve("experiments-plan/fh-cdse-ta-series.csv"))));
             GuiActionRunner.execute(() -> frame.fitPanel().runFit());
-            FitViewWindowTest.waitFor("the fit", () -> GuiActionRunner.execute(() -> frame.fitSession().state())
-                    == org.ladderkin.gui.model.FitSession.RunState.DONE);
+            FitViewWindowTest.waitFor("the fit", () -> GuiActionRunner.execute(() -> frame.fitSession().fit().state())
+                    == org.ladderkin.gui.model.FitRun.RunState.DONE);
             save(PlannerWindowTest.screenshot(frame, "planner-fit-" + suffix + ".png"));
         } finally {
             if (window != null) {
