@@ -1,7 +1,5 @@
 package org.ladderkin.cli;
 
-import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
@@ -10,15 +8,14 @@ import org.ladderkin.io.PlanCodec;
 import org.ladderkin.io.PlanOutputs;
 import org.ladderkin.plan.CampaignPlan;
 import org.ladderkin.plan.Planner;
+import org.ladderkin.report.Cautions;
 import org.ladderkin.report.PlanReport;
-import org.ladderkin.io.ResolvedJson;
 import org.ladderkin.plan.Goal;
 import org.ladderkin.plan.Instrument;
 import org.ladderkin.plan.LaserSetup;
 import org.ladderkin.plan.PlanInputs;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Photon;
-import org.ladderkin.units.PhysicalConstants;
 import org.ladderkin.units.Quantity;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -68,7 +65,7 @@ final class PlanCommand implements Callable<Integer> {
         }
         if (outDir != null) {
             AtomicFiles.writeString(outDir.resolve("report.html"), PlanReport.html(plan, variants));
-            PlanOutputs.write(plan, outDir);
+            PlanOutputs.write(plan, Cautions.texts(plan.cautions()), outDir);
             out.println("wrote " + outDir.resolve("report.html") + ", plan-resolved.json, traces.csv");
         }
         out.flush();

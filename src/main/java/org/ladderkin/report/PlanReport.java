@@ -141,7 +141,7 @@ public final class PlanReport {
                 + "instantaneous here. Beyond ⟨N⟩ ≈ 10, for band-edge pumping and for dense films these assumptions weaken: "
                 + "see docs/physics.md.");
         page.heading(2, "Safety");
-        page.cautions(plan.cautions());
+        page.cautions(Cautions.texts(plan.cautions()));
         page.block("note", "ladderkin plan report. Numbers are planning estimates from the model above; they do not "
                 + "replace measurements, the institution's laser safety officer or local rules.");
         return page.render();
