@@ -1,5 +1,10 @@
-package org.ladderkin.kinetics;
+package org.ladderkin.cli;
 
+import org.ladderkin.kinetics.KineticModel;
+import org.ladderkin.kinetics.LadderKinetics;
+import org.ladderkin.kinetics.ModelParameters;
+import org.ladderkin.kinetics.Populations;
+import org.ladderkin.kinetics.Trace;
 import org.ladderkin.kinetics.rate.AugerScaling;
 import org.ladderkin.kinetics.rate.RadiativeScaling;
 import org.ladderkin.kinetics.train.PulseExcitation;
