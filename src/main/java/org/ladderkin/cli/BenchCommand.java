@@ -7,7 +7,6 @@ import java.lang.management.MemoryType;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import java.util.function.DoubleSupplier;
-import org.ladderkin.kinetics.BenchCases;
 import org.ladderkin.kinetics.KineticModel;
 import org.ladderkin.kinetics.LadderKinetics;
 import picocli.CommandLine.Command;

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Quantity;
+import org.ladderkin.units.Spacing;
 
 /**
  * Delay lists as typed on the command line: {@code 0.1ps..1ms:1000log} (log-spaced, ends included),
@@ -48,14 +49,7 @@ final class DelayGrid {
             if (log && !(from > 0)) {
                 throw new IllegalArgumentException("a log-spaced delay range must start above 0, was " + ends[0].trim());
             }
-            double[] d = new double[count];
-            for (int i = 0; i < count; i++) {
-                double f = i / (double) (count - 1);
-                d[i] = log ? from * Math.pow(to / from, f) : from + (to - from) * f;
-            }
-            d[0] = from;
-            d[count - 1] = to;
-            return d;
+            return log ? Spacing.log(from, to, count) : Spacing.linear(from, to, count);
         }
         List<Double> list = new ArrayList<>();
         for (String part : t.split(",")) {

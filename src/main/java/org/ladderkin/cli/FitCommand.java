@@ -18,6 +18,7 @@ import org.ladderkin.fit.LadderFit;
 import org.ladderkin.fit.LadderFitSetup;
 import org.ladderkin.fit.LadderFitSetup.LadderParameter;
 import org.ladderkin.fit.ParameterEstimate;
+import org.ladderkin.fit.ParameterNaming;
 import org.ladderkin.io.AtomicFiles;
 import org.ladderkin.io.FitResultJson;
 import org.ladderkin.io.IrfFileReader;
@@ -237,12 +238,12 @@ final class FitCommand implements Callable<Integer> {
             if (!e.shared() || e.key().equals("amplitude") || e.key().equals("baseline")) {
                 continue;
             }
-            FitResultJson.TradeKey t = FitResultJson.trade(e.key());
+            ParameterNaming.TradeKey t = ParameterNaming.trade(e.key());
             out.println(String.format(Locale.ROOT, "  %-16s %-12.5g %s", t.key(), e.value() * t.factor(),
                     e.fixed() ? "(fixed)" : "± " + String.format(Locale.ROOT, "%.3g", e.stdError() * t.factor())));
         }
         if (outcome.measuredIrf() != null) {
-            out.println("  " + FitResultJson.measuredIrfNote(outcome.measuredIrf()));
+            out.println("  " + FitReport.measuredIrfNote(outcome.measuredIrf()));
         }
         out.println(String.format(Locale.ROOT, "  reduced chi²     %.4g over %d points", r.reducedChiSquare(), r.points()));
         for (String d : outcome.diagnostics()) {

@@ -1,24 +1,24 @@
 package org.ladderkin.cli;
 
-import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.concurrent.Callable;
 import org.ladderkin.io.AtomicFiles;
 import org.ladderkin.io.PlanCodec;
 import org.ladderkin.io.PlanOutputs;
 import org.ladderkin.plan.CampaignPlan;
 import org.ladderkin.plan.Planner;
+import org.ladderkin.report.Cautions;
 import org.ladderkin.report.PlanReport;
-import org.ladderkin.io.ResolvedJson;
 import org.ladderkin.plan.Goal;
 import org.ladderkin.plan.Instrument;
 import org.ladderkin.plan.LaserSetup;
 import org.ladderkin.plan.PlanInputs;
+import org.ladderkin.plan.WhatIf;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Photon;
-import org.ladderkin.units.PhysicalConstants;
 import org.ladderkin.units.Quantity;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -43,7 +43,7 @@ final class PlanCommand implements Callable<Integer> {
 
     @Option(names = "--what-if", paramLabel = "CHANGE", description = {"also plan with one input changed and compare "
             + "(repeatable): refresh=static|stirred|flowing:<flow>:<cell volume>, rate=<frequency>"})
-    java.util.List<String> whatIfs = new java.util.ArrayList<>();
+    List<String> whatIfs = new ArrayList<>();
 
     @Option(names = "--quiet", description = "no progress bar")
     boolean quiet;
@@ -58,17 +58,16 @@ final class PlanCommand implements Callable<Integer> {
         printSummary(inputs, out);
         CampaignPlan plan = Planner.plan(inputs, quiet ? Planner.Progress.NONE : new ProgressBar(spec.commandLine().getErr()));
         printSettings(plan, out);
-        java.util.List<org.ladderkin.plan.WhatIf> variants = whatIfs.stream()
-                .map(w -> org.ladderkin.plan.WhatIf.of(inputs, w)).toList();
+        List<WhatIf> variants = whatIfs.stream().map(w -> WhatIf.of(inputs, w, WhatIfArgument.parse(w))).toList();
         for (var v : variants) {
             out.println(String.format(java.util.Locale.ROOT, "What if %s: rate %s, residual %.3g, charged %.3g, worst risk %s",
-                    v.change(), fmt(v.plan().chosenRate().repetitionRateHz(), Dimension.FREQUENCY), v.plan().chosenRate().residual(),
+                    v.label(), fmt(v.plan().chosenRate().repetitionRateHz(), Dimension.FREQUENCY), v.plan().chosenRate().residual(),
                     v.plan().chosenRate().charged(), v.plan().risks().stream().map(r -> r.verdict())
                             .reduce(org.ladderkin.observe.Verdict.PASS, org.ladderkin.observe.Verdict::worst)));
         }
         if (outDir != null) {
             AtomicFiles.writeString(outDir.resolve("report.html"), PlanReport.html(plan, variants));
-            PlanOutputs.write(plan, outDir);
+            PlanOutputs.write(plan, Cautions.texts(plan.cautions()), outDir);
             out.println("wrote " + outDir.resolve("report.html") + ", plan-resolved.json, traces.csv");
         }
         out.flush();

@@ -15,6 +15,7 @@ import org.ladderkin.kinetics.Populations;
 import org.ladderkin.kinetics.Trace;
 import org.ladderkin.kinetics.train.PulseExcitation;
 import org.ladderkin.kinetics.train.SteadyState;
+import org.ladderkin.observe.DelayTraces;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Quantity;
 import picocli.CommandLine.Command;
@@ -120,20 +121,17 @@ final class SimulateCommand implements Callable<Integer> {
         SimulatedObservables.Inputs extra = extraInputs();
         for (int i = 0; i < pulses.size(); i++) {
             PulseExcitation p = pulses.get(i);
-            Populations before;
             Populations after;
             SteadyState ss = null;
             if (Double.isNaN(periodS)) {
-                before = Populations.ground(kinetics.space());
-                after = kinetics.applyPulse(before, p);
+                after = kinetics.applyPulse(Populations.ground(kinetics.space()), p);
             } else {
                 ss = kinetics.steadyState(p, periodS, true);
-                before = ss.beforePulse();
                 after = ss.afterPulse();
             }
             traces.add(kinetics.trace(after, delaysS));
             states.add(ss);
-            columns.add(SimulatedObservables.columns(observables, nAvg.get(i).trim(), kinetics, p, before, after, delaysS, extra));
+            columns.add(SimulatedObservables.columns(observables, nAvg.get(i).trim(), kinetics, p, after, delaysS, extra));
         }
         PrintWriter out = spec.commandLine().getOut();
         if (format.equals("csv")) {
@@ -155,7 +153,7 @@ final class SimulateCommand implements Callable<Integer> {
             }
             var m = org.ladderkin.io.MaterialLibrary.fromHome().material(material);
             double d = positive(diameter, Dimension.LENGTH, "--diameter");
-            heatCapacity = m.densityKgPerM3().value() * m.specificHeatJPerKgK().value() * m.volumeM3(d);
+            heatCapacity = DelayTraces.dotHeatCapacityJPerK(m, d);
             if (Double.isNaN(first) && m.sizing().isPresent()) {
                 first = m.sizing().get().firstExcitonEnergyJ(d);
             }

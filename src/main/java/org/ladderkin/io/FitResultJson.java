@@ -3,17 +3,17 @@ package org.ladderkin.io;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
-import java.util.Map;
 import org.ladderkin.fit.Dataset;
 import org.ladderkin.fit.FitResult;
 import org.ladderkin.fit.LadderFit;
 import org.ladderkin.fit.ParameterEstimate;
+import org.ladderkin.fit.ParameterNaming;
+import org.ladderkin.fit.ParameterNaming.TradeKey;
 import org.ladderkin.fit.ProfileInterval;
-import org.ladderkin.units.Units;
 
 /**
  * The result of a ladder fit as JSON (schema {@code ladderkin.fit-result/1}): every shared parameter keyed by name
- * with its trade unit ({@code tauAuger2Ps}, {@code crossSectionCm2}, {@code tauRadNs}) holding {@code value},
+ * with its trade unit ({@link ParameterNaming}: {@code tauAuger2Ps}, {@code crossSectionCm2}, {@code tauRadNs}) holding {@code value},
  * {@code stdError} (null when unavailable) and {@code fixed}; per-trace ⟨N⟩, amplitude and baseline; fit statistics,
  * correlations, diagnostics and warnings.
  */
@@ -22,32 +22,7 @@ public final class FitResultJson {
     /** Schema name. */
     public static final String SCHEMA = "ladderkin.fit-result/1";
 
-    /** Internal SI key → the key and factor used in files. */
-    private static final Map<String, TradeKey> TRADE = Map.of(
-            "crossSectionM2", new TradeKey("crossSectionCm2", 1 / Units.of("cm²").factorToSi()),
-            "occupancyPerJ", new TradeKey("occupancyPerNj", Units.of("nJ").factorToSi()),
-            "tauAuger2S", new TradeKey("tauAuger2Ps", 1 / Units.of("ps").factorToSi()),
-            "tauRadS", new TradeKey("tauRadNs", 1 / Units.of("ns").factorToSi()),
-            "tauTrapS", new TradeKey("tauTrapPs", 1 / Units.of("ps").factorToSi()),
-            "timeZeroS", new TradeKey("timeZeroPs", 1 / Units.of("ps").factorToSi()),
-            "irfFwhmS", new TradeKey("irfFwhmPs", 1 / Units.of("ps").factorToSi()));
-
     private FitResultJson() {
-    }
-
-    /** A parameter's key in files, and the factor from its SI value. */
-    public record TradeKey(String key, double factor) {
-    }
-
-    /** The file key and factor of the internal key {@code siKey} (unchanged for pure numbers). */
-    public static TradeKey trade(String siKey) {
-        return TRADE.getOrDefault(siKey, new TradeKey(siKey, 1));
-    }
-
-    /** One line saying which measured IRF the fit used, e.g. "measured IRF from irf.csv, FWHM 104 fs". */
-    public static String measuredIrfNote(org.ladderkin.observe.MeasuredIrf irf) {
-        return "measured IRF from " + irf.origin() + ", FWHM " + org.ladderkin.units.Quantity.formatBest(irf.fwhmS(),
-                org.ladderkin.units.Dimension.TIME, 3) + " (centroid at time zero)";
     }
 
     /** The JSON tree of {@code outcome}. */
@@ -75,7 +50,7 @@ public final class FitResultJson {
             if (!e.shared() || e.key().equals("amplitude") || e.key().equals("baseline")) {
                 continue;
             }
-            TradeKey t = trade(e.key());
+            TradeKey t = ParameterNaming.trade(e.key());
             ObjectNode p = params.putObject(t.key());
             p.put("value", e.value() * t.factor());
             putNumber(p, "stdError", e.stdError() * t.factor());
@@ -112,7 +87,7 @@ public final class FitResultJson {
         stats.put("startsFailed", r.startsFailed());
         ObjectNode corr = root.putObject("correlation");
         ArrayNode keys = corr.putArray("keys");
-        r.correlationKeys().forEach(k -> keys.add(trade(k).key()));
+        r.correlationKeys().forEach(k -> keys.add(ParameterNaming.trade(k).key()));
         ArrayNode rows = corr.putArray("matrix");
         for (double[] row : r.correlation()) {
             ArrayNode a = rows.addArray();

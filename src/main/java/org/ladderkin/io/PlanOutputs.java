@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import org.ladderkin.observe.Risk;
 import org.ladderkin.plan.CampaignPlan;
@@ -27,14 +28,18 @@ public final class PlanOutputs {
     private PlanOutputs() {
     }
 
-    /** Writes plan-resolved.json and traces.csv into {@code dir}. */
-    public static void write(CampaignPlan plan, Path dir) throws IOException {
-        ResolvedJson.write(dir.resolve("plan-resolved.json"), resolved(plan));
+    /**
+     * Writes plan-resolved.json and traces.csv into {@code dir}.
+     *
+     * @param cautionTexts the plan's cautions as the report words them (io stays below report)
+     */
+    public static void write(CampaignPlan plan, List<String> cautionTexts, Path dir) throws IOException {
+        ResolvedJson.write(dir.resolve("plan-resolved.json"), resolved(plan, cautionTexts));
         AtomicFiles.writeString(dir.resolve("traces.csv"), tracesCsv(plan));
     }
 
-    /** The resolved plan as a JSON tree. */
-    public static ObjectNode resolved(CampaignPlan plan) {
+    /** The resolved plan as a JSON tree, with the cautions as the report words them. */
+    public static ObjectNode resolved(CampaignPlan plan, List<String> cautionTexts) {
         ObjectNode root = ResolvedJson.object();
         root.put("schema", "ladderkin.plan-resolved/1");
         root.put("title", plan.inputs().title());
@@ -160,7 +165,7 @@ public final class PlanOutputs {
         ArrayNode adv = root.putArray("advisories");
         plan.advisories().forEach(adv::add);
         ArrayNode cautions = root.putArray("cautions");
-        plan.cautions().forEach(cautions::add);
+        cautionTexts.forEach(cautions::add);
         return root;
     }
 

@@ -19,13 +19,13 @@ import org.ladderkin.observe.Risk;
  * @param predictions   predicted signals
  * @param risks         risk table
  * @param advisories    concerns about the inputs (probe larger than pump, approximate cross-section ...)
- * @param cautions      safety cautions
+ * @param cautions      safety cautions that apply (worded by the report)
  */
 public record CampaignPlan(PlanInputs inputs, ModelAssumptions model, List<WavelengthOption> wavelengths,
                            List<RateOption> rates, RateOption chosenRate, List<FluencePoint> fluences, HeatBudget heat,
                            DesignSearch.Result design, List<DelayPlan> delayPlans,
                            List<MultiplicationPrediction> multiplication, Predictions predictions,
-                           List<Risk> risks, List<String> advisories, List<String> cautions) {
+                           List<Risk> risks, List<String> advisories, List<Caution> cautions) {
 
     public CampaignPlan {
         wavelengths = List.copyOf(wavelengths);

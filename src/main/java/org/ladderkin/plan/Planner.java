@@ -20,7 +20,6 @@ import org.ladderkin.observe.PulseTrainRisks;
 import org.ladderkin.observe.Risk;
 import org.ladderkin.observe.TimeWindows;
 import org.ladderkin.observe.Verdict;
-import org.ladderkin.report.Cautions;
 import org.ladderkin.sample.Advisory;
 import org.ladderkin.sample.Sample;
 
@@ -179,7 +178,7 @@ public final class Planner {
         for (FluencePoint f : fluences) {
             peakFluence = Math.max(peakFluence, f.photonFluencePeakPerM2() * chosen.photonEnergyJ());
         }
-        List<String> cautions = Cautions.forCampaign(sample.material().key(), matrixKey, heat.steadyRiseK(),
+        List<Caution> cautions = CautionRules.forCampaign(sample.material().key(), matrixKey, heat.steadyRiseK(),
                 SAMPLE_TEMPERATURE_K, heat.boilingPointK(), peakFluence);
         progress.step(6, totalSteps, "done");
         return new CampaignPlan(in, model, wavelengths, rates, chosenRate, fluences, heat, design, delayPlans, cm, predictions,

@@ -1,26 +1,15 @@
 package org.ladderkin.report;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Set;
+import org.ladderkin.plan.Caution;
 
 /**
- * The safety cautions every report and the desktop planner show. They are general reminders, not a risk assessment:
- * each defers to the institution's laser safety officer, local rules and licensed practice.
+ * The wording of the safety cautions that {@code plan} decides, as every report and the desktop planner show them.
+ * They are general reminders, not a risk assessment: each defers to the institution's laser safety officer, local rules
+ * and licensed practice.
  */
 public final class Cautions {
-
-    /** Solvents whose vapour burns (flash point below room temperature or near it). */
-    private static final Set<String> FLAMMABLE = Set.of("toluene", "hexane", "n-hexane", "heptane", "octane", "n-octane",
-            "cyclohexane", "ethanol", "methanol", "acetone", "tetrahydrofuran", "thf");
-
-    /** Peak fluence of one pulse from which the high-fluence caution shows (J/m², = 1 mJ/cm²): this project's threshold, not a standard (no source). */
-    public static final double HIGH_FLUENCE_J_PER_M2 = 10;
-    /** Steady-state temperature rise from which the hot-sample caution shows (K): this project's threshold, not a standard (no source). */
-    public static final double HOT_RISE_K = 10;
-    /** Margin to the boiling point within which the hot-sample caution shows whatever the rise (K): this project's threshold (no source). */
-    public static final double BOILING_MARGIN_K = 20;
 
     public static final String LASER = "Laser hazard: ultrafast pump-probe sources are Class 4 lasers. Direct and "
             + "scattered beams can cause permanent eye injury and skin burns and can ignite materials. Wear eyewear rated "
@@ -33,17 +22,6 @@ public final class Cautions {
             + "institution's chemical-safety rules and local law.";
 
     private Cautions() {
-    }
-
-    /** Whether a matrix (solvent) name is a flammable organic solvent. */
-    public static boolean flammable(String matrix) {
-        return FLAMMABLE.contains(matrix.toLowerCase(Locale.ROOT).strip());
-    }
-
-    /** Whether a material name contains cadmium or lead. */
-    public static boolean heavyMetal(String material) {
-        String m = material.toLowerCase(Locale.ROOT);
-        return m.contains("cd") || m.contains("pb");
     }
 
     /** Caution about heating a flammable solvent with the pump, with the predicted steady-state rise. */
@@ -72,30 +50,28 @@ public final class Cautions {
                 + "institution's safety rules.", riseK, sampleK + riseK - 273.15, boiling);
     }
 
-    /**
-     * Every caution that applies to a campaign.
-     *
-     * @param steadyRiseK       predicted steady-state rise of the excited volume (K; NaN when unknown)
-     * @param sampleK           sample temperature before the pump (K)
-     * @param boilingPointK     the solvent's boiling point (K; infinite for films or when unknown)
-     * @param peakFluenceJPerM2 peak fluence of the strongest pulse of the series (J/m²)
-     */
-    public static List<String> forCampaign(String material, String matrix, double steadyRiseK, double sampleK,
-                                           double boilingPointK, double peakFluenceJPerM2) {
-        List<String> out = new ArrayList<>();
-        out.add(LASER);
-        if (peakFluenceJPerM2 >= HIGH_FLUENCE_J_PER_M2) {
-            out.add(highFluence(peakFluenceJPerM2));
+    /** The text of one caution. */
+    public static String text(Caution caution) {
+        if (caution instanceof Caution.Laser) {
+            return LASER;
         }
-        if (steadyRiseK >= HOT_RISE_K || sampleK + steadyRiseK >= boilingPointK - BOILING_MARGIN_K) {
-            out.add(hotSample(steadyRiseK, sampleK, boilingPointK));
+        if (caution instanceof Caution.HighFluence c) {
+            return highFluence(c.peakFluenceJPerM2());
         }
-        if (flammable(matrix)) {
-            out.add(solventHeating(matrix, steadyRiseK, boilingPointK));
+        if (caution instanceof Caution.HotSample c) {
+            return hotSample(c.riseK(), c.sampleK(), c.boilingPointK());
         }
-        if (heavyMetal(material)) {
-            out.add(HEAVY_METALS);
+        if (caution instanceof Caution.FlammableSolvent c) {
+            return solventHeating(c.matrix(), c.riseK(), c.boilingPointK());
         }
-        return List.copyOf(out);
+        if (caution instanceof Caution.HeavyMetals) {
+            return HEAVY_METALS;
+        }
+        throw new IllegalArgumentException("no wording for " + caution);
+    }
+
+    /** The texts of several cautions, in their order. */
+    public static List<String> texts(List<Caution> cautions) {
+        return cautions.stream().map(Cautions::text).toList();
     }
 }

@@ -7,8 +7,11 @@ import org.ladderkin.fit.Dataset;
 import org.ladderkin.fit.FitResult;
 import org.ladderkin.fit.LadderFit;
 import org.ladderkin.fit.ParameterEstimate;
+import org.ladderkin.fit.ParameterNaming;
 import org.ladderkin.fit.Trace;
-import org.ladderkin.io.FitResultJson;
+import org.ladderkin.observe.MeasuredIrf;
+import org.ladderkin.units.Dimension;
+import org.ladderkin.units.Quantity;
 
 /**
  * The HTML report of a ladder fit: data with the fitted curves on a log delay axis, residuals, the parameter table
@@ -29,7 +32,7 @@ public final class FitReport {
         page.paragraph("Data: " + String.join(", ", data.sourceFiles()) + " — " + data.size() + " traces, fitted with the "
                 + "exciton ladder (shared parameters across the series).");
         if (outcome.measuredIrf() != null) {
-            page.paragraph("Instrument response: " + FitResultJson.measuredIrfNote(outcome.measuredIrf()) + ".");
+            page.paragraph("Instrument response: " + measuredIrfNote(outcome.measuredIrf()) + ".");
         }
         page.paragraph("Status: " + r.status().name().toLowerCase(Locale.ROOT) + (r.message().isEmpty() ? "" : " — " + r.message()));
         if (!r.ok()) {
@@ -44,7 +47,7 @@ public final class FitReport {
             if (!e.shared() || e.key().equals("amplitude") || e.key().equals("baseline")) {
                 continue;
             }
-            FitResultJson.TradeKey t = FitResultJson.trade(e.key());
+            ParameterNaming.TradeKey t = ParameterNaming.trade(e.key());
             String profile = r.profile(e.key()).map(p -> num(p.lower() * t.factor()) + (p.lowerOpen() ? " (open)" : "") + " … "
                     + num(p.upper() * t.factor()) + (p.upperOpen() ? " (open)" : "")).orElse("");
             rows.add(List.of(t.key(), num(e.value() * t.factor()), e.fixed() ? "fixed" : num(e.stdError() * t.factor()), profile));
@@ -73,6 +76,12 @@ public final class FitReport {
             page.table(List.of("quantity", "plan", "fit", "note"), planRows);
         }
         return page.render();
+    }
+
+    /** One line saying which measured IRF the fit used, e.g. "measured IRF from irf.csv, FWHM 104 fs". */
+    public static String measuredIrfNote(MeasuredIrf irf) {
+        return "measured IRF from " + irf.origin() + ", FWHM " + Quantity.formatBest(irf.fwhmS(), Dimension.TIME, 3)
+                + " (centroid at time zero)";
     }
 
     /** Data with fitted curves, and residuals, on a log delay axis (delays after time zero only). */

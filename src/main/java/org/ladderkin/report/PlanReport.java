@@ -14,6 +14,7 @@ import org.ladderkin.plan.Instrument;
 import org.ladderkin.plan.Predictions;
 import org.ladderkin.plan.RateOption;
 import org.ladderkin.plan.WavelengthOption;
+import org.ladderkin.plan.WhatIf;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.PhysicalConstants;
 import org.ladderkin.units.Quantity;
@@ -79,7 +80,7 @@ public final class PlanReport {
     }
 
     /** The complete HTML page with what-if variants side by side. */
-    public static String html(CampaignPlan plan, List<org.ladderkin.plan.WhatIf> whatIfs) {
+    public static String html(CampaignPlan plan, List<WhatIf> whatIfs) {
         HtmlPage page = new HtmlPage("Campaign plan — " + plan.inputs().title());
         if (!plan.inputs().lab().isEmpty()) {
             page.block("note", plan.inputs().lab());
@@ -141,7 +142,7 @@ public final class PlanReport {
                 + "instantaneous here. Beyond ⟨N⟩ ≈ 10, for band-edge pumping and for dense films these assumptions weaken: "
                 + "see docs/physics.md.");
         page.heading(2, "Safety");
-        page.cautions(plan.cautions());
+        page.cautions(Cautions.texts(plan.cautions()));
         page.block("note", "ladderkin plan report. Numbers are planning estimates from the model above; they do not "
                 + "replace measurements, the institution's laser safety officer or local rules.");
         return page.render();
@@ -236,7 +237,7 @@ public final class PlanReport {
                         m.offered() ? "yes" : "NO")).toList());
     }
 
-    private static void whatIfSection(HtmlPage page, CampaignPlan plan, List<org.ladderkin.plan.WhatIf> whatIfs) {
+    private static void whatIfSection(HtmlPage page, CampaignPlan plan, List<WhatIf> whatIfs) {
         if (whatIfs.isEmpty()) {
             return;
         }
@@ -244,7 +245,7 @@ public final class PlanReport {
         List<List<String>> rows = new ArrayList<>();
         rows.add(whatIfRow("as planned", plan));
         for (var w : whatIfs) {
-            rows.add(whatIfRow(w.change(), w.plan()));
+            rows.add(whatIfRow(w.label(), w.plan()));
         }
         page.table(List.of("variant", "rate", "residual", "charged", "steady rise (K)", "τ₂ rel. error", "worst risk"), rows);
     }

@@ -1,7 +1,7 @@
 package org.ladderkin.bench;
 
 import java.util.concurrent.TimeUnit;
-import org.ladderkin.kinetics.BenchCases;
+import org.ladderkin.cli.BenchCases;
 import org.ladderkin.kinetics.KineticModel;
 import org.ladderkin.kinetics.LadderKinetics;
 import org.ladderkin.kinetics.Populations;

@@ -69,4 +69,18 @@ class TriexcitonProcessCommandsTest {
         assertThat(MainTest.run("simulate", "--help").out()).contains("--tau-auger3");
         assertThat(MainTest.run("fit", "--help").out()).contains("tau-auger3");
     }
+
+    @Test
+    void fitFreesTheTriexcitonLifetimeByItsRegistryName(@TempDir Path dir) throws Exception {
+        Path csv = FitCommandTest.simulatedSeries(dir, 5);
+        MainTest.Run fit = MainTest.run("fit", csv.toString(), "--tau-rad", "20ns", "--tau-auger2", "40ps",
+                "--fluences", "1e13,3e13,1e14,3e14", "--free", "scale,tau-auger3", "--out", dir.resolve("out").toString(),
+                "--format", "json", "--quiet");
+        assertThat(fit.exit()).as(fit.err()).isZero();
+        com.fasterxml.jackson.databind.JsonNode tau3 = new com.fasterxml.jackson.databind.ObjectMapper().readTree(fit.out())
+                .at("/parameters/tauAuger3Ps");
+        assertThat(tau3.get("fixed").asBoolean()).isFalse();
+        // the series was simulated with the scaling law's τ₃ = τ₂/g(3) = 40 ps / 4.5
+        assertThat(Math.abs(tau3.get("value").asDouble() - 40 / 4.5)).isLessThan(4 * tau3.get("stdError").asDouble() + 0.5);
+    }
 }

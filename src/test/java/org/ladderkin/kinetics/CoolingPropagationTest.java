@@ -11,6 +11,7 @@ import org.hipparchus.linear.RealMatrix;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
+import org.ladderkin.cli.BenchCases;
 import org.ladderkin.kinetics.propagate.ExactPropagator;
 import org.ladderkin.kinetics.propagate.SettlingPropagator;
 import org.ladderkin.kinetics.rate.AugerIonisation;

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.util.EnumSet;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.ladderkin.cli.BenchCases;
 import org.ladderkin.kinetics.propagate.SettlingPropagator;
 import org.ladderkin.kinetics.rate.AugerIonisation;
 import org.ladderkin.kinetics.rate.AugerRecombination;

@@ -8,6 +8,7 @@ import org.ladderkin.plan.FluencePoint;
 import org.ladderkin.plan.PlanInputs;
 import org.ladderkin.plan.Planner;
 import org.ladderkin.plan.WavelengthOption;
+import org.ladderkin.report.Cautions;
 import org.ladderkin.report.PlanReport;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.PhysicalConstants;
@@ -36,7 +37,7 @@ public final class PlannerPrediction implements PredictionSource {
     @Override
     public Prediction predict(PlanInputs plan) {
         CampaignPlan p = Planner.plan(plan, STOP_WHEN_INTERRUPTED, false);
-        return new Prediction(PlanReport.charts(p), p.risks(), derived(p), p.cautions(),
+        return new Prediction(PlanReport.charts(p), p.risks(), derived(p), Cautions.texts(p.cautions()),
                 "multiexciton ladder, periodic steady state at " + Quantity.formatBest(p.chosenRate().repetitionRateHz(),
                         Dimension.FREQUENCY, 3) + "; log-spaced series (the report adds the optimal design)");
     }

@@ -1,5 +1,9 @@
-package org.ladderkin.kinetics;
+package org.ladderkin.cli;
 
+import org.ladderkin.kinetics.KineticModel;
+import org.ladderkin.kinetics.LadderKinetics;
+import org.ladderkin.kinetics.Populations;
+import org.ladderkin.kinetics.Trace;
 import org.ladderkin.kinetics.process.CoolingProcess;
 import org.ladderkin.kinetics.process.LadderModel;
 import org.ladderkin.kinetics.rate.AugerScaling;
