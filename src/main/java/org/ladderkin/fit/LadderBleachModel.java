@@ -1,3 +1,4 @@
+// Over 400 lines: the bleach, its pulse-train steady state and both instrument-response convolutions share one cached ladder.
 package org.ladderkin.fit;
 
 import java.util.Arrays;

@@ -1,3 +1,4 @@
+// Over 400 lines: the per-trace variable projection, its bound transforms and the weighted Jacobian share one cached evaluation.
 package org.ladderkin.fit;
 
 import java.util.ArrayList;

@@ -6,7 +6,6 @@ import java.util.List;
 import java.util.Locale;
 import org.ladderkin.fit.Dataset;
 import org.ladderkin.fit.Trace;
-import org.ladderkin.fit.TraceMetadata;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Unit;
 

@@ -9,9 +9,6 @@ import org.ladderkin.io.PlanCodec;
 import org.ladderkin.kinetics.KineticModel;
 import org.ladderkin.kinetics.rate.Neutralisation;
 import org.ladderkin.kinetics.rate.RateLaw;
-import org.ladderkin.plan.CampaignPlan;
-import org.ladderkin.plan.PlanInputs;
-import org.ladderkin.plan.Planner;
 
 /** The fit starts from exactly the plan's ladder, period and excitation scales. */
 class PlanFitBasisTest {

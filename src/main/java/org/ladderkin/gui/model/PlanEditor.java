@@ -1,6 +1,6 @@
+// Over 400 lines: one editor state (document, positions, history, file, check) kept consistent in one place.
 package org.ladderkin.gui.model;
 
-// Over 400 lines: one editor state (document, positions, history, file, check) kept consistent in one place.
 
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;

@@ -4,7 +4,6 @@ package org.ladderkin.gui.view;
 import java.awt.Color;
 import java.awt.Component;
 import java.io.File;
-import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;

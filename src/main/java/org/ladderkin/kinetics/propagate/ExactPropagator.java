@@ -1,3 +1,4 @@
+// Over 400 lines: the clustered modal decomposition, its growth guard and the precomputed delay grids share one factorisation.
 package org.ladderkin.kinetics.propagate;
 
 import java.util.ArrayList;

@@ -235,7 +235,8 @@ class FitRunTest {
         assertThat(run.pushBack().edits()).isEmpty();
         assertThat(run.pushBack().notes()).containsExactly("run a fit first");
         assertThatThrownBy(() -> run.setFree("tau-auger9", true)).hasMessageContaining("not a ladder fit parameter");
+        // the process registry's fittable lifetimes (τ₃ included) between the scale and time zero
         assertThat(FitRun.offered()).extracting(FitOptions.FreeParameter::key)
-                .containsExactly("scale", "tau-auger2", "tau-rad", "tau-trap", "time-zero");
+                .containsExactly("scale", "tau-auger2", "tau-rad", "tau-trap", "tau-auger3", "time-zero");
     }
 }
