@@ -30,28 +30,10 @@ public record AugerProcess(double tauAuger2S, ExcitonScaling scaling, double tau
             "Positive-trion Auger lifetime", "--tau-trion-positive", "positive-trion Auger lifetime", "ps").optional();
 
     /** The registry entry. */
-    public static final ProcessType<AugerProcess> TYPE = new ProcessType<>() {
-        @Override
-        public String section() {
-            return "auger";
-        }
-
-        @Override
-        public boolean required() {
-            return true;
-        }
-
-        @Override
-        public List<ProcessParameter> parameters() {
-            return List.of(BIEXCITON_LIFETIME, SCALING, NEGATIVE_TRION_LIFETIME, POSITIVE_TRION_LIFETIME);
-        }
-
-        @Override
-        public AugerProcess read(ParameterReader in) {
-            return new AugerProcess(in.seconds(BIEXCITON_LIFETIME), in.scaling(SCALING, 2, AugerProcess::law),
-                    in.seconds(NEGATIVE_TRION_LIFETIME), in.seconds(POSITIVE_TRION_LIFETIME));
-        }
-    };
+    public static final ProcessType<AugerProcess> TYPE = ProcessType.of("auger", true,
+            List.of(BIEXCITON_LIFETIME, SCALING, NEGATIVE_TRION_LIFETIME, POSITIVE_TRION_LIFETIME),
+            in -> new AugerProcess(in.seconds(BIEXCITON_LIFETIME), in.scaling(SCALING, 2, AugerProcess::law),
+                    in.seconds(NEGATIVE_TRION_LIFETIME), in.seconds(POSITIVE_TRION_LIFETIME)));
 
     public AugerProcess {
         Lifetimes.require("biexciton Auger lifetime", tauAuger2S, false);

@@ -34,37 +34,9 @@ public record ChargingProcess(Set<Charge> charges, AugerIonisation ionisation, d
             .optional();
 
     /** The registry entry. */
-    public static final ProcessType<ChargingProcess> TYPE = new ProcessType<>() {
-        @Override
-        public String section() {
-            return "charging";
-        }
-
-        @Override
-        public boolean required() {
-            return false;
-        }
-
-        @Override
-        public List<ProcessParameter> parameters() {
-            return List.of(CHARGE_LIST, IONISATION_PROBABILITY, IONISATION_LEAVES, NEUTRALISATION_TIME);
-        }
-
-        @Override
-        public ChargingProcess read(ParameterReader in) {
-            Set<Charge> cs = EnumSet.noneOf(Charge.class);
-            for (String c : in.choices(CHARGE_LIST)) {
-                cs.add(charge(c));
-            }
-            Charge left = charge(in.choice(IONISATION_LEAVES));
-            double p = in.number(IONISATION_PROBABILITY);
-            if (p > 0 && !cs.contains(left)) {
-                throw in.error(IONISATION_LEAVES, "ionisation leaves " + in.choice(IONISATION_LEAVES)
-                        + " dots but '" + CHARGE_LIST.key() + "' does not list them");
-            }
-            return new ChargingProcess(cs, new AugerIonisation(p, left), in.seconds(NEUTRALISATION_TIME));
-        }
-    };
+    public static final ProcessType<ChargingProcess> TYPE = ProcessType.of("charging", false,
+            List.of(CHARGE_LIST, IONISATION_PROBABILITY, IONISATION_LEAVES, NEUTRALISATION_TIME),
+            ChargingProcess::read);
 
     public ChargingProcess {
         charges = charges.isEmpty() ? Set.of() : Set.copyOf(EnumSet.copyOf(charges));
@@ -76,6 +48,20 @@ public record ChargingProcess(Set<Charge> charges, AugerIonisation ionisation, d
                     + " dots, but that charge is not in the model's charges");
         }
         Lifetimes.require("photocharge lifetime", neutralisationS, true);
+    }
+
+    private static ChargingProcess read(ParameterReader in) {
+        Set<Charge> cs = EnumSet.noneOf(Charge.class);
+        for (String c : in.choices(CHARGE_LIST)) {
+            cs.add(charge(c));
+        }
+        Charge left = charge(in.choice(IONISATION_LEAVES));
+        double p = in.number(IONISATION_PROBABILITY);
+        if (p > 0 && !cs.contains(left)) {
+            throw in.error(IONISATION_LEAVES, "ionisation leaves " + in.choice(IONISATION_LEAVES)
+                    + " dots but '" + CHARGE_LIST.key() + "' does not list them");
+        }
+        return new ChargingProcess(cs, new AugerIonisation(p, left), in.seconds(NEUTRALISATION_TIME));
     }
 
     private static Charge charge(String word) {

@@ -14,27 +14,9 @@ public record CoolingProcess(double tauCoolS) implements ProcessSpec {
             "--tau-cool", "intraband cooling time per hot exciton (off when omitted)", "ps");
 
     /** The registry entry. */
-    public static final ProcessType<CoolingProcess> TYPE = new ProcessType<>() {
-        @Override
-        public String section() {
-            return "cooling";
-        }
-
-        @Override
-        public boolean required() {
-            return false;
-        }
-
-        @Override
-        public List<ProcessParameter> parameters() {
-            return List.of(LIFETIME);
-        }
-
-        @Override
-        public CoolingProcess read(ParameterReader in) {
-            return new CoolingProcess(in.seconds(LIFETIME));
-        }
-    };
+    public static final ProcessType<CoolingProcess> TYPE = ProcessType.of("cooling", false,
+            List.of(LIFETIME),
+            in -> new CoolingProcess(in.seconds(LIFETIME)));
 
     public CoolingProcess {
         Lifetimes.require("cooling time", tauCoolS, false);

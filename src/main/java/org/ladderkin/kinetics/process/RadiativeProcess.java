@@ -24,28 +24,10 @@ public record RadiativeProcess(double tauRadS, ExcitonScaling scaling, double ch
             "2");
 
     /** The registry entry. */
-    public static final ProcessType<RadiativeProcess> TYPE = new ProcessType<>() {
-        @Override
-        public String section() {
-            return "radiative";
-        }
-
-        @Override
-        public boolean required() {
-            return true;
-        }
-
-        @Override
-        public List<ProcessParameter> parameters() {
-            return List.of(LIFETIME, SCALING, CHARGED_FACTOR);
-        }
-
-        @Override
-        public RadiativeProcess read(ParameterReader in) {
-            return new RadiativeProcess(in.seconds(LIFETIME), in.scaling(SCALING, 1, RadiativeProcess::law),
-                    in.number(CHARGED_FACTOR));
-        }
-    };
+    public static final ProcessType<RadiativeProcess> TYPE = ProcessType.of("radiative", true,
+            List.of(LIFETIME, SCALING, CHARGED_FACTOR),
+            in -> new RadiativeProcess(in.seconds(LIFETIME), in.scaling(SCALING, 1, RadiativeProcess::law),
+                    in.number(CHARGED_FACTOR)));
 
     public RadiativeProcess {
         Lifetimes.require("radiative lifetime", tauRadS, false);

@@ -14,27 +14,9 @@ public record RefreshProcess(double exchangeS) implements ProcessSpec {
             "--tau-refresh", "sample exchange time by stirring or flow", "ms");
 
     /** The registry entry. */
-    public static final ProcessType<RefreshProcess> TYPE = new ProcessType<>() {
-        @Override
-        public String section() {
-            return "refresh";
-        }
-
-        @Override
-        public boolean required() {
-            return false;
-        }
-
-        @Override
-        public List<ProcessParameter> parameters() {
-            return List.of(EXCHANGE_TIME);
-        }
-
-        @Override
-        public RefreshProcess read(ParameterReader in) {
-            return new RefreshProcess(in.seconds(EXCHANGE_TIME));
-        }
-    };
+    public static final ProcessType<RefreshProcess> TYPE = ProcessType.of("refresh", false,
+            List.of(EXCHANGE_TIME),
+            in -> new RefreshProcess(in.seconds(EXCHANGE_TIME)));
 
     public RefreshProcess {
         Lifetimes.require("sample exchange time", exchangeS, false);

@@ -18,32 +18,10 @@ public record TrappingProcess(double tauTrapS) implements ProcessSpec {
             .fittedAs("tau-trap", "tauTrap", 3);
 
     /** The registry entry. */
-    public static final ProcessType<TrappingProcess> TYPE = new ProcessType<>() {
-        @Override
-        public String section() {
-            return "trapping";
-        }
-
-        @Override
-        public boolean required() {
-            return false;
-        }
-
-        @Override
-        public List<ProcessParameter> parameters() {
-            return List.of(LIFETIME);
-        }
-
-        @Override
-        public TrappingProcess read(ParameterReader in) {
-            return new TrappingProcess(in.seconds(LIFETIME));
-        }
-
-        @Override
-        public TrappingProcess startWhenFreed(LadderModel model) {
-            return new TrappingProcess(START_WHEN_FREED_S);
-        }
-    };
+    public static final ProcessType<TrappingProcess> TYPE = ProcessType.of("trapping", false,
+            List.of(LIFETIME),
+            in -> new TrappingProcess(in.seconds(LIFETIME)),
+            model -> new TrappingProcess(START_WHEN_FREED_S));
 
     public TrappingProcess {
         Lifetimes.require("trapping lifetime", tauTrapS, false);

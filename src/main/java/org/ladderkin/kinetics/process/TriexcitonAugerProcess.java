@@ -17,34 +17,13 @@ public record TriexcitonAugerProcess(double tauAuger3S) implements ProcessSpec {
             .fittedAs("tau-auger3", "tauAuger3", 4).inPlanAs("triexcitonLifetime");
 
     /** The registry entry. */
-    public static final ProcessType<TriexcitonAugerProcess> TYPE = new ProcessType<>() {
-        @Override
-        public String section() {
-            return "triexcitonAuger";
-        }
-
-        @Override
-        public boolean required() {
-            return false;
-        }
-
-        @Override
-        public List<ProcessParameter> parameters() {
-            return List.of(LIFETIME);
-        }
-
-        @Override
-        public TriexcitonAugerProcess read(ParameterReader in) {
-            return new TriexcitonAugerProcess(in.seconds(LIFETIME));
-        }
-
-        /** Freed without a value: start where the scaling law puts τ₃ (τ₂/g(3)). */
-        @Override
-        public TriexcitonAugerProcess startWhenFreed(LadderModel model) {
-            AugerProcess auger = model.find(AugerProcess.TYPE).orElseThrow();
-            return new TriexcitonAugerProcess(auger.tauAuger2S() / auger.scaling().factor(3));
-        }
-    };
+    public static final ProcessType<TriexcitonAugerProcess> TYPE = ProcessType.of("triexcitonAuger", false,
+            List.of(LIFETIME),
+            in -> new TriexcitonAugerProcess(in.seconds(LIFETIME)),
+            model -> {
+                AugerProcess auger = model.find(AugerProcess.TYPE).orElseThrow();
+                return new TriexcitonAugerProcess(auger.tauAuger2S() / auger.scaling().factor(3));
+            });
 
     public TriexcitonAugerProcess {
         Lifetimes.require("triexciton Auger lifetime", tauAuger3S, false);
