@@ -59,17 +59,16 @@ class PlanIrfFileTest {
     void bothIrfFileAndIrfFwhmAreRefusedAtTheFile() throws Exception {
         String t = demoWith("\"irfFwhm\": \"200 fs\", \"irfFile\": \"ta.csv\"");
         assertThatThrownBy(() -> PlanCodecRejectionTest.read(t)).isInstanceOf(InputException.class)
-                .hasMessage(PlanCodecRejectionTest.at(t, "\"ta.csv\"", 0) + ": field 'instruments[0].irfFile': give either "
-                        + "'irfFwhm' or 'irfFile', not both (a measured response fixes the width)");
+                .satisfies(InputAssertions.input(InputProblem.CONFLICT, PlanCodecRejectionTest.at(t, "\"ta.csv\"", 0),
+                        "instruments[0].irfFile"));
     }
 
     @Test
     void neitherIsRefusedNamingBoth() throws Exception {
         String t = PlanCodecRejectionTest.demoText().replace(", " + TA_FWHM, " },");
         assertThatThrownBy(() -> PlanCodecRejectionTest.read(t)).isInstanceOf(InputException.class)
-                .hasMessage(PlanCodecRejectionTest.at(t, "{ \"kind\": \"transient-absorption\"", 0) + ": field "
-                        + "'instruments[0].irfFwhm': missing required field in 'instruments[0]' (add \"irfFwhm\": ... for a "
-                        + "Gaussian response, or \"irfFile\": ... for a measured one)");
+                .satisfies(InputAssertions.input(InputProblem.MISSING_FIELD,
+                        PlanCodecRejectionTest.at(t, "{ \"kind\": \"transient-absorption\"", 0), "instruments[0].irfFwhm"));
     }
 
     @Test
@@ -78,9 +77,9 @@ class PlanIrfFileTest {
         String t = demoWith("\"irfFile\": \"nowhere.csv\"");
         Files.writeString(plan, t);
         assertThatThrownBy(() -> PlanCodec.read(plan)).isInstanceOf(InputException.class)
-                .hasMessage(PlanCodecRejectionTest.at(t, "\"nowhere.csv\"", 0).replaceFirst("^plan\\.json",
-                        java.util.regex.Matcher.quoteReplacement(plan.toString())) + ": field 'instruments[0].irfFile': IRF file not found: "
-                        + dir.toAbsolutePath().resolve("nowhere.csv") + " (relative paths start at the plan file's folder)");
+                .satisfies(InputAssertions.input(InputProblem.NOT_FOUND, PlanCodecRejectionTest.at(t, "\"nowhere.csv\"", 0)
+                        .replaceFirst("^plan\\.json", java.util.regex.Matcher.quoteReplacement(plan.toString())),
+                        "instruments[0].irfFile"));
     }
 
     @Test
