@@ -134,6 +134,22 @@ public record Sample(SampleSpec spec, double sizeM, double firstExcitonEnergyJ, 
         return Double.isNaN(firstExcitonEnergyJ) ? Double.NaN : Photon.wavelengthM(firstExcitonEnergyJ);
     }
 
+    /**
+     * How the concentration was obtained, in words: the value given, or the absorbance and the part of σ(λ) it went
+     * through (the same σ(λ) that gives the pump cross-section).
+     */
+    public String concentrationBasis() {
+        if (!(spec.amount() instanceof SampleSpec.Absorbance a)) {
+            return "concentration given";
+        }
+        double at = a.atFirstExciton() ? firstExcitonWavelengthM() : a.wavelengthM();
+        CrossSection sigma = crossSectionAt(at);
+        return String.format(Locale.ROOT, "%s OD at %s through σ = %s cm² (%s, ±%.0f %%): %s",
+                org.ladderkin.material.Numbers.sig(a.od(), 3), nm(at),
+                org.ladderkin.material.Numbers.sig(sigma.crossSectionM2() * 1e4, 4), sigma.regime(),
+                100 * sigma.relativeUncertainty(), sigma.basis());
+    }
+
     /** Decadic absorbance of the sample over its path at {@code wavelengthM} (OD), from the cross-section there. */
     public double absorbanceAt(double wavelengthM) {
         return crossSectionAt(wavelengthM).crossSectionM2() * numberDensityPerM3() * spec.pathLengthM() / Math.log(10);

@@ -179,6 +179,7 @@ class CrossSectionModelTest {
         double givenM = given.atFirstExciton() ? s.firstExcitonWavelengthM() : given.wavelengthM();
         Reference.checkRelative(plan + ": absorbance back at " + Sample.nm(givenM) + " (OD)", s.absorbanceAt(givenM), given.od(), 1e-12);
         double sigmaGiven = s.crossSectionAt(givenM).crossSectionM2();
+        assertThat(s.concentrationBasis()).contains(s.crossSectionAt(givenM).basis()).contains(Sample.nm(givenM));
         for (double pumpM : in.laser().pumpWavelengthsM()) {
             Reference.checkRelative(plan + ": absorbance at the " + Sample.nm(pumpM) + " pump (OD)", s.absorbanceAt(pumpM),
                     given.od() * s.crossSectionAt(pumpM).crossSectionM2() / sigmaGiven, 1e-12);
