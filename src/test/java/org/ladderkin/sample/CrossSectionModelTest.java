@@ -89,7 +89,7 @@ class CrossSectionModelTest {
     @Test
     @CheckedAgainst(source = "Leatherdale et al., J. Phys. Chem. B 106, 7619 (2002), abstract (σ at 350 nm) and Yu, Qu, Guo, "
             + "Peng, Chem. Mater. 15, 2854 (2003), ε = 5857·D^2.65 at the first exciton (from memory): σ(λ) meets both laws at "
-            + "their own wavelengths", kind = CheckedAgainst.Kind.PUBLISHED)
+            + "their own wavelengths", kind = CheckedAgainst.Kind.FROM_MEMORY)
     void cdseShapeMeetsBothPublishedLaws() {
         Sample s = cdse580();
         double aCm = s.sizeM() / 2 * 100;
