@@ -8,6 +8,7 @@ import org.ladderkin.io.json.JsonTree;
 import org.ladderkin.io.json.Node;
 import org.ladderkin.material.AbsorptionLaw;
 import org.ladderkin.material.Material;
+import org.ladderkin.material.OpticalConstants;
 import org.ladderkin.material.ReciprocalQuadraticSizing;
 import org.ladderkin.material.Shape;
 import org.ladderkin.material.SizingCurve;
@@ -54,13 +55,14 @@ public final class MaterialCodec {
         Optional<SizingCurve> sizing = root.optional("sizing").map(s -> sizing(s, gap));
         Optional<AbsorptionLaw> edge = root.optional("firstExcitonAbsorption").map(a -> law(a, false));
         Optional<AbsorptionLaw> high = root.optional("highEnergyAbsorption").map(a -> law(a, true));
+        Optional<OpticalConstants> optical = root.optional("opticalConstants").map(MaterialCodec::optical);
         Sourced auger = sourcedNumber(root.field("augerVolumeConstantPsPerNm3"), 1e-12 / 1e-27);
         Sourced tauX = sourced(root.field("singleExcitonLifetime"), Dimension.TIME, true);
         Sourced tauT = sourced(root.field("trionLifetime"), Dimension.TIME, true);
         String notes = root.optional("notes").map(Node::string).orElse("");
         root.finish();
         try {
-            return new Material(key, name, shape, gap, molar, density, heat, n, ge, gh, sizing, edge, high, auger, tauX, tauT, notes);
+            return new Material(key, name, shape, gap, molar, density, heat, n, ge, gh, sizing, edge, high, optical, auger, tauX, tauT, notes);
         } catch (IllegalArgumentException e) {
             throw root.error(InputProblem.INVALID_VALUE, e.getMessage());
         }
@@ -179,11 +181,57 @@ public final class MaterialCodec {
         }
         double exponent = n.field("exponent").number();
         String source = n.field("source").string();
+        Sourced uncertainty = n.optional("relativeUncertainty").map(MaterialCodec::fraction).orElse(AbsorptionLaw.DEFAULT_UNCERTAINTY);
         n.finish();
         try {
-            return new AbsorptionLaw(wavelength, coefficientM2, per, unit.toSi(1), exponent, asExtinction, source);
+            return new AbsorptionLaw(wavelength, coefficientM2, per, unit.toSi(1), exponent, asExtinction, source, uncertainty);
         } catch (IllegalArgumentException e) {
             throw n.error(InputProblem.INVALID_VALUE, e.getMessage());
         }
+    }
+
+    /** {"value": 0.15, "source": "..."}: a relative uncertainty, a fraction in (0, 10]. */
+    private static Sourced fraction(Node n) {
+        Sourced s = sourcedNumber(n, 1);
+        if (!s.known() || s.value() > 10) {
+            throw n.error(InputProblem.OUT_OF_RANGE, "a relative uncertainty must be a fraction in (0, 10], was " + s.value());
+        }
+        return s;
+    }
+
+    /** {"wavelengthsNm": [...], "n": [...], "k": [...], "source": "...", "relativeUncertainty": {...}}. */
+    private static OpticalConstants optical(Node n) {
+        double[] w = numbers(n.field("wavelengthsNm"), 1e-9);
+        Node nNode = n.field("n");
+        double[] re = numbers(nNode, 1);
+        Node kNode = n.field("k");
+        double[] im = numbers(kNode, 1);
+        String source = n.field("source").string();
+        Sourced uncertainty = fraction(n.field("relativeUncertainty"));
+        n.finish();
+        if (re.length != w.length) {
+            throw nNode.error(InputProblem.INVALID_VALUE, "needs one n per wavelength (" + w.length + "), has " + re.length);
+        }
+        if (im.length != w.length) {
+            throw kNode.error(InputProblem.INVALID_VALUE, "needs one k per wavelength (" + w.length + "), has " + im.length);
+        }
+        try {
+            return new OpticalConstants(w, re, im, source, uncertainty);
+        } catch (IllegalArgumentException e) {
+            throw n.error(InputProblem.INVALID_VALUE, e.getMessage());
+        }
+    }
+
+    private static double[] numbers(Node n, double toSi) {
+        List<Node> items = n.items(2);
+        double[] out = new double[items.size()];
+        for (int i = 0; i < out.length; i++) {
+            double x = items.get(i).number();
+            if (!(x > 0)) {
+                throw items.get(i).error(InputProblem.OUT_OF_RANGE, "must be > 0, was " + x);
+            }
+            out[i] = x * toSi;
+        }
+        return out;
     }
 }

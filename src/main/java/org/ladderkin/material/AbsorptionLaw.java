@@ -16,9 +16,14 @@ import org.ladderkin.units.PhysicalConstants;
  * @param exponent         p
  * @param publishedAsExtinction whether the paper gives ε (so it is shown back as ε)
  * @param source           where the law comes from
+ * @param relativeUncertainty relative standard uncertainty of a value from this law, with where that figure comes from
  */
 public record AbsorptionLaw(double wavelengthM, double coefficientM2, Length length, double lengthUnitM, double exponent,
-                            boolean publishedAsExtinction, String source) {
+                            boolean publishedAsExtinction, String source, Sourced relativeUncertainty) {
+
+    /** Relative uncertainty used for a law whose file states none. */
+    public static final Sourced DEFAULT_UNCERTAINTY = new Sourced(0.3,
+            "common practice, no source: 30 % for a size law whose file states no scatter");
 
     /** Which length of the dot the law is written in. */
     public enum Length {
@@ -43,6 +48,10 @@ public record AbsorptionLaw(double wavelengthM, double coefficientM2, Length len
     public AbsorptionLaw {
         Objects.requireNonNull(length, "length");
         Objects.requireNonNull(source, "source");
+        Objects.requireNonNull(relativeUncertainty, "relativeUncertainty");
+        if (!relativeUncertainty.known() || !(relativeUncertainty.value() > 0)) {
+            throw new IllegalArgumentException("a law's relative uncertainty must be known and > 0, was " + relativeUncertainty.value());
+        }
         if (!(coefficientM2 > 0) || !Double.isFinite(coefficientM2)) {
             throw new IllegalArgumentException("absorption law coefficient must be > 0, was " + coefficientM2 + " m²");
         }
@@ -55,6 +64,12 @@ public record AbsorptionLaw(double wavelengthM, double coefficientM2, Length len
         if (!Double.isNaN(wavelengthM) && !(wavelengthM > 0)) {
             throw new IllegalArgumentException("wavelength must be > 0 or NaN (first exciton), was " + wavelengthM + " m");
         }
+    }
+
+    /** A law without a stated uncertainty: {@link #DEFAULT_UNCERTAINTY}. */
+    public AbsorptionLaw(double wavelengthM, double coefficientM2, Length length, double lengthUnitM, double exponent,
+                         boolean publishedAsExtinction, String source) {
+        this(wavelengthM, coefficientM2, length, lengthUnitM, exponent, publishedAsExtinction, source, DEFAULT_UNCERTAINTY);
     }
 
     /** Whether the law holds at the first-exciton peak rather than at a fixed wavelength. */

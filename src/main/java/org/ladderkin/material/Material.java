@@ -21,6 +21,7 @@ import java.util.Optional;
  * @param sizing                  first-exciton peak versus size, if one is published
  * @param firstExcitonAbsorption  cross-section law at the first-exciton peak, if one is published
  * @param highEnergyAbsorption    cross-section law at a fixed high-energy reference wavelength, if one is published
+ * @param opticalConstants        bulk n and k well above the band edge, if the library has them (σ's wavelength shape)
  * @param augerVolumeConstantSPerM3 biexciton Auger lifetime per unit dot volume, τ₂ = C·V (s/m³)
  * @param singleExcitonLifetimeS  typical single-exciton lifetime (s)
  * @param trionLifetimeS          typical (negative) trion lifetime (s)
@@ -30,7 +31,7 @@ public record Material(String key, String name, Shape shape, Sourced bulkGapJ, S
                        Sourced densityKgPerM3, Sourced specificHeatJPerKgK, Sourced refractiveIndex,
                        Sourced electronDegeneracy, Sourced holeDegeneracy, Optional<SizingCurve> sizing,
                        Optional<AbsorptionLaw> firstExcitonAbsorption, Optional<AbsorptionLaw> highEnergyAbsorption,
-                       Sourced augerVolumeConstantSPerM3, Sourced singleExcitonLifetimeS, Sourced trionLifetimeS,
+                       Optional<OpticalConstants> opticalConstants, Sourced augerVolumeConstantSPerM3, Sourced singleExcitonLifetimeS, Sourced trionLifetimeS,
                        String notes) {
 
     public Material {
@@ -40,6 +41,7 @@ public record Material(String key, String name, Shape shape, Sourced bulkGapJ, S
         Objects.requireNonNull(sizing, "sizing");
         Objects.requireNonNull(firstExcitonAbsorption, "firstExcitonAbsorption");
         Objects.requireNonNull(highEnergyAbsorption, "highEnergyAbsorption");
+        Objects.requireNonNull(opticalConstants, "opticalConstants");
         Objects.requireNonNull(notes, "notes");
         requirePositiveIfKnown(bulkGapJ, "bulk gap", "J");
         requirePositiveIfKnown(molarMassKgPerMol, "molar mass", "kg/mol");

@@ -5,7 +5,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
-import org.ladderkin.material.AbsorptionLaw;
 import org.ladderkin.material.Material;
 import org.ladderkin.material.SizingCurve;
 import org.ladderkin.units.Photon;
@@ -135,15 +134,33 @@ public record Sample(SampleSpec spec, double sizeM, double firstExcitonEnergyJ, 
         return Double.isNaN(firstExcitonEnergyJ) ? Double.NaN : Photon.wavelengthM(firstExcitonEnergyJ);
     }
 
+    /**
+     * How the concentration was obtained, in words: the value given, or the absorbance and the part of σ(λ) it went
+     * through (the same σ(λ) that gives the pump cross-section).
+     */
+    public String concentrationBasis() {
+        if (!(spec.amount() instanceof SampleSpec.Absorbance a)) {
+            return "concentration given";
+        }
+        double at = a.atFirstExciton() ? firstExcitonWavelengthM() : a.wavelengthM();
+        CrossSection sigma = crossSectionAt(at);
+        return String.format(Locale.ROOT, "%s OD at %s through σ = %s cm² (%s, ±%.0f %%): %s",
+                org.ladderkin.material.Numbers.sig(a.od(), 3), nm(at),
+                org.ladderkin.material.Numbers.sig(sigma.crossSectionM2() * 1e4, 4), sigma.regime(),
+                100 * sigma.relativeUncertainty(), sigma.basis());
+    }
+
     /** Decadic absorbance of the sample over its path at {@code wavelengthM} (OD), from the cross-section there. */
     public double absorbanceAt(double wavelengthM) {
         return crossSectionAt(wavelengthM).crossSectionM2() * numberDensityPerM3() * spec.pathLengthM() / Math.log(10);
     }
 
     /**
-     * The absorption cross-section of one dot at {@code wavelengthM}, from the best information available: the user's
-     * own value, scaled by the user's spectrum where needed; else a material law carried by the spectrum; else a law at
-     * its own wavelength; else the high-energy law used at another wavelength, flagged approximate.
+     * The absorption cross-section of one dot at {@code wavelengthM}, with its regime and relative uncertainty: the
+     * user's own value (carried by the user's spectrum where needed); else a material law carried by the spectrum; else
+     * the material's σ(λ): a law at its own wavelength, the intrinsic absorption from bulk optical constants far above the
+     * band edge, the first-exciton law at the peak, and an approximate interpolation between them. The concentration is
+     * derived through this same function, so A(λ) = A(given)·σ(λ)/σ(given) for every λ.
      *
      * @throws SampleException when nothing supports a value at that wavelength
      */
@@ -151,71 +168,7 @@ public record Sample(SampleSpec spec, double sizeM, double firstExcitonEnergyJ, 
         if (!(wavelengthM > 0)) {
             throw new IllegalArgumentException("wavelength must be > 0, was " + wavelengthM * 1e9 + " nm");
         }
-        Optional<AbsorptionSpectrum> spectrum = spec.spectrum();
-        if (spec.givenCrossSection().isPresent()) {
-            SampleSpec.GivenCrossSection g = spec.givenCrossSection().get();
-            if (Double.isNaN(g.wavelengthM()) || same(g.wavelengthM(), wavelengthM)) {
-                return new CrossSection(g.crossSectionM2(), wavelengthM, "given by the user", false);
-            }
-            if (spectrum.isPresent() && spectrum.get().covers(g.wavelengthM()) && spectrum.get().covers(wavelengthM)) {
-                return scaled(g.crossSectionM2(), g.wavelengthM(), wavelengthM, spectrum.get(), "the user's value at ");
-            }
-            return new CrossSection(g.crossSectionM2(), wavelengthM, String.format(Locale.ROOT,
-                    "the user's value at %.1f nm used at %.1f nm (load an absorption spectrum to scale it)",
-                    g.wavelengthM() * 1e9, wavelengthM * 1e9), true);
-        }
-        Material m = material();
-        Optional<AbsorptionLaw> high = m.highEnergyAbsorption();
-        Optional<AbsorptionLaw> edge = m.firstExcitonAbsorption();
-        double firstM = firstExcitonWavelengthM();
-        if (spectrum.isPresent()) {
-            AbsorptionSpectrum s = spectrum.get();
-            if (high.isPresent() && s.covers(high.get().wavelengthM()) && s.covers(wavelengthM)) {
-                return scaled(high.get().crossSectionM2At(sizeM), high.get().wavelengthM(), wavelengthM, s,
-                        m.key() + " high-energy law at ");
-            }
-            if (edge.isPresent() && !Double.isNaN(firstM) && s.covers(firstM) && s.covers(wavelengthM)) {
-                return scaled(edge.get().crossSectionM2At(sizeM), firstM, wavelengthM, s, m.key() + " first-exciton law at ");
-            }
-        }
-        if (edge.isPresent() && !Double.isNaN(firstM) && Math.abs(firstM - wavelengthM) <= AT_FIRST_EXCITON_M) {
-            return new CrossSection(edge.get().crossSectionM2At(sizeM), wavelengthM,
-                    m.key() + " first-exciton law (" + edge.get().source() + ")", false);
-        }
-        if (high.isPresent()) {
-            AbsorptionLaw h = high.get();
-            if (same(h.wavelengthM(), wavelengthM)) {
-                return new CrossSection(h.crossSectionM2At(sizeM), wavelengthM,
-                        m.key() + " law at " + nm(h.wavelengthM()) + " (" + h.source() + ")", false);
-            }
-            if (!Double.isNaN(firstM) && wavelengthM > firstM + AT_FIRST_EXCITON_M) {
-                throw new SampleException(SampleException.Part.CROSS_SECTION, String.format(Locale.ROOT,
-                        "%s lies on the red side of the first-exciton peak (%s), where no law applies: give a measured "
-                                + "cross-section or load an absorption spectrum", nm(wavelengthM), nm(firstM)));
-            }
-            return new CrossSection(h.crossSectionM2At(sizeM), wavelengthM, String.format(Locale.ROOT,
-                    "%s law at %s used at %s without a spectrum (load your absorption spectrum, or give a measured "
-                            + "cross-section, for a better value)", m.key(), nm(h.wavelengthM()), nm(wavelengthM)), true);
-        }
-        String what = edge.isPresent()
-                ? m.key() + " has only a first-exciton absorption law (" + (Double.isNaN(firstM) ? "peak unknown" : "peak at " + nm(firstM))
-                + "); for " + nm(wavelengthM) + " load an absorption spectrum or give a measured cross-section"
-                : m.key() + " has no absorption law in the library; give a measured cross-section (e.g. --cross-section 2e-15cm2)";
-        throw new SampleException(SampleException.Part.CROSS_SECTION, "no cross-section at " + nm(wavelengthM) + ": " + what);
-    }
-
-    private static CrossSection scaled(double sigmaFromM2, double fromM, double toM, AbsorptionSpectrum s, String label) {
-        double ratio = s.ratio(toM, fromM);
-        if (!(ratio > 0)) {
-            throw new SampleException(SampleException.Part.CROSS_SECTION, String.format(Locale.ROOT,
-                    "%s shows no absorbance at %s: the sample does not absorb there", s.origin(), nm(toM)));
-        }
-        return new CrossSection(sigmaFromM2 * ratio, toM, String.format(Locale.ROOT, "%s%s scaled by the measured spectrum "
-                + "%s (A(%s)/A(%s) = %.4g)", label, nm(fromM), s.origin(), nm(toM), nm(fromM), ratio), false);
-    }
-
-    private static boolean same(double aM, double bM) {
-        return Math.abs(aM - bM) <= SAME_WAVELENGTH_M;
+        return CrossSectionModel.at(this, wavelengthM);
     }
 
     static String nm(double m) {

@@ -58,7 +58,7 @@ class ExcitationTest {
     void approximateCrossSectionIsFlagged() {
         Sample cdse = Sample.resolve(new SampleSpec("t", MaterialLibrary.fromHome().material("CdSe"), new SampleSpec.ByFirstPeak(580e-9), 0,
                 new SampleSpec.Absorbance(0.1, Double.NaN), 1e-3, Optional.empty(), Refresh.stirred(), Optional.empty(), Optional.empty()));
-        Excitation x = Excitation.of(cdse, new Pulse(50e-9, 400e-9, 1e3), new GaussianBeam(1e-4), new GaussianBeam(4e-5), true);
+        Excitation x = Excitation.of(cdse, new Pulse(50e-9, 515e-9, 1e3), new GaussianBeam(1e-4), new GaussianBeam(4e-5), true);
         assertThat(x.crossSection().approximate()).isTrue();
         assertThat(x.advisories()).extracting(Advisory::kind).containsExactly(Advisory.Kind.CROSS_SECTION_APPROXIMATE);
     }
