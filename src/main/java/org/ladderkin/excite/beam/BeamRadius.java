@@ -28,4 +28,17 @@ public record BeamRadius(double radiusM, double stdErrorM, Method method) {
         }
         Objects.requireNonNull(method, "method");
     }
+
+    /**
+     * The equivalent radius √(wx·wy) of an elliptical spot from its radii along two perpendicular axes (the radius of the
+     * round beam with the same peak fluence per joule), its error propagated from independent errors of the two.
+     */
+    public static BeamRadius equivalent(BeamRadius x, BeamRadius y) {
+        if (x.method() != y.method()) {
+            throw new IllegalArgumentException("radii measured by " + x.method() + " and " + y.method() + " are not combined");
+        }
+        double r = Math.sqrt(x.radiusM() * y.radiusM());
+        double rel = 0.5 * Math.hypot(x.stdErrorM() / x.radiusM(), y.stdErrorM() / y.radiusM());
+        return new BeamRadius(r, r * rel, x.method());
+    }
 }
