@@ -198,12 +198,12 @@ final class BeamCommand implements Callable<Integer> {
                 out.println("  1/e² radius  " + pm(f.radius(), 1e6) + " µm (erf fit, " + f.points() + " points)");
                 out.println("  10–90 % rule " + (Double.isNaN(f.tenNinetyRadiusM()) ? "not crossed by the data"
                         : num(f.tenNinetyRadiusM() * 1e6) + " µm" + agreement(f)));
-                out.println("  centre       " + num(f.centreM() * 1e6) + " ± " + num(f.centreStdErrorM() * 1e6) + " µm");
+                out.println("  centre       " + num(f.centreM() * 1e6) + " ± " + err(f.centreStdErrorM() * 1e6) + " µm");
             } else if (m instanceof BeamFiles.Image im) {
                 SecondMoments s = im.moments();
                 out.println(im.file() + ": camera frame (second moments, ISO 11146-1" + where + ")");
-                out.println("  D4σx " + num(s.d4SigmaXM() * 1e6) + " ± " + num(s.d4SigmaXStdErrorM() * 1e6) + " µm, D4σy "
-                        + num(s.d4SigmaYM() * 1e6) + " ± " + num(s.d4SigmaYStdErrorM() * 1e6) + " µm, ellipticity "
+                out.println("  D4σx " + num(s.d4SigmaXM() * 1e6) + " ± " + err(s.d4SigmaXStdErrorM() * 1e6) + " µm, D4σy "
+                        + num(s.d4SigmaYM() * 1e6) + " ± " + err(s.d4SigmaYStdErrorM() * 1e6) + " µm, ellipticity "
                         + Numbers.sig(s.ellipticity(), 3) + ", angle " + Numbers.sig(s.angleDeg(), 3) + "°"
                         + (s.ellipticity() > SecondMoments.CIRCULAR ? " (round within ISO's 0.87: the angle means little)" : ""));
                 out.println("  1/e² radius  " + pm(s.radius(), 1e6) + " µm (√(wx·wy), wx = D4σx/2 for a Gaussian)");
@@ -245,7 +245,12 @@ final class BeamCommand implements Callable<Integer> {
     }
 
     private static String pm(BeamRadius r, double scale) {
-        return num(r.radiusM() * scale) + " ± " + num(r.stdErrorM() * scale);
+        return num(r.radiusM() * scale) + " ± " + err(r.stdErrorM() * scale);
+    }
+
+    /** A standard error: two significant digits are all it carries. */
+    private static String err(double v) {
+        return Numbers.sig(v, 2);
     }
 
     private static String num(double v) {

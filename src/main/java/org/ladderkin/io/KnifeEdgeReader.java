@@ -105,8 +105,8 @@ public final class KnifeEdgeReader {
                 boolean wrong = xM == last || size >= 2 && Math.signum(xM - last) != Math.signum(last - positions.get(size - 2));
                 if (wrong) {
                     throw new InputException(in.here(from[0] + 1), positionName, InputProblem.BAD_ORDER, String.format(Locale.ROOT,
-                            "blade position %s %s %s %s at line %d (positions must increase or decrease strictly down the file)",
-                            fmt(x), unit.symbol(), xM == last ? "repeats the position" : "turns back from", fmt(last / factor),
+                            "blade position %s %s %s %s %s at line %d (positions must increase or decrease strictly down the file)",
+                            fmt(x), unit.symbol(), xM == last ? "repeats the position" : "turns back from", fmt(last / factor), unit.symbol(),
                             previousLine));
                 }
             }
