@@ -140,12 +140,21 @@ class PlannerWindowTest {
 
     @Test
     void aRecoveryCopyIsOfferedAndRestored() throws Exception {
-        var doc = GuiActionRunner.execute(() -> frame.editor().document());
+        // a copy: the editor's own tree must only change through the editor, on the event thread
+        var doc = GuiActionRunner.execute(() -> frame.editor().document().deepCopy());
         ((com.fasterxml.jackson.databind.node.ObjectNode) doc.get("laser")).put("pumpRadius", "111 µm");
         new RecoveryStore(dir.resolve("recovery")).write(doc, plan, java.time.Instant.now());
         javax.swing.SwingUtilities.invokeLater(frame::offerRecovery);
         press(window.optionPane().requireTitle("Restore unsaved changes").yesButton());
-        window.tabbedPane("forms").selectTab("Laser & geometry");
+        waitFor("the restored plan in the editor", () -> GuiActionRunner.execute(() ->
+                "111 µm".equals(frame.editor().document().at("/laser/pumpRadius").asText())));
+        waitFor("the confirmation dialog to close", () -> !dialogShowing());
+        // selected on the event thread: a robot click on the tab can land while the closing dialog still covers it
+        GuiActionRunner.execute(() -> {
+            javax.swing.JTabbedPane forms = window.tabbedPane("forms").target();
+            forms.setSelectedIndex(forms.indexOfTab("Laser & geometry"));
+        });
+        waitFor("the laser form's pump radius on screen", () -> GuiActionRunner.execute(() -> showing(frame, "laser.pumpRadius")));
         window.textBox("laser.pumpRadius").requireText("111 µm");
         assertThat(GuiActionRunner.execute(() -> frame.editor().isDirty())).isTrue();
     }
@@ -231,6 +240,20 @@ class PlannerWindowTest {
      */
     private static void press(org.assertj.swing.fixture.JButtonFixture button) {
         GuiActionRunner.execute(() -> button.target().doClick());
+    }
+
+    private static boolean showing(java.awt.Component c, String name) {
+        if (name.equals(c.getName()) && c.isShowing()) {
+            return true;
+        }
+        if (c instanceof java.awt.Container k) {
+            for (java.awt.Component x : k.getComponents()) {
+                if (showing(x, name)) {
+                    return true;
+                }
+            }
+        }
+        return false;
     }
 
     private static boolean dialogShowing() {
