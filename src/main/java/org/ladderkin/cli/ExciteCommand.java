@@ -196,7 +196,7 @@ final class ExciteCommand implements Callable<Integer> {
                 x = x.withEnergyJ(targetJ);
             }
         }
-        OccupancyUncertainty.Result u = OccupancyUncertainty.of(x, calibration().orDefaults(), Double.NaN);
+        OccupancyUncertainty.Result u = OccupancyUncertainty.of(x, calibration().orDefaults(), x.crossSection().relativeUncertainty());
         PrintWriter out = spec.commandLine().getOut();
         if (format.equals("json")) {
             ObjectNode root = json(x, targetJ);
@@ -246,14 +246,13 @@ final class ExciteCommand implements Callable<Integer> {
         return node;
     }
 
+    /** ⟨N⟩ ± and its largest contribution; σ's share is its own stated uncertainty unless a flag gives one. */
     private static String uncertaintyLine(Excitation x, OccupancyUncertainty.Result u) {
         RelativeBudget n = u.nAvgProbeWeighted();
-        boolean sigmaCounted = n.items().stream().anyMatch(i -> i.source().startsWith("cross-section"));
         return "         probe-weighted ⟨N⟩ " + SampleReport.num(x.nAvgProbeWeighted(), 3) + " ± "
                 + SampleReport.num(100 * n.totalRel(), 2) + " %"
                 + n.dominant().map(d -> ", largest: " + d.source() + " (" + SampleReport.num(100 * d.rel(), 2) + " %)").orElse("")
-                + "; peak photon fluence ± " + SampleReport.num(100 * u.photonFluencePeak().totalRel(), 2) + " %"
-                + (sigmaCounted ? "" : " (σ's own uncertainty not included: give --cross-section-uncertainty)");
+                + "; peak photon fluence ± " + SampleReport.num(100 * u.photonFluencePeak().totalRel(), 2) + " %";
     }
 
     private Sample sample(double pumpM) {

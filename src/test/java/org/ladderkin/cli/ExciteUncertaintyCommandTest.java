@@ -34,8 +34,9 @@ class ExciteUncertaintyCommandTest {
         MainTest.Run r = MainTest.run(ExciteCommandTest.with(ExciteCommandTest.PBSE, "--cross-section-uncertainty", "25%"));
         assertThat(r.exit()).as(r.err()).isZero();
         assertThat(r.out()).containsPattern("probe-weighted ⟨N⟩ [0-9.]+ ± [0-9.]+ %, largest: cross-section σ \\(25 %\\)");
-        MainTest.Run defaults = MainTest.run(ExciteCommandTest.PBSE);
-        assertThat(defaults.out()).contains("σ's own uncertainty not included");
+        // without the flag σ counts with the uncertainty its law states (PbSe at 400 nm: the high-energy law)
+        MainTest.Run defaults = MainTest.run(ExciteCommandTest.with(ExciteCommandTest.PBSE, "--format", "json"));
+        assertThat(defaults.out()).contains("\"source\" : \"cross-section σ\"");
     }
 
     @Test
