@@ -72,7 +72,8 @@ public final class LadderFit {
         double scaleStart = Double.isNaN(setup.scaleStart())
                 ? kind == Excitation.Kind.MEAN_OCCUPANCY ? 1 : AUTO_TOP_N[0] / top : setup.scaleStart();
         List<ParameterSpec> specs = specs(setup, scaleKey, scaleStart);
-        LadderBleachModel model = LadderBleachModel.forModel(setup.base(), scaleKey, x, setup.periodS(), setup.measuredIrf());
+        LadderBleachModel model = LadderBleachModel.forModel(setup.base(), scaleKey, x, setup.periodS(), setup.measuredIrf(),
+                setup.geometry());
         FitProblem problem = new FitProblem(data, counted(model, progress, FitOptions.defaults().maxEvaluations()), specs,
                 setup.sharedAmplitude() ? LinearTerms.NONE : LinearTerms.AMPLITUDE_AND_BASELINE);
         FitOptions options = FitOptions.defaults().withProgress(progress);

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Set;
+import org.ladderkin.excite.ExcitationGeometry;
 import org.ladderkin.kinetics.process.AugerProcess;
 import org.ladderkin.kinetics.process.LadderModel;
 import org.ladderkin.kinetics.process.ProcessParameter;
@@ -26,12 +27,21 @@ import org.ladderkin.observe.MeasuredIrf;
  * @param profile        add profile-likelihood intervals for τ₂ and the scale
  * @param measuredIrf    a measured instrument response to convolve with instead of a Gaussian (its width is then
  *                       fixed, its centroid at time zero), or null
+ * @param geometry       pump and probe spots and the pump's absorbance through the sample, or null for a pump uniform
+ *                       over the probe in a thin sample; with it, each trace's excitation is its on-axis (peak),
+ *                       front-face value and the model is averaged over the spot and the depth
+ * @param fluenceScaleUncertainty relative standard uncertainty of the excitation calibration (0 for none): a Gaussian
+ *                       prior on a common factor on every trace's excitation, carried into the total errors
  */
 public record LadderFitSetup(LadderModel base, double periodS, Set<LadderParameter> free, double scaleStart,
                              double timeZeroStartS, double irfFwhmS, boolean sharedAmplitude, boolean profile,
-                             MeasuredIrf measuredIrf) {
+                             MeasuredIrf measuredIrf, ExcitationGeometry geometry, double fluenceScaleUncertainty) {
 
     public LadderFitSetup {
+        if (!(fluenceScaleUncertainty >= 0 && fluenceScaleUncertainty < 1)) {
+            throw new IllegalArgumentException("fluence calibration uncertainty must be in [0, 1) (a fraction), was "
+                    + fluenceScaleUncertainty);
+        }
         Objects.requireNonNull(base, "base");
         free = Set.copyOf(free);
         if (!Double.isNaN(scaleStart) && !(scaleStart > 0 && Double.isFinite(scaleStart))) {
@@ -61,6 +71,37 @@ public record LadderFitSetup(LadderModel base, double periodS, Set<LadderParamet
                         + ProcessRegistry.owner(pp).section() + "' process switched on");
             }
         }
+    }
+
+    /** A set-up without beam geometry or calibration uncertainty. */
+    public LadderFitSetup(LadderModel base, double periodS, Set<LadderParameter> free, double scaleStart,
+                          double timeZeroStartS, double irfFwhmS, boolean sharedAmplitude, boolean profile,
+                          MeasuredIrf measuredIrf) {
+        this(base, periodS, free, scaleStart, timeZeroStartS, irfFwhmS, sharedAmplitude, profile, measuredIrf, null, 0);
+    }
+
+    /** A copy averaging the model over {@code newGeometry} (null: uniform pump, thin sample). */
+    public LadderFitSetup withGeometry(ExcitationGeometry newGeometry) {
+        return new LadderFitSetup(base, periodS, free, scaleStart, timeZeroStartS, irfFwhmS, sharedAmplitude, profile,
+                measuredIrf, newGeometry, fluenceScaleUncertainty);
+    }
+
+    /** A copy with a relative calibration uncertainty on the excitation scale. */
+    public LadderFitSetup withFluenceScaleUncertainty(double relative) {
+        return new LadderFitSetup(base, periodS, free, scaleStart, timeZeroStartS, irfFwhmS, sharedAmplitude, profile,
+                measuredIrf, geometry, relative);
+    }
+
+    /**
+     * The parameters freed when the user names none: the scale and τ₂, and time zero as well when some trace has
+     * delays before zero (those points pin it; held at 0 a shifted time zero is absorbed by σ and τ₂).
+     */
+    public static Set<LadderParameter> defaultFree(Dataset data) {
+        Set<LadderParameter> out = new java.util.LinkedHashSet<>(List.of(LadderParameter.SCALE, LadderParameter.TAU_AUGER2));
+        if (data.traces().stream().anyMatch(t -> t.delaysS()[0] < 0)) {
+            out.add(LadderParameter.TIME_ZERO);
+        }
+        return out;
     }
 
     /** A set-up with no measured IRF (a Gaussian of {@code irfFwhmS}, or none when it is NaN). */
