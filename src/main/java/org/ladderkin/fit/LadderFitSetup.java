@@ -92,16 +92,28 @@ public record LadderFitSetup(LadderModel base, double periodS, Set<LadderParamet
                 measuredIrf, geometry, relative);
     }
 
+    /** Start of the Gaussian IRF width freed by {@link #withTimeZeroFreedFor} (s): a typical amplified-laser response. */
+    public static final double DEFAULT_IRF_START_S = 0.2e-12;
+
     /**
-     * The parameters freed when the user names none: the scale and τ₂, and time zero as well when some trace has
-     * delays before zero (those points pin it; held at 0 a shifted time zero is absorbed by σ and τ₂).
+     * The default for data that hold delays before zero: time zero freed (the points before the pulse pin it; held at
+     * 0, a shifted time zero is absorbed by σ and τ₂) and, unless an IRF is given, a Gaussian IRF freed from
+     * {@link #DEFAULT_IRF_START_S}, because without one the model is a step and its misfit jumps from point to point as
+     * time zero moves, which leaves the optimiser stuck. Data that start at or after zero get this set-up unchanged.
      */
-    public static Set<LadderParameter> defaultFree(Dataset data) {
-        Set<LadderParameter> out = new java.util.LinkedHashSet<>(List.of(LadderParameter.SCALE, LadderParameter.TAU_AUGER2));
-        if (data.traces().stream().anyMatch(t -> t.delaysS()[0] < 0)) {
-            out.add(LadderParameter.TIME_ZERO);
+    public LadderFitSetup withTimeZeroFreedFor(Dataset data) {
+        if (data.traces().stream().noneMatch(t -> t.delaysS()[0] < 0)) {
+            return this;
         }
-        return out;
+        Set<LadderParameter> more = new java.util.LinkedHashSet<>(free);
+        more.add(LadderParameter.TIME_ZERO);
+        double irf = irfFwhmS;
+        if (measuredIrf == null && Double.isNaN(irfFwhmS)) {
+            irf = DEFAULT_IRF_START_S;
+            more.add(LadderParameter.IRF);
+        }
+        return new LadderFitSetup(base, periodS, more, scaleStart, timeZeroStartS, irf, sharedAmplitude, profile,
+                measuredIrf, geometry, fluenceScaleUncertainty);
     }
 
     /** A set-up with no measured IRF (a Gaussian of {@code irfFwhmS}, or none when it is NaN). */
