@@ -107,6 +107,11 @@ final class FitCommand implements Callable<Integer> {
             description = "sample absorbance at the pump over the path (average over the depth, as the planner does)")
     String pumpOd;
 
+    @Option(names = "--uniform-pump",
+            description = "take the pump as uniform over the probe in a thin sample (ignore the plan's spots): for "
+                    + "excitations that are already probe-averaged")
+    boolean uniformPump;
+
     @Option(names = "--fluence-uncertainty", paramLabel = "FRACTION",
             description = "relative calibration uncertainty of the excitation (e.g. 8% or 0.08), added to the errors as a prior")
     String fluenceUncertainty;
@@ -210,6 +215,12 @@ final class FitCommand implements Callable<Integer> {
 
     /** The spots and depth from the flags, else from the plan, else none (a pump uniform over the probe, thin sample). */
     private ExcitationGeometry geometry(PlanFitBasis basis) {
+        if (uniformPump) {
+            if (pumpRadius != null || probeRadius != null || pumpOd != null) {
+                throw new IllegalArgumentException("--uniform-pump ignores the spots: give it or --pump-radius/--probe-radius/--pump-od, not both");
+            }
+            return null;
+        }
         if ((pumpRadius == null) != (probeRadius == null)) {
             throw new IllegalArgumentException("give both --pump-radius and --probe-radius (the fit averages over the probe's "
                     + "view of the pump), or neither");
@@ -309,8 +320,9 @@ final class FitCommand implements Callable<Integer> {
                     e.fixed() ? "(fixed)" : "± " + String.format(Locale.ROOT, "%.3g", e.stdError() * t.factor()) + total));
         }
         if (outcome.fluenceScaleUncertainty() > 0) {
-            out.println(String.format(Locale.ROOT, "  total errors include a %.3g%% fluence calibration uncertainty",
-                    100 * outcome.fluenceScaleUncertainty()));
+            out.println(String.format(Locale.ROOT, "  total errors include a %s%% fluence calibration uncertainty",
+                    new java.math.BigDecimal(100 * outcome.fluenceScaleUncertainty()).round(new java.math.MathContext(3))
+                            .stripTrailingZeros().toPlainString()));
         }
         if (outcome.measuredIrf() != null) {
             out.println("  " + FitReport.measuredIrfNote(outcome.measuredIrf()));

@@ -59,9 +59,10 @@ public final class FitReport {
         }
         page.table(List.of("parameter", "value", "statistical error", "total error (with calibration)", "68% profile interval"), rows);
         if (outcome.fluenceScaleUncertainty() > 0) {
-            page.paragraph(String.format(Locale.ROOT, "Total errors add a %.3g%% fluence calibration uncertainty (a common "
+            page.paragraph(String.format(Locale.ROOT, "Total errors add a %s%% fluence calibration uncertainty (a common "
                     + "factor on every trace's excitation, treated as a nuisance parameter with a Gaussian prior).",
-                    100 * outcome.fluenceScaleUncertainty()));
+                    new java.math.BigDecimal(100 * outcome.fluenceScaleUncertainty()).round(new java.math.MathContext(3))
+                            .stripTrailingZeros().toPlainString()));
         }
         String quality = outcome.quality() == null ? String.format(Locale.ROOT, "mean square residual %.4g", r.reducedChiSquare())
                 : outcome.quality().describe();
