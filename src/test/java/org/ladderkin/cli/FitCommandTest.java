@@ -122,7 +122,8 @@ class FitCommandTest {
         Path modCsv = dir.resolve("series-mod.csv");
         Files.write(modCsv, mod);
         MainTest.Run fit = MainTest.run("fit", modCsv.toString(), "--tau-rad", "20ns", "--tau-auger2", "70ps",
-                "--fluences", "1e13,3e13,1e14,3e14", "--fluence-uncertainty", "8%", "--format", "json", "--quiet");
+                "--fluences", "1e13,3e13,1e14,3e14", "--fluence-uncertainty", "8%", "--format", "json", "--quiet",
+                "--out", dir.resolve("out").toString());
         assertThat(fit.exit()).as(fit.err()).isZero();
         JsonNode root = new ObjectMapper().readTree(fit.out());
         JsonNode sigma = root.at("/parameters/crossSectionCm2");
@@ -131,6 +132,11 @@ class FitCommandTest {
         assertThat(root.at("/traces/0/amplitude/value").asDouble()).as("amplitude in OD").isBetween(0.005, 0.02);
         assertThat(root.at("/statistics/reducedChiSquare").asDouble()).isBetween(0.7, 1.4);
         assertThat(root.at("/statistics/noiseFrom").asText()).contains("scatter");
+        // no pre-zero points and free baselines: the photocharging check says it could not look, never an all-clear
+        assertThat(root.get("checks").toString()).contains("photocharging: not tested (");
+        String html = Files.readString(dir.resolve("out/fit-report.html"));
+        assertThat(html).contains("statistical error").contains("total error (with calibration)").contains("photocharging: not tested")
+                .doesNotContain("no photocharging signature");
 
         MainTest.Run text = MainTest.run("fit", modCsv.toString(), "--tau-rad", "20ns", "--tau-auger2", "70ps",
                 "--fluences", "1e13,3e13,1e14,3e14", "--fluence-uncertainty", "0.08", "--pump-radius", "300um",
