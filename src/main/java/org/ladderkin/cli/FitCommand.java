@@ -11,6 +11,8 @@ import java.util.Locale;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicInteger;
+import org.ladderkin.excite.ExcitationGeometry;
+import org.ladderkin.excite.GaussianBeam;
 import org.ladderkin.fit.Dataset;
 import org.ladderkin.fit.FitProgress;
 import org.ladderkin.fit.FitResult;
@@ -88,11 +90,31 @@ final class FitCommand implements Callable<Integer> {
     @Option(names = "--rep-rate", paramLabel = "FREQ", description = "pulse repetition rate (fit in the pulse-train steady state)")
     String repRate;
 
-    @Option(names = "--free", split = ",", paramLabel = "NAME", defaultValue = "scale,tau-auger2",
-            completionCandidates = FitNames.class,
-            description = "shared parameters to fit: ${COMPLETION-CANDIDATES} (default ${DEFAULT-VALUE}); "
-                    + "the others are held at the model's values")
+    @Option(names = "--free", split = ",", paramLabel = "NAME", completionCandidates = FitNames.class,
+            description = "shared parameters to fit: ${COMPLETION-CANDIDATES} (default scale,tau-auger2, and time-zero "
+                    + "with a Gaussian irf when the data hold delays before zero); the others are held at the model's values")
     List<String> free;
+
+    @Option(names = "--pump-radius", paramLabel = "LENGTH",
+            description = "pump 1/e² radius at the sample (Gaussian, e.g. 150um); with --probe-radius the fit averages over "
+                    + "the spots and reads each trace's excitation as its on-axis (peak) value; default: the plan's")
+    String pumpRadius;
+
+    @Option(names = "--probe-radius", paramLabel = "LENGTH", description = "probe 1/e² radius at the sample (Gaussian)")
+    String probeRadius;
+
+    @Option(names = "--pump-od", paramLabel = "OD",
+            description = "sample absorbance at the pump over the path (average over the depth, as the planner does)")
+    String pumpOd;
+
+    @Option(names = "--uniform-pump",
+            description = "take the pump as uniform over the probe in a thin sample (ignore the plan's spots): for "
+                    + "excitations that are already probe-averaged")
+    boolean uniformPump;
+
+    @Option(names = "--fluence-uncertainty", paramLabel = "FRACTION",
+            description = "relative calibration uncertainty of the excitation (e.g. 8% or 0.08), added to the errors as a prior")
+    String fluenceUncertainty;
 
     @Option(names = "--time-zero", paramLabel = "TIME", defaultValue = "0ps", description = "time zero (start when freed)")
     String timeZero;
@@ -140,11 +162,11 @@ final class FitCommand implements Callable<Integer> {
         MeasuredIrf measured = irfFile == null ? null : IrfFileReader.read(irfFile, irfFile.toString());
         Dataset data = metadata(TraceTableReader.readAll(dataFiles, new TableOptions(
                 delayUnit == null ? null : Units.of(delayUnit.trim()), MissingValuePolicy.DROP)));
+        PlanFitBasis basis = planFile == null ? null : PlanFitBasis.of(PlanCodec.read(planFile));
         // with only a plan, the fit starts from the plan's own ladder (the one its predictions use)
-        LadderModel base = modelFile == null && !modelOptions.given() && planFile != null
-                ? PlanFitBasis.of(PlanCodec.read(planFile)).base() : modelOptions.ladder(modelFile);
+        LadderModel base = modelFile == null && !modelOptions.given() && basis != null ? basis.base() : modelOptions.ladder(modelFile);
         Set<LadderParameter> freed = new LinkedHashSet<>();
-        for (String f : free) {
+        for (String f : free == null ? List.of("scale", "tau-auger2") : free) {
             if (!f.isBlank()) {
                 freed.add(LadderParameter.of(f));
             }
@@ -152,7 +174,10 @@ final class FitCommand implements Callable<Integer> {
         LadderFitSetup setup = new LadderFitSetup(base, repRate == null ? Double.NaN : 1 / positive(repRate, Dimension.FREQUENCY, "--rep-rate"),
                 freed, crossSection == null ? Double.NaN : positive(crossSection, Dimension.AREA, "--cross-section"),
                 Quantity.parseSi(timeZero, Dimension.TIME), irf == null ? Double.NaN : positive(irf, Dimension.TIME, "--irf"),
-                sharedAmplitude, profile, measured);
+                sharedAmplitude, profile, measured, geometry(basis), fraction(fluenceUncertainty));
+        if (free == null && !spec.commandLine().getParseResult().hasMatchedOption("--time-zero")) {
+            setup = setup.withTimeZeroFreedFor(data);
+        }
         PrintWriter err = spec.commandLine().getErr();
         if (base.has(CoolingProcess.LIFETIME) && !quiet) {
             // a hot-resolved ladder has hundreds of states at ⟨N⟩ ≈ 5 and every trial of τ₂ rebuilds it
@@ -186,6 +211,56 @@ final class FitCommand implements Callable<Integer> {
             return ExitCodes.BAD_INPUT;
         }
         return ExitCodes.OK;
+    }
+
+    /** The spots and depth from the flags, else from the plan, else none (a pump uniform over the probe, thin sample). */
+    private ExcitationGeometry geometry(PlanFitBasis basis) {
+        if (uniformPump) {
+            if (pumpRadius != null || probeRadius != null || pumpOd != null) {
+                throw new IllegalArgumentException("--uniform-pump ignores the spots: give it or --pump-radius/--probe-radius/--pump-od, not both");
+            }
+            return null;
+        }
+        if ((pumpRadius == null) != (probeRadius == null)) {
+            throw new IllegalArgumentException("give both --pump-radius and --probe-radius (the fit averages over the probe's "
+                    + "view of the pump), or neither");
+        }
+        double od = pumpOd == null ? Double.NaN : Quantity.parseSi(pumpOd.trim().matches("[-+]?[0-9.]+([eE][-+]?[0-9]+)?")
+                ? pumpOd.trim() + " OD" : pumpOd, Dimension.ABSORBANCE);
+        if (pumpOd != null && !(od >= 0 && Double.isFinite(od))) {
+            throw new IllegalArgumentException("--pump-od must be >= 0, was " + pumpOd);
+        }
+        if (pumpRadius != null) {
+            return new ExcitationGeometry(new GaussianBeam(positive(pumpRadius, Dimension.LENGTH, "--pump-radius")),
+                    new GaussianBeam(positive(probeRadius, Dimension.LENGTH, "--probe-radius")), Double.isNaN(od) ? 0 : od,
+                    !Double.isNaN(od));
+        }
+        if (basis != null) {
+            ExcitationGeometry g = basis.geometry();
+            return Double.isNaN(od) ? g : new ExcitationGeometry(g.pump(), g.probe(), od, true);
+        }
+        if (pumpOd != null) {
+            throw new IllegalArgumentException("--pump-od needs the spots: give --pump-radius and --probe-radius (or --plan)");
+        }
+        return null;
+    }
+
+    /** "8%", "0.08" or nothing (0). */
+    private static double fraction(String text) {
+        if (text == null) {
+            return 0;
+        }
+        String t = text.trim();
+        double v;
+        try {
+            v = t.endsWith("%") ? Double.parseDouble(t.substring(0, t.length() - 1).trim()) / 100 : Double.parseDouble(t);
+        } catch (NumberFormatException e) {
+            throw new IllegalArgumentException("--fluence-uncertainty must be a fraction such as 8% or 0.08, was " + text);
+        }
+        if (!(v >= 0 && v < 1)) {
+            throw new IllegalArgumentException("--fluence-uncertainty must be at least 0 and below 100%, was " + text);
+        }
+        return v;
     }
 
     private Dataset metadata(Dataset data) {
@@ -239,15 +314,28 @@ final class FitCommand implements Callable<Integer> {
                 continue;
             }
             ParameterNaming.TradeKey t = ParameterNaming.trade(e.key());
+            String total = outcome.totalStdError(e.key()).stream()
+                    .mapToObj(v -> String.format(Locale.ROOT, " (stat), ± %.3g total", v * t.factor())).findFirst().orElse("");
             out.println(String.format(Locale.ROOT, "  %-16s %-12.5g %s", t.key(), e.value() * t.factor(),
-                    e.fixed() ? "(fixed)" : "± " + String.format(Locale.ROOT, "%.3g", e.stdError() * t.factor())));
+                    e.fixed() ? "(fixed)" : "± " + String.format(Locale.ROOT, "%.3g", e.stdError() * t.factor()) + total));
+        }
+        if (outcome.fluenceScaleUncertainty() > 0) {
+            out.println(String.format(Locale.ROOT, "  total errors include a %s%% fluence calibration uncertainty",
+                    new java.math.BigDecimal(100 * outcome.fluenceScaleUncertainty()).round(new java.math.MathContext(3))
+                            .stripTrailingZeros().toPlainString()));
         }
         if (outcome.measuredIrf() != null) {
             out.println("  " + FitReport.measuredIrfNote(outcome.measuredIrf()));
         }
-        out.println(String.format(Locale.ROOT, "  reduced chi²     %.4g over %d points", r.reducedChiSquare(), r.points()));
+        if (outcome.quality() != null) {
+            out.println(String.format(Locale.ROOT, "  %s, over %d points (statistical errors scaled by the residuals' own "
+                    + "mean square)", outcome.quality().describe(), r.points()));
+        }
         for (String d : outcome.diagnostics()) {
             out.println("! " + d);
+        }
+        for (String c : outcome.checks()) {
+            out.println("  " + c);
         }
         for (String w : r.warnings()) {
             out.println("warning: " + w);

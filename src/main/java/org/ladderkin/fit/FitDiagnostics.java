@@ -149,4 +149,221 @@ final class FitDiagnostics {
         int i = p.indexOf(key);
         return i < 0 ? 0 : p.value(i, 0);
     }
+
+    /** Window after time zero in which a misplaced time zero or a missing IRF leaves its residual (s). */
+    private static final double EARLY_WINDOW_S = 2e-12;
+    /** Excess early/late ratio at zero fluence above which (and 3 standard errors) photocharging is reported. */
+    private static final double MIN_EXCESS = 0.03;
+    /** Standard error of that intercept the data must reach for the test to count. */
+    private static final double MAX_EXCESS_ERROR = 0.03;
+    /** Late window starts this many τ₂ after time zero (trion decay over), early window ends at this fraction of τ₂. */
+    private static final double LATE_TAU2 = 10;
+    private static final double EARLY_TAU2 = 0.25;
+    /** Points before time zero that fix the level before the pulse, and their least distance from it (s). */
+    private static final int MIN_PRE_ZERO = 3;
+    private static final double PRE_ZERO_GAP_S = 0.2e-12;
+    /** Traces up to this probe-averaged ⟨N⟩ enter the zero-fluence extrapolation. */
+    private static final double LOW_N = 1;
+
+    /**
+     * A loud finding when the normalised residuals are not noise: names the runs-test z, the lag-1 autocorrelation and
+     * the reduced χ², where the excess sits (near time zero or later) and what to free.
+     */
+    static java.util.Optional<String> residualStructure(Dataset data, FitResult r, FitQuality q, ParameterValues best,
+                                                        LadderBleachModel model, java.util.Set<LadderFitSetup.LadderParameter> free) {
+        if (!q.structured()) {
+            return java.util.Optional.empty();
+        }
+        double t0 = optional(best, LadderBleachModel.TIME_ZERO);
+        double irf = model.measuredIrf().map(org.ladderkin.observe.MeasuredIrf::fwhmS).orElse(optional(best, LadderBleachModel.IRF_FWHM));
+        double window = Math.max(EARLY_WINDOW_S, 5 * irf);
+        double[] noise = q.noisePerTrace();
+        double early = 0;
+        double total = 0;
+        for (int i = 0; i < data.size(); i++) {
+            Trace t = data.traces().get(i);
+            double[] d = t.delaysS();
+            double[] y = t.signal();
+            double[] res = r.residuals().get(i);
+            int k = 0;
+            for (int m = 0; m < d.length && k < res.length; m++) {
+                if (Double.isNaN(y[m])) {
+                    continue;
+                }
+                double z2 = noise[i] > 0 ? res[k] * res[k] / (noise[i] * noise[i]) : 0;
+                double excess = Math.max(0, z2 - 1);
+                total += excess;
+                if (d[m] - t0 < window) {
+                    early += excess;
+                }
+                k++;
+            }
+        }
+        double share = total > 0 ? early / total : 0;
+        String stats = String.format(Locale.ROOT, "runs-test z = %.1f (noise: above %.0f), lag-1 autocorrelation %.2f "
+                + "(noise: near 0, limit %.1f), reduced χ² %.3g", q.runsZ(), FitQuality.RUNS_Z_LIMIT, q.lag1(),
+                FitQuality.LAG1_LIMIT, q.reducedChiSquare());
+        String cause;
+        if (share >= 0.5) {
+            List<String> toFree = new ArrayList<>();
+            if (!free.contains(LadderFitSetup.LadderParameter.TIME_ZERO)) {
+                toFree.add("time-zero");
+            }
+            if (model.measuredIrf().isEmpty() && !free.contains(LadderFitSetup.LadderParameter.IRF)) {
+                toFree.add("irf (with --irf as its start, e.g. --irf 0.15ps)");
+            }
+            cause = String.format(Locale.ROOT, "%.0f%% of the excess sits within %.3g ps of time zero, so the likely cause is "
+                    + "time zero or the instrument response: %s", 100 * share, window * 1e12, toFree.isEmpty()
+                    ? "both are free already; give a measured IRF (--irf-file) or drop the points before the pulse has ended"
+                    : "free " + String.join(" and ", toFree) + " (add them to --free)");
+        } else {
+            cause = String.format(Locale.ROOT, "%.0f%% of the excess sits later than %.3g ps after time zero, so the ladder "
+                    + "misses a decay: free tau-trap or tau-rad, consider photocharged dots (stir or flow the sample and compare), "
+                    + "or a signal that is not band-edge bleach", 100 * (1 - share), window * 1e12);
+        }
+        return java.util.Optional.of("RESIDUAL STRUCTURE: the residuals are not noise (" + stats + "); " + cause
+                + "; until then the values and errors above are biased");
+    }
+
+    /**
+     * Looks for photocharged dots in the data rather than in the model: in a neutral ladder the fast (Auger) part of the
+     * bleach vanishes as the fluence goes to zero, while dots charged before the pulse add a trion decay whose share of
+     * the early signal does not depend on fluence. For each weak trace the early/late ratio of the data (measured from
+     * the level before time zero) minus that of the fitted curve (which removes the single-exciton decay both share) is
+     * extrapolated linearly to zero excitation; an intercept a of about f/(1 − f) means a fraction f charged (one
+     * exciton's bleach lost to the trion, g = 2).
+     *
+     * @return a finding (first) or a statement of what was tested or why nothing could be (second); one of them is null
+     */
+    static String[] photochargingInData(Dataset data, FitResult r, FitQuality q, ParameterValues best, double[] x,
+                                        double[] n, List<double[]> curves) {
+        int tauIndex = best.indexOf(LadderBleachModel.TAU_AUGER2);
+        if (tauIndex < 0) {
+            return new String[] {null, "photocharging: not tested (the model has no biexciton Auger lifetime to set the "
+                    + "early and late windows by)"};
+        }
+        double tau2 = best.value(tauIndex, 0);
+        double t0 = optional(best, LadderBleachModel.TIME_ZERO);
+        double irf = optional(best, LadderBleachModel.IRF_FWHM);
+        double[] noise = q.noisePerTrace();
+        List<double[]> rows = new ArrayList<>();
+        boolean preZeroMissing = false;
+        double lastDelay = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < data.size(); i++) {
+            Trace t = data.traces().get(i);
+            lastDelay = Math.max(lastDelay, t.delaysS()[t.size() - 1] - t0);
+            if (n[i] > LOW_N) {
+                continue;
+            }
+            double[] d = t.delaysS();
+            double[] y = t.signal();
+            double[] c = curves.get(i);
+            // the level before the pulse, from the points before time zero (a per-trace baseline fitted to the decay
+            // can take up a fluence-independent fast component, so it cannot serve); none needed without baselines
+            boolean baselines = r.find("baseline", i).isPresent();
+            double py = 0;
+            double pc = 0;
+            int np = 0;
+            for (int m = 0; m < d.length; m++) {
+                if (d[m] - t0 < -Math.max(3 * irf, PRE_ZERO_GAP_S) && !Double.isNaN(y[m])) {
+                    py += y[m];
+                    pc += c[m];
+                    np++;
+                }
+            }
+            if (baselines && np < MIN_PRE_ZERO) {
+                preZeroMissing = true;
+                continue;
+            }
+            double b = np == 0 ? 0 : py / np;
+            double bc = np == 0 ? 0 : pc / np;
+            double ey = 0;
+            double ec = 0;
+            int ne = 0;
+            double ly = 0;
+            double lc = 0;
+            int nl = 0;
+            for (int m = 0; m < d.length; m++) {
+                double tau = d[m] - t0;
+                if (Double.isNaN(y[m])) {
+                    continue;
+                }
+                if (tau >= 2 * irf && tau > 0 && tau <= EARLY_TAU2 * tau2) {
+                    ey += y[m] - b;
+                    ec += c[m] - bc;
+                    ne++;
+                } else if (tau >= LATE_TAU2 * tau2) {
+                    ly += y[m] - b;
+                    lc += c[m] - bc;
+                    nl++;
+                }
+            }
+            if (ne < 2 || nl < 2 || lc == 0 || ly == 0) {
+                continue;
+            }
+            double e = ey / ne;
+            double l = ly / nl;
+            double fData = e / l - 1;
+            double fModel = (ec / ne) / (lc / nl) - 1;
+            double var = noise[i] * noise[i] * (1.0 / ne + e * e / (l * l) / nl) / (l * l);
+            if (!(var > 0) || !Double.isFinite(var)) {
+                continue;
+            }
+            rows.add(new double[] {x[i], fData - fModel, var});
+        }
+        if (lastDelay < LATE_TAU2 * tau2) {
+            return new String[] {null, String.format(Locale.ROOT, "photocharging: not tested (the delays end %.3g ps after "
+                    + "time zero, before the trion decay is over at about %.0f τ₂ = %.3g ps; extend the delays to %.3g ps "
+                    + "and include traces at ⟨N⟩ ≤ %.0f)", lastDelay * 1e12, LATE_TAU2, LATE_TAU2 * tau2 * 1e12,
+                    2 * LATE_TAU2 * tau2 * 1e12, LOW_N)};
+        }
+        if (rows.size() < 2 && preZeroMissing) {
+            return new String[] {null, String.format(Locale.ROOT, "photocharging: not tested (the weak traces have fewer "
+                    + "than %d points before time zero, so the level before the pulse is unknown and each trace's fitted "
+                    + "baseline can take up a trion decay; record a few delays before zero, or fit with --shared-amplitude)",
+                    MIN_PRE_ZERO)};
+        }
+        if (rows.size() < 2) {
+            return new String[] {null, String.format(Locale.ROOT, "photocharging: not tested (%d trace%s at ⟨N⟩ ≤ %.0f with "
+                    + "points both before %.2g τ₂ and after %.0f τ₂; the test extrapolates the fast share of the signal to zero "
+                    + "fluence and needs at least two weak traces, e.g. ⟨N⟩ ≈ 0.1 and 0.3)", rows.size(),
+                    rows.size() == 1 ? "" : "s", LOW_N, EARLY_TAU2, LATE_TAU2)};
+        }
+        // weighted straight line D = a + b·x
+        double sw = 0;
+        double sx = 0;
+        double sy = 0;
+        double sxx = 0;
+        double sxy = 0;
+        for (double[] row : rows) {
+            double w = 1 / row[2];
+            sw += w;
+            sx += w * row[0];
+            sy += w * row[1];
+            sxx += w * row[0] * row[0];
+            sxy += w * row[0] * row[1];
+        }
+        double det = sw * sxx - sx * sx;
+        if (!(det > 0)) {
+            return new String[] {null, "photocharging: not tested (the weak traces share one excitation, so nothing can "
+                    + "be extrapolated to zero fluence; add a trace at a different low fluence)"};
+        }
+        double a = (sxx * sy - sx * sxy) / det;
+        double se = Math.sqrt(sxx / det);
+        if (se > MAX_EXCESS_ERROR) {
+            return new String[] {null, String.format(Locale.ROOT, "photocharging: not tested (the zero-fluence fast share is "
+                    + "known only to ±%.2f from %d weak traces; ±%.2f would show 10%% charged dots: average the weakest "
+                    + "traces longer or add more at ⟨N⟩ ≤ %.0f)", se, rows.size(), MAX_EXCESS_ERROR, LOW_N)};
+        }
+        if (a > MIN_EXCESS && a > SIGNIFICANCE * se) {
+            double f = a / (1 + a);
+            return new String[] {String.format(Locale.ROOT, "photocharging: the fast decay of the weakest traces does not "
+                    + "vanish as the fluence goes to zero (excess early/late ratio %.3f ± %.3f at zero fluence, from %d traces "
+                    + "at ⟨N⟩ ≤ %.0f): about %.0f%% of the dots are charged before each pulse and their trion decay is read "
+                    + "as biexcitons, which raises σ and τ₂; stir or flow the sample (or lower the repetition rate) and "
+                    + "compare, or fit with a charging process", a, se, rows.size(), LOW_N, 100 * f), null};
+        }
+        return new String[] {null, String.format(Locale.ROOT, "photocharging: tested, none seen (excess early/late ratio "
+                + "%.3f ± %.3f at zero fluence from %d weak traces; 10%% charged dots would give about 0.11)", a, se, rows.size())};
+    }
 }

@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.function.Function;
 import org.hipparchus.special.Erf;
+import org.ladderkin.excite.ExcitationGeometry;
 import org.ladderkin.kinetics.KineticModel;
 import org.ladderkin.kinetics.LadderKinetics;
 import org.ladderkin.kinetics.process.AugerProcess;
@@ -22,6 +23,11 @@ import org.ladderkin.observe.MeasuredIrf;
  * when a period is given, else after one pulse on fresh dots), ⟨N⟩_i = s·x_i with x_i the trace's recorded excitation
  * (photon fluence, pulse energy or nominal ⟨N⟩) and s the shared scale (σ, ⟨N⟩ per joule, or a factor), and g an
  * optional Gaussian instrument response. Before time zero the signal is the bleach left over from earlier pulses.
+ * <p>
+ * With a beam geometry (pump and probe spots, pump attenuation over the depth) x_i is the on-axis, front-face value
+ * and b is the probe-weighted average of the ladder's bleach over ⟨N⟩(r, z) = s·x_i·shape(r)·10^(−A·z/L), taken as
+ * in {@link org.ladderkin.excite.ExcitationGeometry#average}; the post-pulse populations are averaged over a fixed
+ * quadrature ({@link GeometryQuadrature}) and propagated once, which the ladder's linearity in populations allows.
  * <p>
  * Optional parameters (absent from the problem: A = 1, t₀ = 0, no IRF): {@link #AMPLITUDE}, {@link #TIME_ZERO},
  * {@link #IRF_FWHM}. The kinetic parameters (τ₂, τ₁, trapping, …) are whatever the {@code ladder} function reads; the
@@ -71,6 +77,8 @@ public final class LadderBleachModel implements TraceModel {
     private final double[] excitation;
     private final double periodS;
     private final MeasuredIrf measuredIrf;
+    private final ExcitationGeometry geometry;
+    private final GeometryQuadrature spots;
     /** The measured response's sample times minus its centroid (s), and its density there (1/s). */
     private final double[] irfOffsetsS;
     private final double[] irfDensityPerS;
@@ -102,7 +110,21 @@ public final class LadderBleachModel implements TraceModel {
      */
     public LadderBleachModel(List<String> kineticKeys, Function<ParameterValues, KineticModel> ladder, String scaleKey,
                              double[] excitation, double periodS, MeasuredIrf measuredIrf) {
+        this(kineticKeys, ladder, scaleKey, excitation, periodS, measuredIrf, null);
+    }
+
+    /**
+     * As {@link #LadderBleachModel(List, Function, String, double[], double, MeasuredIrf)}, averaged over the beam
+     * geometry; x_i are then on-axis, front-face values.
+     *
+     * @param geometry pump and probe spots and the pump's absorbance, or null for a pump uniform over the probe in a
+     *                 thin sample
+     */
+    public LadderBleachModel(List<String> kineticKeys, Function<ParameterValues, KineticModel> ladder, String scaleKey,
+                             double[] excitation, double periodS, MeasuredIrf measuredIrf, ExcitationGeometry geometry) {
         this.measuredIrf = measuredIrf;
+        this.geometry = geometry;
+        this.spots = geometry == null ? GeometryQuadrature.uniform() : GeometryQuadrature.of(geometry);
         if (measuredIrf == null) {
             irfOffsetsS = null;
             irfDensityPerS = null;
@@ -148,6 +170,12 @@ public final class LadderBleachModel implements TraceModel {
     /** As {@link #forModel(LadderModel, String, double[], double)}, with a measured response (or null). */
     public static LadderBleachModel forModel(LadderModel base, String scaleKey, double[] excitation, double periodS,
                                              MeasuredIrf measuredIrf) {
+        return forModel(base, scaleKey, excitation, periodS, measuredIrf, null);
+    }
+
+    /** As {@link #forModel(LadderModel, String, double[], double, MeasuredIrf)}, averaged over a beam geometry (or null). */
+    public static LadderBleachModel forModel(LadderModel base, String scaleKey, double[] excitation, double periodS,
+                                             MeasuredIrf measuredIrf, ExcitationGeometry geometry) {
         List<ProcessParameter> fittable = ProcessRegistry.fittable();
         List<String> keys = fittable.stream().map(LadderBleachModel::kineticKey).toList();
         return new LadderBleachModel(keys, p -> {
@@ -162,7 +190,7 @@ public final class LadderBleachModel implements TraceModel {
                 }
             }
             return m.toModel();
-        }, scaleKey, excitation, periodS, measuredIrf);
+        }, scaleKey, excitation, periodS, measuredIrf, geometry);
     }
 
     /** The fit key of a fittable process lifetime, e.g. "tauAuger2S". */
@@ -180,25 +208,64 @@ public final class LadderBleachModel implements TraceModel {
         return excitation.length;
     }
 
-    /** ⟨N⟩ of trace {@code trace} at these parameters. */
+    /** The beam geometry averaged over, if any. */
+    public java.util.Optional<ExcitationGeometry> geometry() {
+        return java.util.Optional.ofNullable(geometry);
+    }
+
+    /** ⟨N⟩ of trace {@code trace} at these parameters, as the probe sees it (averaged over spot and depth). */
     public double meanOccupancy(int trace, ParameterValues p) {
+        return peakOccupancy(trace, p) * spots.linearFactor();
+    }
+
+    /** ⟨N⟩ of trace {@code trace} on the pump axis at the front face (= {@link #meanOccupancy} without a geometry). */
+    public double peakOccupancy(int trace, ParameterValues p) {
         return p.get(scaleKey) * excitation[trace];
+    }
+
+    /** Populations just before and just after a pulse of on-axis ⟨N⟩ {@code nPeak}, averaged over the geometry. */
+    private Populations[] averagedPulse(LadderKinetics k, double nPeak) {
+        if (spots.size() == 1 && spots.factor(0) == 1) {
+            return pulse(k, nPeak);
+        }
+        int size = k.space().size();
+        double[] before = new double[size];
+        double[] after = new double[size];
+        double total = 0;
+        for (int q = 0; q < spots.size(); q++) {
+            Populations[] ba = pulse(k, nPeak * spots.factor(q));
+            double w = spots.weight(q);
+            total += w;
+            double[] pb = ba[0].probabilities();
+            double[] pa = ba[1].probabilities();
+            for (int s = 0; s < size; s++) {
+                before[s] += w * pb[s];
+                after[s] += w * pa[s];
+            }
+        }
+        for (int s = 0; s < size; s++) {
+            before[s] /= total;
+            after[s] /= total;
+        }
+        return new Populations[] {new Populations(k.space(), before), new Populations(k.space(), after)};
+    }
+
+    private Populations[] pulse(LadderKinetics k, double n) {
+        PulseExcitation pulse = new PulseExcitation.Poisson(n);
+        if (Double.isNaN(periodS)) {
+            Populations ground = Populations.ground(k.space());
+            return new Populations[] {ground, k.applyPulse(ground, pulse)};
+        }
+        SteadyState ss = k.steadyState(pulse, periodS, false);
+        return new Populations[] {ss.beforePulse(), ss.afterPulse()};
     }
 
     @Override
     public synchronized double[] predict(int trace, double[] delaysS, ParameterValues p) {
         LadderKinetics k = kinetics(p);
-        PulseExcitation pulse = new PulseExcitation.Poisson(meanOccupancy(trace, p));
-        Populations before;
-        Populations after;
-        if (Double.isNaN(periodS)) {
-            before = Populations.ground(k.space());
-            after = k.applyPulse(before, pulse);
-        } else {
-            SteadyState ss = k.steadyState(pulse, periodS, false);
-            before = ss.beforePulse();
-            after = ss.afterPulse();
-        }
+        Populations[] ba = averagedPulse(k, peakOccupancy(trace, p));
+        Populations before = ba[0];
+        Populations after = ba[1];
         double t0 = optional(p, TIME_ZERO, 0);
         double fwhm = optional(p, IRF_FWHM, 0);
         double bBefore = dot(bleachObservable, before.probabilities());
@@ -225,7 +292,7 @@ public final class LadderBleachModel implements TraceModel {
             return 0;
         }
         LadderKinetics k = kinetics(p);
-        return k.steadyState(new PulseExcitation.Poisson(meanOccupancy(trace, p)), periodS, false).beforePulse().chargedFraction();
+        return averagedPulse(k, peakOccupancy(trace, p))[0].chargedFraction();
     }
 
     private LadderKinetics kinetics(ParameterValues p) {

@@ -34,9 +34,33 @@ public final class LadderFit {
      * @param curves      each trace's fitted curve at its delays (empty when the fit failed)
      * @param diagnostics findings about the sample and set-up, each with what to change
      * @param measuredIrf the measured instrument response the model was convolved with, or null
+     * @param quality     reduced χ² against the data's own noise and the residuals' structure, or null when the fit failed
+     * @param checks      what the diagnostics tested and found clean, or could not test and why
+     * @param fluenceScaleUncertainty relative calibration uncertainty of the excitation carried into {@code totalStdErrors}
+     * @param totalStdErrors shared parameter key → statistical and calibration error combined (SI); empty without a
+     *                    calibration uncertainty
      */
     public record Outcome(FitResult result, Excitation.Kind kind, String scaleKey, double[] excitation, double[] meanN,
-                          List<double[]> curves, List<String> diagnostics, MeasuredIrf measuredIrf) {
+                          List<double[]> curves, List<String> diagnostics, MeasuredIrf measuredIrf, FitQuality quality,
+                          List<String> checks, double fluenceScaleUncertainty, Map<String, Double> totalStdErrors) {
+
+        public Outcome {
+            diagnostics = List.copyOf(diagnostics);
+            checks = List.copyOf(checks);
+            totalStdErrors = Map.copyOf(totalStdErrors);
+        }
+
+        /** An outcome without quality, checks or calibration (tests, previews). */
+        public Outcome(FitResult result, Excitation.Kind kind, String scaleKey, double[] excitation, double[] meanN,
+                       List<double[]> curves, List<String> diagnostics, MeasuredIrf measuredIrf) {
+            this(result, kind, scaleKey, excitation, meanN, curves, diagnostics, measuredIrf, null, List.of(), 0, Map.of());
+        }
+
+        /** The total (statistical and calibration) error of shared parameter {@code key}, when a calibration was given. */
+        public java.util.OptionalDouble totalStdError(String key) {
+            Double v = totalStdErrors.get(key);
+            return v == null ? java.util.OptionalDouble.empty() : java.util.OptionalDouble.of(v);
+        }
 
         /** An outcome without a measured IRF. */
         public Outcome(FitResult result, Excitation.Kind kind, String scaleKey, double[] excitation, double[] meanN,
@@ -72,7 +96,8 @@ public final class LadderFit {
         double scaleStart = Double.isNaN(setup.scaleStart())
                 ? kind == Excitation.Kind.MEAN_OCCUPANCY ? 1 : AUTO_TOP_N[0] / top : setup.scaleStart();
         List<ParameterSpec> specs = specs(setup, scaleKey, scaleStart);
-        LadderBleachModel model = LadderBleachModel.forModel(setup.base(), scaleKey, x, setup.periodS(), setup.measuredIrf());
+        LadderBleachModel model = LadderBleachModel.forModel(setup.base(), scaleKey, x, setup.periodS(), setup.measuredIrf(),
+                setup.geometry());
         FitProblem problem = new FitProblem(data, counted(model, progress, FitOptions.defaults().maxEvaluations()), specs,
                 setup.sharedAmplitude() ? LinearTerms.NONE : LinearTerms.AMPLITUDE_AND_BASELINE);
         FitOptions options = FitOptions.defaults().withProgress(progress);
@@ -110,9 +135,68 @@ public final class LadderFit {
             }
             curves.add(shape);
         }
-        List<String> diagnostics = FitDiagnostics.find(data, model, best, r, n,
-                Double.isNaN(setup.scaleStart()) || !setup.free().contains(LadderParameter.SCALE) ? Double.NaN : setup.scaleStart(), scaleKey);
-        return new Outcome(r, kind, scaleKey, x, n, curves, diagnostics, setup.measuredIrf());
+        List<String> diagnostics = new ArrayList<>();
+        FitQuality quality = FitQuality.of(data, r);
+        FitDiagnostics.residualStructure(data, r, quality, best, model, setup.free()).ifPresent(diagnostics::add);
+        diagnostics.addAll(FitDiagnostics.find(data, model, best, r, n,
+                Double.isNaN(setup.scaleStart()) || !setup.free().contains(LadderParameter.SCALE) ? Double.NaN : setup.scaleStart(), scaleKey));
+        List<String> checks = new ArrayList<>();
+        String[] charging = FitDiagnostics.photochargingInData(data, r, quality, best, x, n, curves);
+        if (charging[0] != null && diagnostics.stream().noneMatch(d -> d.startsWith("photocharging"))) {
+            diagnostics.add(charging[0]);
+        } else if (charging[1] != null) {
+            checks.add(charging[1]);
+        }
+        Map<String, Double> total = calibrated(r, problem, options, specs, scaleKey, setup.fluenceScaleUncertainty());
+        return new Outcome(r, kind, scaleKey, x, n, curves, diagnostics, setup.measuredIrf(), quality, checks,
+                setup.fluenceScaleUncertainty(), total);
+    }
+
+    /**
+     * Statistical and calibration errors combined. The excitation enters only as ⟨N⟩ = s·(c·x) with c the calibration
+     * factor (prior 1 ± {@code relative}), so c and s are exactly degenerate. Treating c as a nuisance parameter with a
+     * Gaussian prior: with s free the data fix only s·c, every other parameter is unchanged and s's variance gains
+     * (relative·s)²; with s held, c is the only way the excitation can move, and each parameter θ gains
+     * (relative·∂θ̂/∂ln c)², the derivative taken by refitting with the held scale moved by ±relative (the delta method
+     * with a central difference).
+     */
+    private static Map<String, Double> calibrated(FitResult r, FitProblem problem, FitOptions options, List<ParameterSpec> specs,
+                                                  String scaleKey, double relative) {
+        if (!(relative > 0) || r.status() != FitResult.Status.CONVERGED) {
+            return Map.of();
+        }
+        Map<String, Double> total = new LinkedHashMap<>();
+        ParameterEstimate scale = r.estimate(scaleKey);
+        if (!scale.fixed()) {
+            for (ParameterEstimate e : r.estimates()) {
+                if (e.shared() && !e.fixed()) {
+                    double add = e.key().equals(scaleKey) ? relative * e.value() : 0;
+                    total.put(e.key(), Math.hypot(e.stdError(), add));
+                }
+            }
+            return total;
+        }
+        FitResult[] moved = new FitResult[2];
+        for (int side = 0; side < 2; side++) {
+            double factor = side == 0 ? 1 + relative : 1 - relative;
+            FitProblem p = problem;
+            for (ParameterSpec spec : specs) {
+                ParameterEstimate e = r.estimate(spec.key());
+                p = p.with(spec.key().equals(scaleKey) ? spec.fixedAt(e.value() * factor)
+                        : spec.fixed() ? spec : spec.startingAt(e.value()));
+            }
+            moved[side] = GlobalFitter.fit(p, options.withStarts(List.of()).withProfile(List.of()));
+            if (!moved[side].ok()) {
+                return Map.of();
+            }
+        }
+        for (ParameterEstimate e : r.estimates()) {
+            if (e.shared() && !e.fixed()) {
+                double slope = (moved[0].estimate(e.key()).value() - moved[1].estimate(e.key()).value()) / 2;
+                total.put(e.key(), Math.hypot(e.stdError(), slope));
+            }
+        }
+        return total;
     }
 
     /**

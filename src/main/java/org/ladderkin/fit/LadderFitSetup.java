@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Set;
+import org.ladderkin.excite.ExcitationGeometry;
 import org.ladderkin.kinetics.process.AugerProcess;
 import org.ladderkin.kinetics.process.LadderModel;
 import org.ladderkin.kinetics.process.ProcessParameter;
@@ -26,12 +27,21 @@ import org.ladderkin.observe.MeasuredIrf;
  * @param profile        add profile-likelihood intervals for τ₂ and the scale
  * @param measuredIrf    a measured instrument response to convolve with instead of a Gaussian (its width is then
  *                       fixed, its centroid at time zero), or null
+ * @param geometry       pump and probe spots and the pump's absorbance through the sample, or null for a pump uniform
+ *                       over the probe in a thin sample; with it, each trace's excitation is its on-axis (peak),
+ *                       front-face value and the model is averaged over the spot and the depth
+ * @param fluenceScaleUncertainty relative standard uncertainty of the excitation calibration (0 for none): a Gaussian
+ *                       prior on a common factor on every trace's excitation, carried into the total errors
  */
 public record LadderFitSetup(LadderModel base, double periodS, Set<LadderParameter> free, double scaleStart,
                              double timeZeroStartS, double irfFwhmS, boolean sharedAmplitude, boolean profile,
-                             MeasuredIrf measuredIrf) {
+                             MeasuredIrf measuredIrf, ExcitationGeometry geometry, double fluenceScaleUncertainty) {
 
     public LadderFitSetup {
+        if (!(fluenceScaleUncertainty >= 0 && fluenceScaleUncertainty < 1)) {
+            throw new IllegalArgumentException("fluence calibration uncertainty must be in [0, 1) (a fraction), was "
+                    + fluenceScaleUncertainty);
+        }
         Objects.requireNonNull(base, "base");
         free = Set.copyOf(free);
         if (!Double.isNaN(scaleStart) && !(scaleStart > 0 && Double.isFinite(scaleStart))) {
@@ -61,6 +71,49 @@ public record LadderFitSetup(LadderModel base, double periodS, Set<LadderParamet
                         + ProcessRegistry.owner(pp).section() + "' process switched on");
             }
         }
+    }
+
+    /** A set-up without beam geometry or calibration uncertainty. */
+    public LadderFitSetup(LadderModel base, double periodS, Set<LadderParameter> free, double scaleStart,
+                          double timeZeroStartS, double irfFwhmS, boolean sharedAmplitude, boolean profile,
+                          MeasuredIrf measuredIrf) {
+        this(base, periodS, free, scaleStart, timeZeroStartS, irfFwhmS, sharedAmplitude, profile, measuredIrf, null, 0);
+    }
+
+    /** A copy averaging the model over {@code newGeometry} (null: uniform pump, thin sample). */
+    public LadderFitSetup withGeometry(ExcitationGeometry newGeometry) {
+        return new LadderFitSetup(base, periodS, free, scaleStart, timeZeroStartS, irfFwhmS, sharedAmplitude, profile,
+                measuredIrf, newGeometry, fluenceScaleUncertainty);
+    }
+
+    /** A copy with a relative calibration uncertainty on the excitation scale. */
+    public LadderFitSetup withFluenceScaleUncertainty(double relative) {
+        return new LadderFitSetup(base, periodS, free, scaleStart, timeZeroStartS, irfFwhmS, sharedAmplitude, profile,
+                measuredIrf, geometry, relative);
+    }
+
+    /** Start of the Gaussian IRF width freed by {@link #withTimeZeroFreedFor} (s): a typical amplified-laser response. */
+    public static final double DEFAULT_IRF_START_S = 0.2e-12;
+
+    /**
+     * The default for data that hold delays before zero: time zero freed (the points before the pulse pin it; held at
+     * 0, a shifted time zero is absorbed by σ and τ₂) and, unless an IRF is given, a Gaussian IRF freed from
+     * {@link #DEFAULT_IRF_START_S}, because without one the model is a step and its misfit jumps from point to point as
+     * time zero moves, which leaves the optimiser stuck. Data that start at or after zero get this set-up unchanged.
+     */
+    public LadderFitSetup withTimeZeroFreedFor(Dataset data) {
+        if (data.traces().stream().noneMatch(t -> t.delaysS()[0] < 0)) {
+            return this;
+        }
+        Set<LadderParameter> more = new java.util.LinkedHashSet<>(free);
+        more.add(LadderParameter.TIME_ZERO);
+        double irf = irfFwhmS;
+        if (measuredIrf == null && Double.isNaN(irfFwhmS)) {
+            irf = DEFAULT_IRF_START_S;
+            more.add(LadderParameter.IRF);
+        }
+        return new LadderFitSetup(base, periodS, more, scaleStart, timeZeroStartS, irf, sharedAmplitude, profile,
+                measuredIrf, geometry, fluenceScaleUncertainty);
     }
 
     /** A set-up with no measured IRF (a Gaussian of {@code irfFwhmS}, or none when it is NaN). */

@@ -14,8 +14,9 @@ import org.ladderkin.fit.ProfileInterval;
 /**
  * The result of a ladder fit as JSON (schema {@code ladderkin.fit-result/1}): every shared parameter keyed by name
  * with its trade unit ({@link ParameterNaming}: {@code tauAuger2Ps}, {@code crossSectionCm2}, {@code tauRadNs}) holding {@code value},
- * {@code stdError} (null when unavailable) and {@code fixed}; per-trace ⟨N⟩, amplitude and baseline; fit statistics,
- * correlations, diagnostics and warnings.
+ * {@code stdError} (statistical, null when unavailable), {@code totalStdError} (with the fluence calibration, when one
+ * was given) and {@code fixed}; per-trace ⟨N⟩ (probe-averaged), amplitude and baseline; fit statistics (the reduced χ²
+ * against the data's own noise, with its basis), correlations, diagnostics, checks and warnings.
  */
 public final class FitResultJson {
 
@@ -54,6 +55,7 @@ public final class FitResultJson {
             ObjectNode p = params.putObject(t.key());
             p.put("value", e.value() * t.factor());
             putNumber(p, "stdError", e.stdError() * t.factor());
+            outcome.totalStdError(e.key()).ifPresent(v -> putNumber(p, "totalStdError", v * t.factor()));
             p.put("fixed", e.fixed());
             r.profile(e.key()).ifPresent(pi -> addProfile(p, pi, t.factor()));
         }
@@ -63,6 +65,9 @@ public final class FitResultJson {
             t.put("label", data.traces().get(i).label());
             if (outcome.meanN().length > i) {
                 t.put("nAvg", outcome.meanN()[i]);
+            }
+            if (outcome.quality() != null) {
+                putNumber(t, "noise", outcome.quality().noisePerTrace()[i]);
             }
             int trace = i;
             r.find("amplitude", i).ifPresent(e -> estimate(t.putObject("amplitude"), e));
@@ -74,9 +79,22 @@ public final class FitResultJson {
                 }
             }
         }
+        if (outcome.fluenceScaleUncertainty() > 0) {
+            root.put("fluenceScaleUncertainty", outcome.fluenceScaleUncertainty());
+        }
         ObjectNode stats = root.putObject("statistics");
+        // the fitter's own χ² weighs points by their given uncertainties, or by 1 (then it is a sum of squares in the
+        // file's units); the reduced χ² written is against the data's noise, so that 1 means a fit within the noise
         putNumber(stats, "chiSquare", r.chiSquare());
-        putNumber(stats, "reducedChiSquare", r.reducedChiSquare());
+        if (outcome.quality() != null) {
+            putNumber(stats, "reducedChiSquare", outcome.quality().reducedChiSquare());
+            stats.put("noiseFrom", outcome.quality().noiseBasis());
+            putNumber(stats, "residualRunsZ", outcome.quality().runsZ());
+            putNumber(stats, "residualLag1Autocorrelation", outcome.quality().lag1());
+            putNumber(stats, "meanSquareResidualScale", r.reducedChiSquare());
+        } else {
+            putNumber(stats, "reducedChiSquare", r.reducedChiSquare());
+        }
         stats.put("points", r.points());
         stats.put("freeParameters", r.freeParameters());
         putNumber(stats, "aic", r.aic());
@@ -96,6 +114,7 @@ public final class FitResultJson {
             }
         }
         strings(root.putArray("diagnostics"), outcome.diagnostics());
+        strings(root.putArray("checks"), outcome.checks());
         strings(root.putArray("warnings"), r.warnings());
         if (planComparison != null) {
             root.set("planComparison", planComparison);

@@ -85,6 +85,42 @@ final class HeaderUnit {
         return m.matches() && !m.group(1).isBlank() ? m.group(1).strip() : header.strip();
     }
 
+    /** Absorbance-change units a signal header may carry, with their factor to OD. */
+    private static final java.util.Map<String, Double> SIGNAL_UNITS = java.util.Map.of("OD", 1.0, "mOD", 1e-3,
+            "\u00b5OD", 1e-6, "\u03bcOD", 1e-6, "uOD", 1e-6);
+    private static final Pattern SIGNAL_SUFFIX = Pattern.compile("^(.*?)[\\s/_]+([^\\s/_()\\[\\]]+)\\s*$");
+
+    /**
+     * The factor from a signal column's unit to OD when its header names one ({@code ΔA [mOD]}, {@code 1 nJ (µOD)},
+     * {@code J1 mOD}, {@code dA/mOD}), or NaN when it names none (the values are then taken as they are). Units are
+     * matched as written: "mOD" is milli-OD, "MOD" is not a unit.
+     */
+    static double signalToOd(String header) {
+        String u = signalUnit(header);
+        return u == null ? Double.NaN : SIGNAL_UNITS.get(u);
+    }
+
+    /** The signal header without its unit ("1 nJ" from "1 nJ [mOD]"), or the header when it names none. */
+    static String signalName(String header) {
+        String h = header.strip();
+        if (signalUnit(h) == null) {
+            return h;
+        }
+        Matcher m = BRACKETED.matcher(h);
+        String name = m.matches() ? m.group(1) : SIGNAL_SUFFIX.matcher(h).replaceAll("$1");
+        return name.isBlank() ? h : name.strip();
+    }
+
+    private static String signalUnit(String header) {
+        String h = header.strip();
+        Matcher m = BRACKETED.matcher(h);
+        if (m.matches()) {
+            return SIGNAL_UNITS.containsKey(m.group(2)) ? m.group(2) : null;
+        }
+        Matcher s = SIGNAL_SUFFIX.matcher(h);
+        return s.matches() && SIGNAL_UNITS.containsKey(s.group(2)) ? s.group(2) : null;
+    }
+
     private static String exampleName(Dimension dimension) {
         return dimension == Dimension.TIME ? "delay" : dimension == Dimension.LENGTH ? "wavelength" : "value";
     }

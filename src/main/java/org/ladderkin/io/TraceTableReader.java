@@ -176,12 +176,27 @@ public final class TraceTableReader {
                     + " data row" + (delays.size() == 1 ? "" : "s") + " (a trace needs at least " + TraceAssembler.MIN_POINTS + " delays)");
         }
         List<Trace> traces = new ArrayList<>();
+        // a column whose header names mOD or µOD is read in OD (an uncertainty column shares its signal's unit)
         for (int c : signalColumns) {
             String h = names[c].strip();
-            traces.add(TraceAssembler.assemble(new SourceLocation(in.file(), headerLine, starts[c]), h, h, delays, columns[c],
-                    sigmaOf[c] < 0 ? null : columns[sigmaOf[c]]));
+            double toOd = HeaderUnit.signalToOd(h);
+            GrowableDoubles signal = scaled(columns[c], toOd);
+            GrowableDoubles sigma = sigmaOf[c] < 0 ? null : scaled(columns[sigmaOf[c]], toOd);
+            traces.add(TraceAssembler.assemble(new SourceLocation(in.file(), headerLine, starts[c]), h, HeaderUnit.signalName(h),
+                    delays, signal, sigma));
         }
         return traces;
+    }
+
+    private static GrowableDoubles scaled(GrowableDoubles values, double factor) {
+        if (Double.isNaN(factor) || factor == 1) {
+            return values;
+        }
+        GrowableDoubles out = new GrowableDoubles();
+        for (int i = 0; i < values.size(); i++) {
+            out.add(values.get(i) * factor);
+        }
+        return out;
     }
 
     /** The header text without surrounding spaces and double quotes (spreadsheets quote headers). */

@@ -4,6 +4,9 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Set;
+import org.ladderkin.excite.ExcitationGeometry;
+import org.ladderkin.excite.GaussianBeam;
+import org.ladderkin.excite.Pulse;
 import org.ladderkin.kinetics.process.AugerProcess;
 import org.ladderkin.kinetics.process.ChargingProcess;
 import org.ladderkin.kinetics.process.LadderModel;
@@ -28,12 +31,15 @@ import org.ladderkin.kinetics.state.Charge;
  * @param pumpWavelengthM     the plan's chosen pump wavelength (m)
  * @param crossSectionM2      σ at that wavelength (m²)
  * @param occupancyPerJ       probe-averaged ⟨N⟩ per joule of pulse energy at that wavelength and rate
+ * @param geometry            the plan's pump and probe spots (Gaussian) and the sample's absorbance at the chosen pump
+ *                            wavelength, depth-averaged as the planner averages
  */
 public record PlanFitBasis(LadderModel base, ModelAssumptions model, double repetitionRateHz, double pumpWavelengthM,
-                           double crossSectionM2, double occupancyPerJ) {
+                           double crossSectionM2, double occupancyPerJ, ExcitationGeometry geometry) {
 
     public PlanFitBasis {
         Objects.requireNonNull(base, "base");
+        Objects.requireNonNull(geometry, "geometry");
         Objects.requireNonNull(model, "model");
         if (!(repetitionRateHz > 0) || !(pumpWavelengthM > 0) || !(crossSectionM2 > 0) || !(occupancyPerJ > 0)) {
             throw new IllegalArgumentException("plan basis needs positive rate, wavelength, σ and ⟨N⟩ per J, were "
@@ -46,9 +52,12 @@ public record PlanFitBasis(LadderModel base, ModelAssumptions model, double repe
         CampaignPlan plan = Planner.plan(inputs, Planner.Progress.NONE, false);
         int g = (int) Math.round(inputs.sample().material().electronDegeneracy().value());
         FluencePoint top = plan.fluences().get(plan.fluences().size() - 1);
+        double wavelengthM = plan.chosenWavelength().wavelengthM();
+        ExcitationGeometry geometry = org.ladderkin.excite.Excitation.of(inputs.sample(), new Pulse(top.pulseEnergyJ(),
+                wavelengthM, plan.chosenRate().repetitionRateHz()), new GaussianBeam(inputs.laser().pumpRadiusM()),
+                new GaussianBeam(inputs.laser().probeRadiusM()), true).geometry();
         return new PlanFitBasis(parameters(plan.model(), g), plan.model(), plan.chosenRate().repetitionRateHz(),
-                plan.chosenWavelength().wavelengthM(), plan.chosenWavelength().crossSectionM2(),
-                top.nProbeAveraged() / top.pulseEnergyJ());
+                wavelengthM, plan.chosenWavelength().crossSectionM2(), top.nProbeAveraged() / top.pulseEnergyJ(), geometry);
     }
 
     /** Pulse period at the chosen rate (s). */

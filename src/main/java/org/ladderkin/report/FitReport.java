@@ -39,8 +39,11 @@ public final class FitReport {
             return page.render();
         }
         page.heading(2, "Diagnostics");
-        page.bullets(outcome.diagnostics().isEmpty() ? List.of("no photocharging signature and no unusual saturation found")
-                : outcome.diagnostics());
+        // a check that could not run is said to be not tested; nothing here claims an all-clear no test could give
+        List<String> findings = new ArrayList<>(outcome.diagnostics());
+        findings.addAll(outcome.checks());
+        page.bullets(findings.isEmpty() ? List.of("no finding from the checks that ran (saturation curve, excitation scale)")
+                : findings);
         page.heading(2, "Shared parameters");
         List<List<String>> rows = new ArrayList<>();
         for (ParameterEstimate e : r.estimates()) {
@@ -50,11 +53,22 @@ public final class FitReport {
             ParameterNaming.TradeKey t = ParameterNaming.trade(e.key());
             String profile = r.profile(e.key()).map(p -> num(p.lower() * t.factor()) + (p.lowerOpen() ? " (open)" : "") + " … "
                     + num(p.upper() * t.factor()) + (p.upperOpen() ? " (open)" : "")).orElse("");
-            rows.add(List.of(t.key(), num(e.value() * t.factor()), e.fixed() ? "fixed" : num(e.stdError() * t.factor()), profile));
+            String total = e.fixed() ? "" : outcome.totalStdError(e.key()).stream().mapToObj(v -> num(v * t.factor()))
+                    .findFirst().orElse("—");
+            rows.add(List.of(t.key(), num(e.value() * t.factor()), e.fixed() ? "fixed" : num(e.stdError() * t.factor()), total, profile));
         }
-        page.table(List.of("parameter", "value", "standard error", "68% profile interval"), rows);
-        page.paragraph(String.format(Locale.ROOT, "χ²/dof = %.4g over %d points, %d free parameters; AIC %.6g, BIC %.6g. "
-                + "Standard errors are scaled by the reduced χ².", r.reducedChiSquare(), r.points(), r.freeParameters(), r.aic(), r.bic()));
+        page.table(List.of("parameter", "value", "statistical error", "total error (with calibration)", "68% profile interval"), rows);
+        if (outcome.fluenceScaleUncertainty() > 0) {
+            page.paragraph(String.format(Locale.ROOT, "Total errors add a %s%% fluence calibration uncertainty (a common "
+                    + "factor on every trace's excitation, treated as a nuisance parameter with a Gaussian prior).",
+                    new java.math.BigDecimal(100 * outcome.fluenceScaleUncertainty()).round(new java.math.MathContext(3))
+                            .stripTrailingZeros().toPlainString()));
+        }
+        String quality = outcome.quality() == null ? String.format(Locale.ROOT, "mean square residual %.4g", r.reducedChiSquare())
+                : outcome.quality().describe();
+        page.paragraph(String.format(Locale.ROOT, "%s; %d points, %d free parameters; AIC %.6g, BIC %.6g. "
+                + "Statistical errors are scaled by the residuals' own mean square (as if the reduced χ² were 1).",
+                quality, r.points(), r.freeParameters(), r.aic(), r.bic()));
         page.heading(2, "Traces");
         List<List<String>> traceRows = new ArrayList<>();
         for (int i = 0; i < data.size(); i++) {

@@ -71,7 +71,7 @@ class FitCommandTest {
         Path out = dir.resolve("out");
         MainTest.Run fit = MainTest.run("fit", csv.toString(), "--tau-rad", "20ns", "--tau-auger2", "60ps",
                 "--fluences", "1e13,3e13,1e14,3e14", "--profile", "--free", "scale,tau-auger2,time-zero", "--irf", "0.3ps",
-                "--plan", MainTest.HOME.resolve("experiments-plan/cdse-auger-1khz.plan.json").toString(),
+                "--uniform-pump", "--plan", MainTest.HOME.resolve("experiments-plan/cdse-auger-1khz.plan.json").toString(),
                 "--out", out.toString(), "--format", "json", "--quiet");
         assertThat(fit.exit()).as(fit.err()).isZero();
         JsonNode root = new ObjectMapper().readTree(fit.out());
@@ -103,6 +103,51 @@ class FitCommandTest {
         assertThat(Math.abs(tau.get("value").asDouble() - truth)).isLessThan(4 * tau.get("stdError").asDouble());
         assertThat(root.at("/planComparison/tauAuger2PsPlanned").asDouble())
                 .isCloseTo(basis.model().tauBiexcitonS() * 1e12, org.assertj.core.data.Percentage.withPercentage(1e-6));
+    }
+
+    @Test
+    void calibrationGivesTotalErrorsAndMilliOdHeadersAreReadInOd(@TempDir Path dir) throws Exception {
+        Path csv = simulatedSeries(dir, 11);
+        List<String> lines = Files.readAllLines(csv);
+        List<String> mod = new ArrayList<>();
+        mod.add("delay (ps),a [mOD],b [mOD],c [mOD],d [mOD]");
+        for (String line : lines.subList(1, lines.size())) {
+            String[] f = line.split(",");
+            StringBuilder row = new StringBuilder(f[0]);
+            for (int c = 1; c < f.length; c++) {
+                row.append(',').append(1000 * Double.parseDouble(f[c]));
+            }
+            mod.add(row.toString());
+        }
+        Path modCsv = dir.resolve("series-mod.csv");
+        Files.write(modCsv, mod);
+        MainTest.Run fit = MainTest.run("fit", modCsv.toString(), "--tau-rad", "20ns", "--tau-auger2", "70ps",
+                "--fluences", "1e13,3e13,1e14,3e14", "--fluence-uncertainty", "8%", "--format", "json", "--quiet",
+                "--out", dir.resolve("out").toString());
+        assertThat(fit.exit()).as(fit.err()).isZero();
+        JsonNode root = new ObjectMapper().readTree(fit.out());
+        JsonNode sigma = root.at("/parameters/crossSectionCm2");
+        assertThat(sigma.get("totalStdError").asDouble()).isCloseTo(Math.hypot(sigma.get("stdError").asDouble(),
+                0.08 * sigma.get("value").asDouble()), org.assertj.core.data.Percentage.withPercentage(1e-6));
+        assertThat(root.at("/traces/0/amplitude/value").asDouble()).as("amplitude in OD").isBetween(0.005, 0.02);
+        assertThat(root.at("/statistics/reducedChiSquare").asDouble()).isBetween(0.7, 1.4);
+        assertThat(root.at("/statistics/noiseFrom").asText()).contains("scatter");
+        // no pre-zero points and free baselines: the photocharging check says it could not look, never an all-clear
+        assertThat(root.get("checks").toString()).contains("photocharging: not tested (");
+        String html = Files.readString(dir.resolve("out/fit-report.html"));
+        assertThat(html).contains("statistical error").contains("total error (with calibration)").contains("photocharging: not tested")
+                .doesNotContain("no photocharging signature");
+
+        MainTest.Run text = MainTest.run("fit", modCsv.toString(), "--tau-rad", "20ns", "--tau-auger2", "70ps",
+                "--fluences", "1e13,3e13,1e14,3e14", "--fluence-uncertainty", "0.08", "--pump-radius", "300um",
+                "--probe-radius", "100um", "--quiet");
+        assertThat(text.exit()).as(text.err()).isZero();
+        assertThat(text.out()).contains("(stat), ±").contains("total").contains("8% fluence calibration")
+                .contains("reduced χ²").contains("photocharging: not tested (");
+        MainTest.Run half = MainTest.run("fit", modCsv.toString(), "--tau-rad", "20ns", "--tau-auger2", "70ps",
+                "--fluences", "1e13,3e13,1e14,3e14", "--pump-radius", "300um", "--quiet");
+        assertThat(half.exit()).isNotZero();
+        assertThat(half.err()).contains("--probe-radius");
     }
 
     @Test

@@ -48,6 +48,19 @@ class TraceTableReaderTest {
     }
 
     @Test
+    void signalHeadersInMilliAndMicroOdAreReadInOd() throws IOException {
+        Dataset d = read("delay (ps),1 nJ [mOD],1 nJ [mOD] err,2 nJ (µOD),J3 mOD,J4\n0,149.6,2,300,1.5,0.2\n10,100,2,200,1,0.1\n"
+                + "100,50,2,100,0.5,0.05\n");
+        assertThat(d.labels()).containsExactly("1 nJ", "2 nJ", "J3", "J4");
+        assertThat(d.traces().get(0).signal()[0]).isCloseTo(0.1496, within(1e-12));
+        assertThat(d.traces().get(0).sigma()[0]).isCloseTo(0.002, within(1e-12));
+        assertThat(d.traces().get(1).signal()[0]).isCloseTo(3e-4, within(1e-15));
+        assertThat(d.traces().get(2).signal()[0]).isCloseTo(1.5e-3, within(1e-15));
+        // no unit: the values stay as written
+        assertThat(d.traces().get(3).signal()[0]).isEqualTo(0.2);
+    }
+
+    @Test
     void acceptsBomCommentsBlankLinesAndSemicolonWithDecimalComma() throws IOException {
         Dataset d = read("\uFEFF# exported 2026-11-30\n% second comment\n\ndelay [ns];a;b\n0;1,5;2\n\n1;1,0;1\n# mid comment\n2;0,5;0,1\n");
         assertThat(d.traces().get(0).delaysS()).containsExactly(0, 1e-9, 2e-9);
