@@ -168,8 +168,9 @@ public final class DesignSearch {
      * @param naive     the log-spaced reference (8 values from 0.05 to 3 on the default grid)
      * @param goals     parameters the objective counts
      * @param evaluated candidate designs scored
+     * @param context   what the search was given
      */
-    public record Result(Design best, Design naive, Set<Parameter> goals, int evaluated) {
+    public record Result(Design best, Design naive, Set<Parameter> goals, int evaluated, Context context) {
     }
 
     /**
@@ -205,6 +206,8 @@ public final class DesignSearch {
     private static final double[] LOWS = {0.02, 0.05, 0.1};
     private static final double[] HIGHS = {1, 2, 3, 5, 8};
     private static final double H = 1e-3;
+    /** ⟨N⟩ values the traces are computed at; every series is drawn from them, so it is scored at its own values. */
+    private static final int CANDIDATES = 49;
     private static final double[] GL_NODES;
     private static final double[] GL_WEIGHTS;
 
@@ -236,7 +239,7 @@ public final class DesignSearch {
     private DesignSearch(Context ctx) {
         this.ctx = ctx;
         double top = Math.min(10, ctx.maxN());
-        candidateN = TimeWindows.logSpaced(0.01, Math.max(top, 0.02), 24);
+        candidateN = TimeWindows.logSpaced(0.01, Math.max(top, 0.02), CANDIDATES);
         TreeSet<Double> all = new TreeSet<>();
         double[][] grids = new double[GRIDS.length][];
         for (int g = 0; g < GRIDS.length; g++) {
@@ -256,7 +259,7 @@ public final class DesignSearch {
     /** Runs the search. */
     public static Result search(Context ctx) {
         DesignSearch s = new DesignSearch(ctx);
-        double[] naiveN = TimeWindows.logSpaced(0.05, Math.min(3, Math.max(0.06, ctx.maxN())), 8);
+        double[] naiveN = s.series(0.05, Math.min(3, Math.max(0.06, ctx.maxN())), 8);
         int defaultGrid = Arrays.asList(GRIDS).indexOf(DEFAULT_GRID);
         double bestObjective = s.objective(naiveN, defaultGrid, ctx.errors());
         double[] bestN = naiveN;
@@ -268,7 +271,7 @@ public final class DesignSearch {
                     if (hi > ctx.maxN() * 1.0001 || hi <= lo * 4) {
                         continue;
                     }
-                    double[] n = TimeWindows.logSpaced(lo, hi, k);
+                    double[] n = s.series(lo, hi, k);
                     for (int g = 0; g < GRIDS.length; g++) {
                         double o = s.objective(n, g, ctx.errors());
                         evaluated++;
@@ -281,7 +284,29 @@ public final class DesignSearch {
                 }
             }
         }
-        return new Result(s.detailed(bestN, bestGrid), s.detailed(naiveN, defaultGrid), ctx.goals(), evaluated);
+        return new Result(s.detailed(bestN, bestGrid), s.detailed(naiveN, defaultGrid), ctx.goals(), evaluated, ctx);
+    }
+
+    /**
+     * Scores one series on one of the candidate grids (by its name): a reduced design for checks, or a user's own.
+     * The values are moved to the nearest computed ⟨N⟩ (within 10 % of each other); the result holds those.
+     */
+    public static Design score(Context ctx, double[] nValues, String gridName) {
+        DesignSearch s = new DesignSearch(ctx);
+        for (int g = 0; g < GRIDS.length; g++) {
+            if (GRIDS[g].name().equals(gridName)) {
+                return s.detailed(Arrays.stream(nValues).map(n -> s.candidateN[s.nearest(n)]).toArray(), g);
+            }
+        }
+        throw new IllegalArgumentException("no candidate grid '" + gridName + "'");
+    }
+
+    /** k values from the computed ⟨N⟩ nearest to an even log spacing from lo to hi. */
+    private double[] series(double lo, double hi, int k) {
+        int a = nearest(lo);
+        int b = nearest(hi);
+        return IntStream.range(0, k).map(j -> (int) Math.round(a + (double) j * (b - a) / (k - 1))).distinct()
+                .mapToDouble(i -> candidateN[i]).toArray();
     }
 
     /**
@@ -455,11 +480,12 @@ public final class DesignSearch {
         final List<Double> priors = new ArrayList<>();
         final int[] trace;
         final double[] timePerPoint = new double[1];
+        /** Σ JᵀJ/σ²_white: what the fit's unweighted least squares inverts, and the white noise's own share. */
         double[][] info;
-        double[][] infoWhite;
+        /** Σ JᵀJ·(pump·∂ΔA/∂ln N)²/σ⁴_white: the pump fluctuation seen through the fit's weights. */
         double[][] infoPump;
 
-        Fisher(double[] nValues, int g, Errors err, double noiseFactor, boolean split) {
+        Fisher(double[] nValues, int g, Errors err, double noiseFactor) {
             trace = Arrays.stream(nValues).mapToInt(DesignSearch.this::nearest).toArray();
             int[] idx = gridIndex[g];
             int k = trace.length;
@@ -479,8 +505,7 @@ public final class DesignSearch {
             }
             int np = names.size();
             info = new double[np][np];
-            infoWhite = split ? new double[np][np] : null;
-            infoPump = split ? new double[np][np] : null;
+            infoPump = new double[np][np];
             double white = Math.pow(ctx.noiseOdPerSqrtS() * noiseFactor, 2) / timePerPoint[0];
             double[] row = new double[np];
             for (int i = 0; i < k; i++) {
@@ -497,12 +522,9 @@ public final class DesignSearch {
                     row[7 + 3 * i] = 1;
                     row[8 + 3 * i] = dLogN[c][m];
                     double pump = err.pumpFluctuationRel() * dLogN[c][m];
-                    double v = white + pump * pump;
-                    accumulate(info, row, 1 / v);
-                    if (split) {
-                        accumulate(infoWhite, row, white / (v * v));
-                        accumulate(infoPump, row, pump * pump / (v * v));
-                    }
+                    // the fit weighs every point alike (white noise only); pump fluctuation is noise it does not weigh
+                    accumulate(info, row, 1 / white);
+                    accumulate(infoPump, row, pump * pump / (white * white));
                 }
             }
         }
@@ -522,6 +544,21 @@ public final class DesignSearch {
                     f[a][b] += ra * row[b];
                 }
             }
+        }
+
+        /**
+         * The variance of column k's estimate: the sandwich A·(F_white + F_pump + P)·A with A = (F_white + P)⁻¹, since
+         * the fit weighs by white noise alone and the priors stand for what is known beside the data.
+         */
+        double variance(double[][] a, int k) {
+            double v = quadratic(a, info, k) + quadratic(a, infoPump, k);
+            for (int j = 0; j < names.size(); j++) {
+                double prior = priors.get(j);
+                if (prior > 0 && Double.isFinite(prior)) {
+                    v += a[k][j] * a[k][j] / (prior * prior);
+                }
+            }
+            return v;
         }
 
         /** (F + P)⁻¹ over the columns that are not held (prior 0), or null when singular. */
@@ -577,21 +614,21 @@ public final class DesignSearch {
     }
 
     private double objective(double[] nValues, int g, Errors err) {
-        Fisher f = new Fisher(nValues, g, err, 1, false);
+        Fisher f = new Fisher(nValues, g, err, 1);
         double[][] c = f.covariance();
         if (c == null) {
             return Double.POSITIVE_INFINITY;
         }
         double o = 0;
         for (Parameter p : ctx.goals()) {
-            double v = c[column(p)][column(p)];
+            double v = f.variance(c, column(p));
             o += v > 0 ? v : Double.POSITIVE_INFINITY;
         }
         return o;
     }
 
     private Design detailed(double[] nValues, int g) {
-        Fisher f = new Fisher(nValues, g, ctx.errors(), 1, true);
+        Fisher f = new Fisher(nValues, g, ctx.errors(), 1);
         double[][] c = f.covariance();
         double[] errors = new double[Parameter.values().length];
         Arrays.fill(errors, Double.NaN);
@@ -604,15 +641,16 @@ public final class DesignSearch {
         }
         for (Parameter p : Parameter.values()) {
             int col = column(p);
-            if (!(c[col][col] > 0)) {
+            double variance = f.variance(c, col);
+            if (!(c[col][col] > 0) || !(variance > 0)) {
                 continue;
             }
-            errors[p.ordinal()] = Math.sqrt(c[col][col]);
+            errors[p.ordinal()] = Math.sqrt(variance);
             if (!ctx.goals().contains(p)) {
                 continue;
             }
-            objective += c[col][col];
-            double white = quadratic(c, f.infoWhite, col);
+            objective += variance;
+            double white = quadratic(c, f.info, col);
             double pump = quadratic(c, f.infoPump, col);
             RelativeBudget sources = RelativeBudget.NONE.plus(WHITE_NOISE, Math.sqrt(Math.max(white, 0)))
                     .plus(PUMP_FLUCTUATION, Math.sqrt(Math.max(pump, 0)));
@@ -644,7 +682,7 @@ public final class DesignSearch {
             if (drift > 0) {
                 sources = sources.plus(DRIFT, Math.sqrt(drift));
             }
-            double total = Math.sqrt(c[col][col]);
+            double total = Math.sqrt(variance);
             double stat = Math.sqrt(Math.max(white + pump, 0));
             expected.add(new ExpectedError(p, stat, Math.sqrt(Math.max(sys, 0)), total, sources,
                     advice(p, sources, total, nValues, g)));
@@ -668,8 +706,8 @@ public final class DesignSearch {
     }
 
     private double totalWith(Parameter p, double[] nValues, int g, Errors err, double noiseFactor) {
-        double[][] c = new Fisher(nValues, g, err, noiseFactor, false).covariance();
-        return c == null ? Double.POSITIVE_INFINITY : Math.sqrt(c[column(p)][column(p)]);
+        double[][] c = new Fisher(nValues, g, err, noiseFactor).covariance();
+        return c == null ? Double.POSITIVE_INFINITY : Math.sqrt(new Fisher(nValues, g, err, noiseFactor).variance(c, column(p)));
     }
 
     /**
