@@ -121,6 +121,11 @@ final class PlanCommand implements Callable<Integer> {
         out.println("         " + fmt(l.pulseFwhmS(), Dimension.TIME) + " pulses, " + fmt(l.minPulseEnergyJ(), Dimension.ENERGY)
                 + " to " + fmt(l.maxPulseEnergyJ(), Dimension.ENERGY) + ", pump radius " + fmt(l.pumpRadiusM(), Dimension.LENGTH)
                 + ", probe radius " + fmt(l.probeRadiusM(), Dimension.LENGTH) + " (1/e²)");
+        var cal = l.calibration().orDefaults();
+        out.println("         known to: pulse energy " + pct(cal.pulseEnergyRel()) + ", pump radius " + pct(cal.pumpRadiusRel())
+                + ", probe radius " + pct(cal.probeRadiusRel()) + (Double.isNaN(cal.crossSectionRel()) ? "" : ", σ " + pct(cal.crossSectionRel()))
+                + "; pump fluctuation " + pct(l.pumpFluctuationOrDefault()) + " per point, drift " + pct(l.driftPerHourOrDefault())
+                + " per hour (unstated values: defaults, common practice)");
         for (Instrument i : plan.instruments()) {
             out.println("Detect   " + i.kind().key() + ": " + fmt(i.minDelayS(), Dimension.TIME) + " to " + fmt(i.maxDelayS(), Dimension.TIME)
                     + ", IRF " + fmt(i.irfFwhmS(), Dimension.TIME)
