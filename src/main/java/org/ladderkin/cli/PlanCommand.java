@@ -81,17 +81,24 @@ final class PlanCommand implements Callable<Integer> {
         out.println("  pump        " + fmt(w.wavelengthM(), Dimension.LENGTH) + "  (" + String.join("; ", w.reasons()) + ")");
         var r = plan.chosenRate();
         out.println("  rate        " + fmt(r.repetitionRateHz(), Dimension.FREQUENCY) + "  (picker ÷" + r.division() + ")");
-        out.println("  series      ⟨N⟩ probe-averaged → pulse energy (attenuation)");
+        out.println("  series      ⟨N⟩ probe-averaged ± relative (largest source) → pulse energy (attenuation)");
         for (var f : plan.fluences()) {
-            out.println(String.format(java.util.Locale.ROOT, "              %7.3g → %-10s (%.2f OD)%s", f.nProbeAveraged(),
+            out.println(String.format(java.util.Locale.ROOT, "              %7.3g ± %-4s (%s) → %-10s (%.2f OD)%s", f.nProbeAveraged(),
+                    String.format(java.util.Locale.ROOT, "%.0f %%", 100 * f.nAvgRel()), f.nAvgDominant(),
                     fmt(f.pulseEnergyJ(), Dimension.ENERGY), f.attenuatorOd(), f.reachable() ? "" : "  OUT OF RANGE"));
         }
         if (plan.design() != null) {
             var d = plan.design();
-            for (var p : d.goals()) {
-                out.println(String.format(java.util.Locale.ROOT, "  expected    %s ± %.3g %% (naive series: ± %.3g %%)",
-                        p.label(), 100 * d.best().error(p), 100 * d.naive().error(p)));
+            for (var e : d.best().expected()) {
+                out.println(String.format(java.util.Locale.ROOT, "  expected    %s ± %.2g %% (statistical %.2g %%, systematic %.2g %%; "
+                                + "naive series ± %.2g %%); largest source: %s", e.parameter().label(), 100 * e.totalRel(),
+                        100 * e.statisticalRel(), 100 * e.systematicRel(), 100 * d.naive().error(e.parameter()), e.dominant()));
+                out.println("              " + e.advice());
             }
+            var b = d.best();
+            out.println(String.format(java.util.Locale.ROOT, "  delays      %d points (%s), %s to %s, %s per point; scored by the design",
+                    b.delaysS().length, b.grid(), fmt(b.delaysS()[0], Dimension.TIME), fmt(b.delaysS()[b.delaysS().length - 1],
+                            Dimension.TIME), fmt(b.timePerPointS(), Dimension.TIME)));
         }
         out.println("Risks");
         for (var risk : plan.risks()) {
@@ -114,6 +121,11 @@ final class PlanCommand implements Callable<Integer> {
         out.println("         " + fmt(l.pulseFwhmS(), Dimension.TIME) + " pulses, " + fmt(l.minPulseEnergyJ(), Dimension.ENERGY)
                 + " to " + fmt(l.maxPulseEnergyJ(), Dimension.ENERGY) + ", pump radius " + fmt(l.pumpRadiusM(), Dimension.LENGTH)
                 + ", probe radius " + fmt(l.probeRadiusM(), Dimension.LENGTH) + " (1/e²)");
+        var cal = l.calibration().orDefaults();
+        out.println("         known to: pulse energy " + pct(cal.pulseEnergyRel()) + ", pump radius " + pct(cal.pumpRadiusRel())
+                + ", probe radius " + pct(cal.probeRadiusRel()) + (Double.isNaN(cal.crossSectionRel()) ? "" : ", σ " + pct(cal.crossSectionRel()))
+                + "; pump fluctuation " + pct(l.pumpFluctuationOrDefault()) + " per point, drift " + pct(l.driftPerHourOrDefault())
+                + " per hour (unstated values: defaults, common practice)");
         for (Instrument i : plan.instruments()) {
             out.println("Detect   " + i.kind().key() + ": " + fmt(i.minDelayS(), Dimension.TIME) + " to " + fmt(i.maxDelayS(), Dimension.TIME)
                     + ", IRF " + fmt(i.irfFwhmS(), Dimension.TIME)

@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Set;
+import org.ladderkin.excite.Calibration;
 import org.ladderkin.io.json.JsonTree;
 import org.ladderkin.io.json.Node;
 import org.ladderkin.plan.Goal;
@@ -35,6 +36,11 @@ public final class PlanCodec {
 
     /** Schema name of plan files. */
     public static final String SCHEMA = "ladderkin.plan";
+    /**
+     * With {@code averagePower}, the lowest pulse energy is this fraction of the highest: a variable neutral-density
+     * wheel and a filter span about 4 OD (common practice, no source).
+     */
+    static final double LOWEST_OF_HIGHEST_ENERGY = 1e-4;
     /** Newest plan schema version this build reads and writes. */
     public static final int VERSION = 1;
 
@@ -100,20 +106,62 @@ public final class PlanCodec {
                 .map(d -> d.items(1).stream().map(i -> i.integer(1, 1_000_000_000)).toList())
                 .orElse(List.of(1));
         double fwhm = n.field("pulseWidth").positive(Dimension.TIME, null);
-        Node range = n.field("pulseEnergyRange");
-        List<Node> ends = range.items(2);
-        if (ends.size() != 2) {
-            throw range.error(InputProblem.OUT_OF_RANGE, "needs exactly two energies [lowest, highest], found " + ends.size());
+        double lo;
+        double hi;
+        Node power = n.optional("averagePower").orElse(null);
+        Node range = n.optional("pulseEnergyRange").orElse(null);
+        if (power != null && range != null) {
+            throw power.error(InputProblem.CONFLICT, "give either 'averagePower' or 'pulseEnergyRange', not both "
+                    + "(the average power at the full repetition rate sets the highest pulse energy)");
         }
-        double lo = ends.get(0).positive(Dimension.ENERGY, null);
-        double hi = ends.get(1).positive(Dimension.ENERGY, null);
-        if (lo > hi) {
-            throw range.error(InputProblem.BAD_ORDER, "lowest energy is above the highest (write [lowest, highest])");
+        if (power != null) {
+            hi = power.positive(Dimension.POWER, null) / rep;
+            lo = hi * LOWEST_OF_HIGHEST_ENERGY;
+        } else {
+            if (range == null) {
+                throw new InputException(n.location(), n.path() + ".pulseEnergyRange", InputProblem.MISSING_FIELD,
+                        "missing required field in '" + n.path() + "' (add \"pulseEnergyRange\": [lowest, highest], or "
+                                + "\"averagePower\": ... measured at the full repetition rate)");
+            }
+            List<Node> ends = range.items(2);
+            if (ends.size() != 2) {
+                throw range.error(InputProblem.OUT_OF_RANGE, "needs exactly two energies [lowest, highest], found " + ends.size());
+            }
+            lo = ends.get(0).positive(Dimension.ENERGY, null);
+            hi = ends.get(1).positive(Dimension.ENERGY, null);
+            if (lo > hi) {
+                throw range.error(InputProblem.BAD_ORDER, "lowest energy is above the highest (write [lowest, highest])");
+            }
         }
         double pump = n.field("pumpRadius").positive(Dimension.LENGTH, null);
         double probe = n.field("probeRadius").positive(Dimension.LENGTH, null);
+        Node meter = n.optional("powerMeterUncertainty").orElse(null);
+        Node energyRel = n.optional("pulseEnergyUncertainty").orElse(null);
+        if (meter != null && energyRel != null) {
+            throw meter.error(InputProblem.CONFLICT, "give either 'powerMeterUncertainty' or 'pulseEnergyUncertainty', not both "
+                    + "(a pulse energy read from a power meter has the meter's relative uncertainty)");
+        }
+        double energy = meter != null ? relative(meter) : energyRel != null ? relative(energyRel) : Double.NaN;
+        Calibration cal = new Calibration(energy, optionalRelative(n, "pumpRadiusUncertainty"),
+                optionalRelative(n, "probeRadiusUncertainty"), optionalRelative(n, "crossSectionUncertainty"));
+        double fluctuation = optionalRelative(n, "pumpFluctuation");
+        double drift = optionalRelative(n, "pumpDriftPerHour");
         n.finish();
-        return new LaserSetup(wavelengths, rep, divisions, fwhm, lo, hi, pump, probe);
+        return new LaserSetup(wavelengths, rep, divisions, fwhm, lo, hi, pump, probe, cal, fluctuation, drift);
+    }
+
+    /** An optional relative uncertainty such as "5 %", NaN when absent. */
+    private static double optionalRelative(Node n, String field) {
+        return n.optional(field).map(PlanCodec::relative).orElse(Double.NaN);
+    }
+
+    /** A relative uncertainty in [0, 1) such as "5 %" or 0.05. */
+    private static double relative(Node n) {
+        double v = n.probability();
+        if (v >= 1) {
+            throw n.error(InputProblem.OUT_OF_RANGE, "a relative uncertainty must be below 100 % (e.g. \"5 %\")");
+        }
+        return v;
     }
 
     private static Instrument instrument(Node n) {
@@ -142,7 +190,9 @@ public final class PlanCodec {
             }
             double noise = n.field("noiseFloor").positive(Dimension.ABSORBANCE, null);
             Response irf = response(n);
-            inst = new Instrument(Instrument.Kind.TRANSIENT_ABSORPTION, lo, hi, noise, irf.fwhmS(), 0, irf.measured());
+            double t0 = n.optional("timeZeroUncertainty").map(t -> t.nonNegative(Dimension.TIME, null)).orElse(Double.NaN);
+            double irfRel = optionalRelative(n, "irfWidthUncertainty");
+            inst = new Instrument(Instrument.Kind.TRANSIENT_ABSORPTION, lo, hi, noise, irf.fwhmS(), 0, irf.measured(), t0, irfRel);
         }
         n.finish();
         return inst;

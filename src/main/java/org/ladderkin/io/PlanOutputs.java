@@ -10,6 +10,7 @@ import org.ladderkin.observe.Risk;
 import org.ladderkin.plan.CampaignPlan;
 import org.ladderkin.plan.DelayPlan;
 import org.ladderkin.plan.DesignSearch;
+import org.ladderkin.plan.ExpectedError;
 import org.ladderkin.plan.FluencePoint;
 import org.ladderkin.plan.Instrument;
 import org.ladderkin.plan.LaserSetup;
@@ -66,6 +67,14 @@ public final class PlanOutputs {
         laser.put("maxPulseEnergyNj", l.maxPulseEnergyJ() * 1e9);
         laser.put("pumpRadiusUm", l.pumpRadiusM() * 1e6);
         laser.put("probeRadiusUm", l.probeRadiusM() * 1e6);
+        // stated values only (null: the planner's default, which the design section shows applied)
+        ObjectNode cal = laser.putObject("calibration");
+        putRel(cal, "pulseEnergyRel", l.calibration().pulseEnergyRel());
+        putRel(cal, "pumpRadiusRel", l.calibration().pumpRadiusRel());
+        putRel(cal, "probeRadiusRel", l.calibration().probeRadiusRel());
+        putRel(cal, "crossSectionRel", l.calibration().crossSectionRel());
+        putRel(cal, "pumpFluctuationRel", l.pumpFluctuationRel());
+        putRel(cal, "pumpDriftRelPerHour", l.driftRelPerHour());
         ObjectNode model = root.putObject("model");
         var m = plan.model();
         model.put("tauSingleExcitonNs", m.tauSingleExcitonS() * 1e9);
@@ -107,6 +116,8 @@ public final class PlanOutputs {
             o.put("attenuatorOd", f.attenuatorOd());
             o.put("photonFluencePeakPerCm2", f.photonFluencePeakPerM2() * 1e-4);
             o.put("reachable", f.reachable());
+            o.put("nAvgRel", f.nAvgRel());
+            o.put("nAvgDominant", f.nAvgDominant());
         }
         ArrayNode rates = root.putArray("repetitionRates");
         for (RateOption r : plan.rates()) {
@@ -130,6 +141,18 @@ public final class PlanOutputs {
             d.put("candidatesScored", plan.design().evaluated());
             designNode(d.putObject("chosen"), plan.design().best());
             designNode(d.putObject("naive"), plan.design().naive());
+            ArrayNode expected = d.putArray("expectedErrors");
+            for (ExpectedError e : plan.design().best().expected()) {
+                ObjectNode o = expected.addObject();
+                o.put("parameter", e.parameter().key());
+                o.put("statisticalRel", e.statisticalRel());
+                o.put("systematicRel", e.systematicRel());
+                o.put("totalRel", e.totalRel());
+                o.put("dominant", e.dominant());
+                ObjectNode src = o.putObject("sources");
+                e.sources().items().forEach(i -> src.put(i.source(), i.rel()));
+                o.put("advice", e.advice());
+            }
         }
         ArrayNode delays = root.putArray("delayPlans");
         for (DelayPlan dp : plan.delayPlans()) {
@@ -174,13 +197,19 @@ public final class PlanOutputs {
         for (double v : d.nValues()) {
             n.add(v);
         }
+        o.put("grid", d.grid());
         o.put("pointsPerDecade", d.pointsPerDecade());
+        o.put("delayPoints", d.delaysS().length);
         o.put("timePerPointS", d.timePerPointS());
-        ObjectNode e = o.putObject("relativeStandardErrors");
+        ObjectNode e = o.putObject("totalRelativeErrors");
         for (DesignSearch.Parameter p : DesignSearch.Parameter.values()) {
             double v = d.error(p);
-            e.put(p.name().toLowerCase(Locale.ROOT), Double.isFinite(v) ? v : null);
+            e.put(p.key(), Double.isFinite(v) ? v : null);
         }
+    }
+
+    private static void putRel(ObjectNode o, String key, double v) {
+        o.put(key, Double.isNaN(v) ? null : v);
     }
 
     /**

@@ -5,9 +5,12 @@ import java.util.List;
 import java.util.Locale;
 import java.util.stream.IntStream;
 import org.ladderkin.excite.BeamProfile;
+import org.ladderkin.excite.Calibration;
 import org.ladderkin.excite.Excitation;
 import org.ladderkin.excite.GaussianBeam;
+import org.ladderkin.excite.OccupancyUncertainty;
 import org.ladderkin.excite.Pulse;
+import org.ladderkin.excite.RelativeBudget;
 import org.ladderkin.kinetics.KineticModel;
 import org.ladderkin.kinetics.LadderKinetics;
 import org.ladderkin.kinetics.train.PeriodicSteadyState;
@@ -37,6 +40,12 @@ public final class Planner {
     public static final double SAMPLE_TEMPERATURE_K = 295;
     /** Assumed PL collection × detection efficiency for the TCSPC pile-up estimate (common practice, no source). */
     public static final double TCSPC_COLLECTION_EFFICIENCY = 1e-4;
+
+    /**
+     * σ's relative uncertainty when neither the plan nor the cross-section states one: an absorption law transferred
+     * from another batch, size or wavelength is good to about 20 % (common practice, no source).
+     */
+    public static final double DEFAULT_CROSS_SECTION_REL = 0.20;
 
     /** Progress of a long computation. */
     @FunctionalInterface
@@ -94,17 +103,18 @@ public final class Planner {
         DesignSearch.Result design = null;
         double firstDelay = ta == null ? 1e-12 : Math.max(ta.minDelayS(), 5 * model.coolingS());
         double lastDelay = ta == null ? 3e-9 : ta.maxDelayS();
+        Excitation atChosenRate = Excitation.of(sample, new Pulse(laser.maxPulseEnergyJ(), chosen.wavelengthM(),
+                chosenRate.repetitionRateHz()), pump, probe, true);
+        Calibration cal = laser.calibration().orDefaults();
         if (searchDesign && ta != null && !goalParams.isEmpty() && !Double.isNaN(bandEdgeOd) && nReach > 0.2) {
             double budget = in.limits().beamTimeS() * DATA_SHARE_OF_BEAM_TIME;
             design = DesignSearch.search(new DesignSearch.Context(model, g, period, bandEdgeOd, ta.noiseFloor(), budget,
-                    firstDelay, lastDelay, nReach, goalParams));
+                    firstDelay, lastDelay, nReach, goalParams, designErrors(in, ta, atChosenRate, cal)));
         }
         double[] nSeries = design != null ? design.best().nValues()
                 : TimeWindows.logSpaced(0.05, Math.max(0.1, Math.min(3, nReach)), 8);
 
         progress.step(3, totalSteps, "converting the series to pulse energies");
-        Excitation atChosenRate = Excitation.of(sample, new Pulse(laser.maxPulseEnergyJ(), chosen.wavelengthM(),
-                chosenRate.repetitionRateHz()), pump, probe, true);
         List<FluencePoint> fluences = new ArrayList<>();
         // the probe- and depth-averaged ⟨N⟩ is linear in the pulse energy, so one evaluation gives every setting
         double nPerJoule = atChosenRate.nAvgProbeWeighted() / laser.maxPulseEnergyJ();
@@ -113,11 +123,14 @@ public final class Planner {
             Excitation ex = atChosenRate.withEnergyJ(e);
             boolean reachable = e <= laser.maxPulseEnergyJ() * (1 + 1e-9) && e >= laser.minPulseEnergyJ() * (1 - 1e-9);
             fluences.add(new FluencePoint(n, ex.nAvgPeak(), e, Math.log10(laser.maxPulseEnergyJ() / e),
-                    ex.photonFluencePeakPerM2(), reachable));
+                    ex.photonFluencePeakPerM2(), reachable,
+                    OccupancyUncertainty.of(ex, cal, crossSectionRel(in, ex)).nAvgProbeWeighted()));
         }
 
         progress.step(4, totalSteps, "predicting traces");
-        double[] taDelays = design != null ? design.best().delaysS() : TimeWindows.logSpaced(firstDelay, lastDelay, 60);
+        // the predicted traces are drawn on log axes: the scored grid's positive delays
+        double[] taDelays = design != null ? java.util.Arrays.stream(design.best().delaysS()).filter(t -> t > 0).toArray()
+                : TimeWindows.logSpaced(firstDelay, lastDelay, 60);
         Predictions predictions = predict(km, nSeries, period, taDelays, bandEdgeOd, model);
         Excitation top = atChosenRate.withEnergyJ(fluences.get(fluences.size() - 1).pulseEnergyJ());
         HeatBudget heat = heatAt(km, top, nSeries[nSeries.length - 1], period);
@@ -183,6 +196,35 @@ public final class Planner {
         progress.step(6, totalSteps, "done");
         return new CampaignPlan(in, model, wavelengths, rates, chosenRate, fluences, heat, design, delayPlans, cm, predictions,
                 risks, advisories, cautions);
+    }
+
+    /**
+     * σ's relative uncertainty at the pump: the plan's stated value, else the uncertainty the cross-section states for
+     * itself (its law's or measurement's, with its regime), else {@link #DEFAULT_CROSS_SECTION_REL}. The one place the
+     * planner reads it.
+     */
+    private static double crossSectionRel(PlanInputs in, Excitation atPump) {
+        double stated = in.laser().calibration().crossSectionRel();
+        if (!Double.isNaN(stated)) {
+            return stated;
+        }
+        double own = atPump.crossSection().relativeUncertainty();
+        return Double.isNaN(own) ? DEFAULT_CROSS_SECTION_REL : own;
+    }
+
+    /**
+     * The design's error terms. The fluence scale's prior is the probe-averaged ⟨N⟩ budget without σ: σ enters the
+     * design as its own parameter (free when it is a goal, with its stated uncertainty as prior when not), so its
+     * share must not be counted twice.
+     */
+    private static DesignSearch.Errors designErrors(PlanInputs in, Instrument ta, Excitation ex, Calibration cal) {
+        Calibration withoutSigma = new Calibration(cal.pulseEnergyRel(), cal.pumpRadiusRel(), cal.probeRadiusRel(), Double.NaN);
+        RelativeBudget scale = OccupancyUncertainty.of(ex, withoutSigma, Double.NaN).nAvgProbeWeighted();
+        RelativeBudget stated = RelativeBudget.NONE.plus("pulse energy", cal.pulseEnergyRel())
+                .plus("pump radius", cal.pumpRadiusRel()).plus("probe radius", cal.probeRadiusRel());
+        LaserSetup l = in.laser();
+        return new DesignSearch.Errors(l.pumpFluctuationOrDefault(), l.driftPerHourOrDefault(), scale, stated,
+                crossSectionRel(in, ex), ta.timeZeroUncertaintyOrDefault(), ta.irfFwhmS(), ta.irfWidthRelOrDefault(), ta.measuredIrf());
     }
 
     private static List<RateOption> rates(PlanInputs in, KineticModel km, ModelAssumptions model, Excitation atMax,
@@ -268,20 +310,9 @@ public final class Planner {
             double[] grid;
             double perPoint;
             if (design != null) {
-                double irfStep = Math.max(inst.irfFwhmS() / 2, 20e-15);
-                double linearEnd = Math.max(2e-12, 10 * inst.irfFwhmS());
-                double[] logPart = design.best().delaysS();
-                java.util.TreeSet<Double> all = new java.util.TreeSet<>();
-                for (double t = -2 * inst.irfFwhmS(); t < linearEnd; t += irfStep) {
-                    all.add(Math.round(t / 1e-16) * 1e-16);
-                }
-                for (double t : logPart) {
-                    if (t >= linearEnd) {
-                        all.add(t);
-                    }
-                }
-                grid = all.stream().mapToDouble(Double::doubleValue).toArray();
-                perPoint = budget / (fluenceCount * grid.length);
+                // exactly the grid and averaging time the design was scored on
+                grid = design.best().delaysS();
+                perPoint = design.best().timePerPointS();
             } else {
                 grid = TimeWindows.grid(-2 * inst.irfFwhmS(), Math.max(inst.irfFwhmS() / 2, 20e-15),
                         Math.max(2e-12, 10 * inst.irfFwhmS()), inst.maxDelayS(), 10);

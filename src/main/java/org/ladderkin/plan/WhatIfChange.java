@@ -37,7 +37,8 @@ public sealed interface WhatIfChange {
         public PlanInputs applyTo(PlanInputs in) {
             LaserSetup l = in.laser();
             LaserSetup changed = new LaserSetup(l.pumpWavelengthsM(), rateHz, List.of(1), l.pulseFwhmS(), l.minPulseEnergyJ(),
-                    l.maxPulseEnergyJ(), l.pumpRadiusM(), l.probeRadiusM());
+                    l.maxPulseEnergyJ(), l.pumpRadiusM(), l.probeRadiusM(), l.calibration(), l.pumpFluctuationRel(),
+                    l.driftRelPerHour());
             return new PlanInputs(in.title(), in.lab(), in.sample(), changed, in.instruments(), in.goals(),
                     in.multiplicationPhotonEnergiesJ(), in.limits(), in.modelOverrides());
         }

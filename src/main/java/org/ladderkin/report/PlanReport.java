@@ -9,6 +9,7 @@ import org.ladderkin.observe.Verdict;
 import org.ladderkin.plan.CampaignPlan;
 import org.ladderkin.plan.DelayPlan;
 import org.ladderkin.plan.DesignSearch;
+import org.ladderkin.plan.ExpectedError;
 import org.ladderkin.plan.FluencePoint;
 import org.ladderkin.plan.Instrument;
 import org.ladderkin.plan.Predictions;
@@ -162,8 +163,8 @@ public final class PlanReport {
                 r.verdict() == Verdict.FAIL ? " — NONE does; this is the slowest available" : ""));
         for (DelayPlan d : plan.delayPlans()) {
             if (d.instrument().kind() == Instrument.Kind.TRANSIENT_ABSORPTION) {
-                lines.add(String.format(Locale.ROOT, "TA delays: %d points from %s to %s (linear around zero, then log); stage "
-                                + "travel %s; average %s per point, %s per fluence.", d.delaysS().length,
+                lines.add(String.format(Locale.ROOT, "TA delays: %d points from %s to %s (a baseline before the pulse, the rise, "
+                                + "then log); stage travel %s; average %s per point, %s per fluence.", d.delaysS().length,
                         q(d.delaysS()[0], Dimension.TIME), q(d.delaysS()[d.delaysS().length - 1], Dimension.TIME),
                         q(d.stageTravelM(), Dimension.LENGTH), q(d.timePerPointS(), Dimension.TIME),
                         q(d.timePerFluenceS(), Dimension.TIME)));
@@ -177,7 +178,7 @@ public final class PlanReport {
         lines.add("Overall risk verdict: " + worst.name() + " (see the risk table).");
         page.bullets(lines);
         page.heading(3, "Fluence series");
-        page.table(List.of("#", "⟨N⟩ probe-averaged", "⟨N⟩ on axis", "pulse energy", "attenuation (OD)",
+        page.table(List.of("#", "⟨N⟩ probe-averaged", "± (largest source)", "⟨N⟩ on axis", "pulse energy", "attenuation (OD)",
                         "peak fluence (µJ/cm²)", "peak photons/cm²", "in range"),
                 indexed(plan.fluences(), plan.chosenWavelength().photonEnergyJ()));
     }
@@ -186,7 +187,9 @@ public final class PlanReport {
         List<List<String>> rows = new ArrayList<>();
         int i = 1;
         for (FluencePoint f : fluences) {
-            rows.add(List.of(String.valueOf(i++), num(f.nProbeAveraged()), num(f.nPeak()), q(f.pulseEnergyJ(), Dimension.ENERGY),
+            rows.add(List.of(String.valueOf(i++), num(f.nProbeAveraged()),
+                    f.nAvgBudget().items().isEmpty() ? "—" : pct(f.nAvgRel()) + " (" + f.nAvgDominant() + ")",
+                    num(f.nPeak()), q(f.pulseEnergyJ(), Dimension.ENERGY),
                     String.format(Locale.ROOT, "%.2f", f.attenuatorOd()),
                     // J/m² → µJ/cm²: × 1e6 / 1e4
                     num(f.photonFluencePeakPerM2() * photonEnergyJ * 100), num(f.photonFluencePeakPerM2() * 1e-4),
@@ -203,21 +206,32 @@ public final class PlanReport {
                     + "lifetime, the cross-section and the single-exciton lifetime.");
             return;
         }
-        page.paragraph(String.format(Locale.ROOT, "Expected relative standard errors from the Fisher information of the "
-                + "predicted ΔA traces under the instrument's noise (%d candidate designs scored; the beam time is shared "
-                + "evenly among all points). The naive design is 8 log-spaced fluences from ⟨N⟩ = 0.05 to 3 at 10 points "
-                + "per decade.", d.evaluated()));
+        page.paragraph(String.format(Locale.ROOT, "Expected errors of the goal parameters from the Fisher information of "
+                + "the traces a fit will model (per-trace amplitude and baseline, time zero, the instrument's IRF) on the "
+                + "delays listed above, with the beam time shared evenly among all points. Statistical: white noise and "
+                + "pump fluctuation per point; systematic: the fluence-scale calibration (pulse energy, pump and probe "
+                + "radius), drift between traces, time zero and the IRF width, each a nuisance parameter with a Gaussian "
+                + "prior. σ and the fluence scale enter only as a product, so σ is never known better than the "
+                + "calibration. %d candidate designs scored; the naive design is 8 log-spaced fluences from ⟨N⟩ = 0.05 "
+                + "to 3.", d.evaluated()));
         List<List<String>> rows = new ArrayList<>();
-        for (DesignSearch.Parameter p : DesignSearch.Parameter.values()) {
-            double best = d.best().error(p);
-            double naive = d.naive().error(p);
-            rows.add(List.of(p.label() + (d.goals().contains(p) ? " (goal)" : ""), pct(naive), pct(best),
-                    Double.isFinite(best) && Double.isFinite(naive) && best > 0 ? String.format(Locale.ROOT, "%.2f×", naive / best) : "—"));
+        for (ExpectedError e : d.best().expected()) {
+            rows.add(List.of(e.parameter().label(), pct(e.statisticalRel()), pct(e.systematicRel()), pct(e.totalRel()),
+                    pct(d.naive().error(e.parameter())), e.dominant()));
         }
-        page.table(List.of("parameter", "naive design", "chosen design", "gain"), rows);
-        page.paragraph(String.format(Locale.ROOT, "Chosen design: %d fluences from ⟨N⟩ = %.3g to %.3g, %d delay points per decade.",
-                d.best().nValues().length, d.best().nValues()[0], d.best().nValues()[d.best().nValues().length - 1],
-                d.best().pointsPerDecade()));
+        page.table(List.of("goal parameter", "statistical", "systematic", "total", "naive design (total)", "dominant source"), rows);
+        page.bullets(d.best().expected().stream().map(e -> e.advice() + ".").toList());
+        List<List<String>> sources = new ArrayList<>();
+        for (ExpectedError e : d.best().expected()) {
+            for (var i : e.sources().items()) {
+                sources.add(List.of(e.parameter().label(), i.source(), pct(i.rel())));
+            }
+        }
+        page.table(List.of("goal parameter", "source", "contribution"), sources);
+        page.paragraph(String.format(Locale.ROOT, "Chosen design: %d fluences from ⟨N⟩ = %.3g to %.3g; delay grid '%s' "
+                        + "(%d points, %s per point).", d.best().nValues().length, d.best().nValues()[0],
+                d.best().nValues()[d.best().nValues().length - 1], d.best().grid(), d.best().delaysS().length,
+                q(d.best().timePerPointS(), Dimension.TIME)));
     }
 
     private static void multiplicationSection(HtmlPage page, CampaignPlan plan) {
