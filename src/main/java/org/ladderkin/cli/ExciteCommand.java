@@ -7,10 +7,8 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.ladderkin.excite.BeamProfile;
-import org.ladderkin.excite.Calibration;
 import org.ladderkin.excite.Excitation;
 import org.ladderkin.excite.OccupancyUncertainty;
-import org.ladderkin.excite.RelativeBudget;
 import org.ladderkin.excite.FlatTopBeam;
 import org.ladderkin.excite.GaussianBeam;
 import org.ladderkin.excite.Pulse;
@@ -33,6 +31,7 @@ import picocli.CommandLine;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -140,21 +139,8 @@ final class ExciteCommand implements Callable<Integer> {
     @Option(names = "--spectrum", paramLabel = "CSV", description = "measured absorption spectrum (wavelength_nm,absorbance) to scale σ to the pump")
     Path spectrumFile;
 
-    @Option(names = "--energy-uncertainty", paramLabel = "REL", description = "relative standard uncertainty of the pulse "
-            + "energy or power reading, e.g. 5%% (default 5 %%, common practice)")
-    String energyUncertainty;
-
-    @Option(names = "--radius-uncertainty", paramLabel = "REL", description = "relative standard uncertainty of the pump and "
-            + "probe radii, e.g. 5%% (default 5 %%, common practice)")
-    String radiusUncertainty;
-
-    @Option(names = "--probe-radius-uncertainty", paramLabel = "REL", description = "relative uncertainty of the probe radius "
-            + "when it differs from the pump's")
-    String probeRadiusUncertainty;
-
-    @Option(names = "--cross-section-uncertainty", paramLabel = "REL", description = "relative standard uncertainty of σ at "
-            + "the pump, e.g. 20%% (default: σ's own, where the law or measurement states one)")
-    String crossSectionUncertainty;
+    @Mixin
+    CalibrationFlags calibrationFlags;
 
     @Option(names = "--format", paramLabel = "FMT", defaultValue = "text", description = "text or json")
     String format;
@@ -196,63 +182,17 @@ final class ExciteCommand implements Callable<Integer> {
                 x = x.withEnergyJ(targetJ);
             }
         }
-        OccupancyUncertainty.Result u = OccupancyUncertainty.of(x, calibration().orDefaults(), x.crossSection().relativeUncertainty());
+        OccupancyUncertainty.Result u = OccupancyUncertainty.of(x, calibrationFlags.calibration().orDefaults(), x.crossSection().relativeUncertainty());
         PrintWriter out = spec.commandLine().getOut();
         if (format.equals("json")) {
             ObjectNode root = json(x, targetJ);
-            root.set("uncertainty", uncertaintyJson(u));
+            root.set("uncertainty", CalibrationFlags.json(u));
             out.print(ResolvedJson.toText(root));
         } else {
             text(x, targetJ, u, out);
         }
         out.flush();
         return ExitCodes.OK;
-    }
-
-    private Calibration calibration() {
-        double radius = rel(radiusUncertainty, "--radius-uncertainty");
-        double probe = probeRadiusUncertainty == null ? radius : rel(probeRadiusUncertainty, "--probe-radius-uncertainty");
-        return new Calibration(rel(energyUncertainty, "--energy-uncertainty"), radius, probe,
-                rel(crossSectionUncertainty, "--cross-section-uncertainty"));
-    }
-
-    /** A relative uncertainty written as "5%" or "0.05", or NaN when the flag is absent. */
-    private static double rel(String text, String flag) {
-        if (text == null) {
-            return Double.NaN;
-        }
-        double v;
-        try {
-            v = Quantity.parseSi(text, Dimension.DIMENSIONLESS);
-        } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException(flag + ": " + e.getMessage(), e);
-        }
-        if (!(v >= 0 && v < 1)) {
-            throw new IllegalArgumentException(flag + ": must be a relative uncertainty from 0 to below 100 %, was " + text);
-        }
-        return v;
-    }
-
-    private static ObjectNode uncertaintyJson(OccupancyUncertainty.Result u) {
-        ObjectNode node = ResolvedJson.object();
-        node.put("nAvgProbeWeightedRel", u.nAvgProbeWeighted().totalRel());
-        node.put("photonFluencePeakRel", u.photonFluencePeak().totalRel());
-        var budget = node.putArray("budget");
-        for (RelativeBudget.Item i : u.nAvgProbeWeighted().items()) {
-            ObjectNode item = budget.addObject();
-            item.put("source", i.source());
-            item.put("rel", i.rel());
-        }
-        return node;
-    }
-
-    /** ⟨N⟩ ± and its largest contribution; σ's share is its own stated uncertainty unless a flag gives one. */
-    private static String uncertaintyLine(Excitation x, OccupancyUncertainty.Result u) {
-        RelativeBudget n = u.nAvgProbeWeighted();
-        return "         probe-weighted ⟨N⟩ " + SampleReport.num(x.nAvgProbeWeighted(), 3) + " ± "
-                + SampleReport.num(100 * n.totalRel(), 2) + " %"
-                + n.dominant().map(d -> ", largest: " + d.source() + " (" + SampleReport.num(100 * d.rel(), 2) + " %)").orElse("")
-                + "; peak photon fluence ± " + SampleReport.num(100 * u.photonFluencePeak().totalRel(), 2) + " %";
     }
 
     private Sample sample(double pumpM) {
@@ -432,7 +372,7 @@ final class ExciteCommand implements Callable<Integer> {
         out.println("⟨N⟩      " + SampleReport.num(x.nAvgPeak(), 4) + " on the pump axis (front face); probe-weighted "
                 + SampleReport.num(x.nAvgProbeWeightedFrontFace(), 4) + " (front face), "
                 + SampleReport.num(x.nAvgProbeWeighted(), 4) + (x.geometry().depthAveraged() ? " (spot and depth)" : " (no depth average)"));
-        out.println(uncertaintyLine(x, u));
+        out.println(CalibrationFlags.line(x.nAvgProbeWeighted(), u));
         out.println("Excited  " + SampleReport.pct(x.excitedFractionProbeWeighted()) + " of the probed dots hold at least one exciton "
                 + "(probe-weighted 1 − e^−⟨N⟩)");
         out.println("Absorbed " + SampleReport.num(x.absorbanceAtPump(), 3) + " OD at the pump: " + SampleReport.pct(x.absorbedFraction())

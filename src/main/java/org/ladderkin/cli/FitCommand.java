@@ -113,7 +113,8 @@ final class FitCommand implements Callable<Integer> {
     boolean uniformPump;
 
     @Option(names = "--fluence-uncertainty", paramLabel = "FRACTION",
-            description = "relative calibration uncertainty of the excitation (e.g. 8% or 0.08), added to the errors as a prior")
+            description = "relative calibration uncertainty of the excitation (e.g. 8%% or 0.08), added to the errors as a prior "
+                    + "(default: the --plan's calibration of pulse energy and radii, else none)")
     String fluenceUncertainty;
 
     @Option(names = "--time-zero", paramLabel = "TIME", defaultValue = "0ps", description = "time zero (start when freed)")
@@ -174,7 +175,8 @@ final class FitCommand implements Callable<Integer> {
         LadderFitSetup setup = new LadderFitSetup(base, repRate == null ? Double.NaN : 1 / positive(repRate, Dimension.FREQUENCY, "--rep-rate"),
                 freed, crossSection == null ? Double.NaN : positive(crossSection, Dimension.AREA, "--cross-section"),
                 Quantity.parseSi(timeZero, Dimension.TIME), irf == null ? Double.NaN : positive(irf, Dimension.TIME, "--irf"),
-                sharedAmplitude, profile, measured, geometry(basis), fraction(fluenceUncertainty));
+                sharedAmplitude, profile, measured, geometry(basis), fluenceUncertainty == null && planFile != null
+                        ? PlanFitBasis.fluenceScaleRel(PlanCodec.read(planFile)) : fraction(fluenceUncertainty));
         if (free == null && !spec.commandLine().getParseResult().hasMatchedOption("--time-zero")) {
             setup = setup.withTimeZeroFreedFor(data);
         }

@@ -133,8 +133,11 @@ public final class PlanCodec {
                 throw range.error(InputProblem.BAD_ORDER, "lowest energy is above the highest (write [lowest, highest])");
             }
         }
-        double pump = n.field("pumpRadius").positive(Dimension.LENGTH, null);
-        double probe = n.field("probeRadius").positive(Dimension.LENGTH, null);
+        double pitch = n.optional("beamPixelPitch").map(x -> x.positive(Dimension.LENGTH, null)).orElse(Double.NaN);
+        Spot pumpSpot = spot(n, "pumpRadius", "pumpBeamFile", pitch);
+        Spot probeSpot = spot(n, "probeRadius", "probeBeamFile", pitch);
+        double pump = pumpSpot.radiusM();
+        double probe = probeSpot.radiusM();
         Node meter = n.optional("powerMeterUncertainty").orElse(null);
         Node energyRel = n.optional("pulseEnergyUncertainty").orElse(null);
         if (meter != null && energyRel != null) {
@@ -142,12 +145,52 @@ public final class PlanCodec {
                     + "(a pulse energy read from a power meter has the meter's relative uncertainty)");
         }
         double energy = meter != null ? relative(meter) : energyRel != null ? relative(energyRel) : Double.NaN;
-        Calibration cal = new Calibration(energy, optionalRelative(n, "pumpRadiusUncertainty"),
-                optionalRelative(n, "probeRadiusUncertainty"), optionalRelative(n, "crossSectionUncertainty"));
+        double pumpRel = optionalRelative(n, "pumpRadiusUncertainty");
+        double probeRel = optionalRelative(n, "probeRadiusUncertainty");
+        Calibration cal = new Calibration(energy, Double.isNaN(pumpRel) ? pumpSpot.measuredRel() : pumpRel,
+                Double.isNaN(probeRel) ? probeSpot.measuredRel() : probeRel, optionalRelative(n, "crossSectionUncertainty"));
         double fluctuation = optionalRelative(n, "pumpFluctuation");
         double drift = optionalRelative(n, "pumpDriftPerHour");
         n.finish();
         return new LaserSetup(wavelengths, rep, divisions, fwhm, lo, hi, pump, probe, cal, fluctuation, drift);
+    }
+
+    /** A spot radius (m) and, when it was measured from a beam file, that measurement's relative standard error. */
+    private record Spot(double radiusM, double measuredRel) {
+    }
+
+    /**
+     * A spot as a radius or as a beam file (knife-edge table or camera frame, {@link BeamFiles}, the path taken from
+     * the plan file's folder as for {@code irfFile}); exactly one of them. A camera frame needs {@code beamPixelPitch}.
+     */
+    private static Spot spot(Node laser, String radiusKey, String fileKey, double pixelPitchM) {
+        Node radius = laser.optional(radiusKey).orElse(null);
+        Node file = laser.optional(fileKey).orElse(null);
+        if (file == null) {
+            if (radius == null) {
+                throw new InputException(laser.location(), laser.path() + "." + radiusKey, InputProblem.MISSING_FIELD,
+                        "missing required field in '" + laser.path() + "' (add \"" + radiusKey + "\": ... , or \"" + fileKey
+                                + "\": ... with a knife-edge scan or a camera frame)");
+            }
+            return new Spot(radius.positive(Dimension.LENGTH, null), Double.NaN);
+        }
+        if (radius != null) {
+            throw file.error(InputProblem.CONFLICT, "give either '" + radiusKey + "' or '" + fileKey + "', not both (the file "
+                    + "measures the radius)");
+        }
+        if (file.string().isBlank()) {
+            throw file.error(InputProblem.MISSING_VALUE, "expected the path of a knife-edge table or a camera frame");
+        }
+        Path p = SampleCodec.baseDir(Path.of(file.location().file())).resolve(file.string());
+        if (!java.nio.file.Files.isRegularFile(p)) {
+            throw file.error(InputProblem.NOT_FOUND, "beam file not found: " + p + " (relative paths start at the plan file's folder)");
+        }
+        if (Double.isNaN(pixelPitchM) && BeamFiles.isImage(p, file.string())) {
+            throw file.error(InputProblem.MISSING_FIELD, "a camera frame needs the camera's pixel pitch: add \"beamPixelPitch\": "
+                    + "\"5.5 µm\" to 'laser'");
+        }
+        var r = BeamFiles.radius(p, pixelPitchM);
+        return new Spot(r.radiusM(), r.stdErrorM() / r.radiusM());
     }
 
     /** An optional relative uncertainty such as "5 %", NaN when absent. */

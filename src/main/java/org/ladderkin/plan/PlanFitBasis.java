@@ -60,6 +60,22 @@ public record PlanFitBasis(LadderModel base, ModelAssumptions model, double repe
                 wavelengthM, plan.chosenWavelength().crossSectionM2(), top.nProbeAveraged() / top.pulseEnergyJ(), geometry);
     }
 
+    /**
+     * The relative uncertainty of the fluence scale the plan's calibration implies (pulse energy and both radii, as the
+     * fluence series' ⟨N⟩ budget counts them, without σ: a fit measures σ, so its law's scatter is no error of the fit).
+     */
+    public static double fluenceScaleRel(PlanInputs inputs) {
+        CampaignPlan plan = Planner.plan(inputs, Planner.Progress.NONE, false);
+        FluencePoint top = plan.fluences().get(plan.fluences().size() - 1);
+        double sum = 0;
+        for (var item : top.nAvgBudget().items()) {
+            if (!item.source().startsWith("cross-section")) {
+                sum += item.rel() * item.rel();
+            }
+        }
+        return Math.sqrt(sum);
+    }
+
     /** Pulse period at the chosen rate (s). */
     public double periodS() {
         return 1 / repetitionRateHz;

@@ -45,9 +45,10 @@ class DesignErrorBudgetTest {
         double[] nBudget = plan.fluences().stream().mapToDouble(FluencePoint::nAvgRel).toArray();
         assertThat(calibration).isGreaterThan(0.095);
         assertThat(sigma.totalRel()).isGreaterThanOrEqualTo(calibration);
-        // ⟨N⟩ of each point does carry σ's law (20 % default) on top of the calibration
+        // ⟨N⟩ of each point does carry the uncertainty σ's law states at the chosen pump on top of the calibration
+        double sigmaLaw = in.sample().crossSectionAt(plan.chosenWavelength().wavelengthM()).relativeUncertainty();
         for (double r : nBudget) {
-            assertThat(r).isCloseTo(Math.hypot(calibration, Planner.DEFAULT_CROSS_SECTION_REL), org.assertj.core.data.Offset.offset(0.01));
+            assertThat(r).isCloseTo(Math.hypot(calibration, sigmaLaw), org.assertj.core.data.Offset.offset(0.01));
         }
         assertThat(sigma.statisticalRel()).isLessThan(sigma.systematicRel());
         assertThat(sigma.totalRel()).isCloseTo(Math.hypot(sigma.statisticalRel(), sigma.systematicRel()),

@@ -86,8 +86,28 @@ public final class PlanForms {
                     "lowest pump pulse energy that can be set"),
             FieldSpec.quantity("Highest pulse energy", "laser.pulseEnergyRange[1]", Dimension.ENERGY,
                     "highest pump pulse energy available"),
-            FieldSpec.quantity("Pump radius", "laser.pumpRadius", Dimension.LENGTH, "pump 1/e² intensity radius at the sample"),
-            FieldSpec.quantity("Probe radius", "laser.probeRadius", Dimension.LENGTH, "probe 1/e² intensity radius at the sample"));
+            FieldSpec.optionalQuantity("Pump radius", "laser.pumpRadius", Dimension.LENGTH,
+                    "pump 1/e² intensity radius at the sample; blank when a pump beam file measures it"),
+            FieldSpec.file("Pump beam file", "laser.pumpBeamFile", List.of("csv", "tsv", "txt", "png"),
+                    "knife-edge scan or camera frame that measures the pump radius and its uncertainty; choose or drop a file"),
+            FieldSpec.optionalQuantity("Probe radius", "laser.probeRadius", Dimension.LENGTH,
+                    "probe 1/e² intensity radius at the sample; blank when a probe beam file measures it"),
+            FieldSpec.file("Probe beam file", "laser.probeBeamFile", List.of("csv", "tsv", "txt", "png"),
+                    "knife-edge scan or camera frame that measures the probe radius and its uncertainty; choose or drop a file"),
+            FieldSpec.optionalQuantity("Camera pixel pitch", "laser.beamPixelPitch", Dimension.LENGTH,
+                    "needed when a beam file is a camera frame, e.g. 5.5 µm"),
+            FieldSpec.fraction("Pulse-energy uncertainty", "laser.pulseEnergyUncertainty", true,
+                    "relative uncertainty of the pulse energy (power meter); blank: 5 %"),
+            FieldSpec.fraction("Pump-radius uncertainty", "laser.pumpRadiusUncertainty", true,
+                    "relative uncertainty of the pump radius; blank: 5 %, or a beam file's own"),
+            FieldSpec.fraction("Probe-radius uncertainty", "laser.probeRadiusUncertainty", true,
+                    "relative uncertainty of the probe radius; blank: the pump's, or a beam file's own"),
+            FieldSpec.fraction("Cross-section uncertainty", "laser.crossSectionUncertainty", true,
+                    "relative uncertainty of σ at the pump; blank: what σ's law or measurement states"),
+            FieldSpec.fraction("Pump fluctuation", "laser.pumpFluctuation", true,
+                    "rms shot-to-shot fluctuation of the pump per averaged point; blank: the default"),
+            FieldSpec.fraction("Pump drift per hour", "laser.pumpDriftPerHour", true,
+                    "slow drift of the pump between scans; blank: the default"));
 
     /** Goals and limits. */
     public static final List<FieldSpec> GOALS_AND_LIMITS = List.of(

@@ -55,10 +55,14 @@ public final class PlannerPrediction implements PredictionSource {
         out.add(new Prediction.DerivedNumber("photon energy", String.format(Locale.ROOT, "%.3f eV",
                 w.photonEnergyJ() / PhysicalConstants.ELECTRONVOLT_J), "E = hc/λ, hc = 1239.841984 eV·nm"));
         for (FluencePoint f : p.fluences()) {
-            out.add(new Prediction.DerivedNumber(String.format(Locale.ROOT, "pulse energy for ⟨N⟩ = %.3g", f.nProbeAveraged()),
-                    Quantity.formatBest(f.pulseEnergyJ(), Dimension.ENERGY, 4), String.format(Locale.ROOT,
-                    "⟨N⟩ = σ·j averaged over probe and depth; on axis ⟨N⟩ = σ·2E/(πw²)/(hc/λ) = %.3g; j_peak = %.3g photons/cm²",
-                    f.nPeak(), f.photonFluencePeakPerM2() * 1e-4)));
+            double rel = f.nAvgBudget().totalRel();
+            String dominant = f.nAvgBudget().dominant().map(d -> String.format(Locale.ROOT, "; largest: %s (± %.2g %%)",
+                    d.source(), 100 * d.rel())).orElse("");
+            out.add(new Prediction.DerivedNumber(String.format(Locale.ROOT, "pulse energy for ⟨N⟩ = %.3g ± %.2g %%",
+                    f.nProbeAveraged(), 100 * rel), Quantity.formatBest(f.pulseEnergyJ(), Dimension.ENERGY, 4),
+                    String.format(Locale.ROOT, "⟨N⟩ = σ·j averaged over probe and depth; on axis ⟨N⟩ = σ·2E/(πw²)/(hc/λ) = %.3g;"
+                            + " j_peak = %.3g photons/cm²; ⟨N⟩ uncertainty from the pulse energy, both radii and σ%s",
+                    f.nPeak(), f.photonFluencePeakPerM2() * 1e-4, dominant)));
         }
         out.add(new Prediction.DerivedNumber("steady-state temperature rise", String.format(Locale.ROOT, "%.3g K",
                 p.heat().steadyRiseK()), "ΔT = P_heat/(4πκL)·Ein(2R²/w²), P_heat = absorbed power × heat share (" + p.heat().model() + ")"));

@@ -51,6 +51,7 @@ import org.ladderkin.gui.model.PlanForms;
 import org.ladderkin.gui.model.Prediction;
 import org.ladderkin.gui.model.PredictionReport;
 import org.ladderkin.gui.model.PredictionSource;
+import org.ladderkin.gui.model.ErrorBudgetService;
 import org.ladderkin.gui.model.RecomputeService;
 import org.ladderkin.gui.model.RecoveryStore;
 import org.ladderkin.gui.model.UnsavedChanges;
@@ -81,6 +82,9 @@ public final class PlannerFrame extends JFrame {
     private final PlanEditor editor = new PlanEditor();
     private final Autosaver autosaver;
     private final RecomputeService recompute;
+    /** The design search takes seconds: it starts once edits pause this long, so typing does not restart it each key. */
+    private static final long BUDGET_PAUSE_MS = 600;
+    private long budgetRequested;
     private final Timer autosaveTimer;
 
     private final FieldFormPanel sampleForm;
@@ -93,6 +97,9 @@ public final class PlannerFrame extends JFrame {
     private final JTabbedPane centreTabs = new JTabbedPane();
     private final ChartsPanel charts = new ChartsPanel(this::exportChart);
     private final RiskTable risks = new RiskTable();
+    private final ErrorBudgetTable budgetTable = new ErrorBudgetTable();
+    private final JLabel budgetStatus = new JLabel(" ");
+    private final ErrorBudgetService budget;
     private final DerivedPanel derived = new DerivedPanel();
     private final CautionBar cautions = new CautionBar();
     private final JLabel planStatus = new JLabel(" ");
@@ -123,6 +130,7 @@ public final class PlannerFrame extends JFrame {
         this.recovery = recovery;
         this.autosaver = new Autosaver(editor, recovery, Clock.systemUTC());
         this.recompute = new RecomputeService(source, DEBOUNCE_MS, SwingUtilities::invokeLater, this::predictionArrived);
+        this.budget = new ErrorBudgetService(BUDGET_PAUSE_MS, SwingUtilities::invokeLater, this::budgetArrived);
         this.autosaveTimer = new Timer(AUTOSAVE_MS, e -> autosaveTick());
 
         sampleForm = new FieldFormPanel(editor, List.of(new FieldFormPanel.Section("", PlanForms.SAMPLE)));
@@ -147,6 +155,11 @@ public final class PlannerFrame extends JFrame {
         lower.setName("lower");
         lower.addTab("Risks", new JScrollPane(risks));
         lower.addTab("Derived numbers", scroll(derived));
+        JPanel budgetPanel = new JPanel(new java.awt.BorderLayout());
+        budgetStatus.setName("errorBudgetStatus");
+        budgetPanel.add(budgetStatus, java.awt.BorderLayout.NORTH);
+        budgetPanel.add(new JScrollPane(budgetTable), java.awt.BorderLayout.CENTER);
+        lower.addTab("Error budget", budgetPanel);
         // the split starts at the preferred heights: charts get most of the room
         charts.setPreferredSize(new java.awt.Dimension(760, 540));
         lower.setPreferredSize(new java.awt.Dimension(760, 190));
@@ -270,9 +283,26 @@ public final class PlannerFrame extends JFrame {
                 editNanos = System.nanoTime();
                 requested = inputs;
                 recompute.request(inputs);
+                budgetRequested = budget.request(inputs);
+                budgetStatus.setText("computing the optimal design for the plan as edited (the table below is for an earlier version)…");
             });
         }
         updateStatus();
+    }
+
+    private void budgetArrived(ErrorBudgetService.Result result) {
+        if (result.generation() != budgetRequested) {
+            return;
+        }
+        if (result.error() != null) {
+            budgetTable.show(java.util.List.of());
+            budgetStatus.setText("no error budget: " + result.error());
+            return;
+        }
+        budgetTable.show(result.errors());
+        budgetStatus.setText(result.errors().isEmpty() ? "no transient-absorption goal to design for"
+                : "expected errors of the goal parameters with the optimal design (" + result.delayPoints()
+                + " delay points per trace), as in the report; hover a row for what to measure better");
     }
 
     private void predictionArrived(RecomputeService.Result result) {
@@ -450,6 +480,7 @@ public final class PlannerFrame extends JFrame {
         rememberBounds();
         autosaveTimer.stop();
         recompute.close();
+        budget.close();
         fitSession.close();
         try {
             autosaver.discard();

@@ -160,6 +160,30 @@ class PlannerWindowTest {
     }
 
     @Test
+    void theErrorBudgetTabShowsTheDesignsExpectedErrors() {
+        GuiActionRunner.execute(() -> {
+            javax.swing.JTabbedPane lower = window.tabbedPane("lower").target();
+            lower.setSelectedIndex(lower.indexOfTab("Error budget"));
+        });
+        // the design search runs in the background after the live prediction: seconds, more on a loaded machine
+        Pause.pause(new Condition("the error budget") {
+            @Override
+            public boolean test() {
+                return GuiActionRunner.execute(() -> window.table("errorBudget").target().getRowCount() > 0);
+            }
+        }, Timeout.timeout(240_000));
+        var table = window.table("errorBudget");
+        assertThat(table.columnIndexFor("Total")).isEqualTo(3);
+        java.util.List<String> parameters = new java.util.ArrayList<>();
+        for (int r = 0; r < table.rowCount(); r++) {
+            parameters.add(table.valueAt(org.assertj.swing.data.TableCell.row(r).column(0)));
+            assertThat(table.valueAt(org.assertj.swing.data.TableCell.row(r).column(3))).matches("± [0-9.]+(e[-+]?[0-9]+)? %");
+        }
+        assertThat(parameters).contains("cross-section σ");
+        assertThat(window.label("errorBudgetStatus").text()).contains("optimal design");
+    }
+
+    @Test
     void theLaserCautionAndTheRisksAreVisible() {
         assertThat(GuiActionRunner.execute(() -> frame.prediction().cautions())).isNotEmpty();
         assertThat(window.panel("cautions").target().isShowing()).isTrue();
