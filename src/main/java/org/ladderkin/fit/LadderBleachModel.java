@@ -58,18 +58,8 @@ public final class LadderBleachModel implements TraceModel {
     private static final double GL2 = 1 / Math.sqrt(3);
     /** Grid points per FWHM of a measured response on which the ladder is evaluated and interpolated. */
     private static final int IRF_GRID_PER_FWHM = 40;
-    private static final double[] GL_NODES;
-    private static final double[] GL_WEIGHTS;
-
-    static {
-        var rule = new org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory().legendre(24);
-        GL_NODES = new double[rule.getNumberOfPoints()];
-        GL_WEIGHTS = new double[rule.getNumberOfPoints()];
-        for (int i = 0; i < GL_NODES.length; i++) {
-            GL_NODES[i] = rule.getPoint(i);
-            GL_WEIGHTS[i] = rule.getWeight(i);
-        }
-    }
+    private static final double[] GL_NODES = org.ladderkin.observe.GaussLegendre.nodes24();
+    private static final double[] GL_WEIGHTS = org.ladderkin.observe.GaussLegendre.weights24();
 
     private final List<String> kineticKeys;
     private final Function<ParameterValues, KineticModel> ladder;

@@ -208,18 +208,8 @@ public final class DesignSearch {
     private static final double H = 1e-3;
     /** ⟨N⟩ values the traces are computed at; every series is drawn from them, so it is scored at its own values. */
     private static final int CANDIDATES = 49;
-    private static final double[] GL_NODES;
-    private static final double[] GL_WEIGHTS;
-
-    static {
-        var rule = new org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory().legendre(24);
-        GL_NODES = new double[rule.getNumberOfPoints()];
-        GL_WEIGHTS = new double[rule.getNumberOfPoints()];
-        for (int i = 0; i < GL_NODES.length; i++) {
-            GL_NODES[i] = rule.getPoint(i);
-            GL_WEIGHTS[i] = rule.getWeight(i);
-        }
-    }
+    private static final double[] GL_NODES = org.ladderkin.observe.GaussLegendre.nodes24();
+    private static final double[] GL_WEIGHTS = org.ladderkin.observe.GaussLegendre.weights24();
     private static final String SCALE = "occupancyScale";
     private static final String TAU2 = LadderBleachModel.kineticKey(AugerProcess.BIEXCITON_LIFETIME);
     private static final String TAU_RAD = LadderBleachModel.kineticKey(RadiativeProcess.LIFETIME);

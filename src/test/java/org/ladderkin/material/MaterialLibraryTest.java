@@ -73,14 +73,14 @@ class MaterialLibraryTest {
     void valueWithoutSourceIsRejected() throws IOException {
         String t = cdseText().replaceFirst("\"source\": \"from memory \\(room-temperature bulk wurtzite CdSe\\)\"", "\"note\": \"x\"");
         assertThatThrownBy(() -> MaterialCodec.read(JsonTree.parse(t, "CdSe.json")))
-                .hasMessageContaining("field 'bulkGap.source': missing required field in 'bulkGap'");
+                .satisfies(input(InputProblem.MISSING_FIELD, "CdSe.json:6:14", "bulkGap.source"));
     }
 
     @Test
     void nonMonotonicSizingPolynomialIsRefused() throws IOException {
         String t = cdseText().replaceFirst("\"400 nm\",", "\"200 nm\",");
         assertThatThrownBy(() -> MaterialCodec.read(JsonTree.parse(t, "CdSe.json")))
-                .hasMessageContaining("field 'sizing': the sizing polynomial is not a positive, rising function of wavelength");
+                .satisfies(input(InputProblem.INVALID_VALUE, "CdSe.json:34:13", "sizing"));
     }
 
     @Test
