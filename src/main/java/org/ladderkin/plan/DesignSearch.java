@@ -261,6 +261,10 @@ public final class DesignSearch {
                     if (hi > ctx.maxN() * 1.0001 || hi <= lo * 4) {
                         continue;
                     }
+                    if (Thread.currentThread().isInterrupted()) {
+                        // a desktop planner whose plan changed (or whose window closed) no longer wants this design
+                        throw new java.util.concurrent.CancellationException("design search interrupted");
+                    }
                     double[] n = s.series(lo, hi, k);
                     for (int g = 0; g < GRIDS.length; g++) {
                         double o = s.objective(n, g, ctx.errors());

@@ -472,6 +472,17 @@ public final class PlannerFrame extends JFrame {
         prefs.theme(theme);
     }
 
+    /**
+     * Stops the background work with the window, however it goes away (quit, or a caller disposing it): a design search
+     * left running would hold a core for seconds after its window is gone.
+     */
+    @Override
+    public void dispose() {
+        recompute.close();
+        budget.close();
+        super.dispose();
+    }
+
     /** Closes the window after the unsaved-changes question; remembers the layout. */
     public void quit() {
         if (!mayLeave()) {

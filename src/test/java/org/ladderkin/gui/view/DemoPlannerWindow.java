@@ -48,8 +48,15 @@ final class DemoPlannerWindow implements AutoCloseable {
             return f;
         });
         FrameFixture window = new FrameFixture(frame);
-        window.show(new Dimension(1360, 860));
-        PlannerWindowTest.waitFor("first prediction", () -> frame.deliveredCount() >= 1);
+        try {
+            window.show(new Dimension(1360, 860));
+            PlannerWindowTest.waitFor("first prediction", () -> frame.deliveredCount() >= 1);
+        } catch (RuntimeException | Error e) {
+            // the fixture holds the robot's screen lock: release it, or every later window test waits for it forever
+            window.cleanUp();
+            node.removeNode();
+            throw e;
+        }
         return new DemoPlannerWindow(plan, node, prefs, frame, window);
     }
 
