@@ -175,8 +175,8 @@ final class FitCommand implements Callable<Integer> {
         LadderFitSetup setup = new LadderFitSetup(base, repRate == null ? Double.NaN : 1 / positive(repRate, Dimension.FREQUENCY, "--rep-rate"),
                 freed, crossSection == null ? Double.NaN : positive(crossSection, Dimension.AREA, "--cross-section"),
                 Quantity.parseSi(timeZero, Dimension.TIME), irf == null ? Double.NaN : positive(irf, Dimension.TIME, "--irf"),
-                sharedAmplitude, profile, measured, geometry(basis), fluenceUncertainty == null && planFile != null
-                        ? PlanFitBasis.fluenceScaleRel(PlanCodec.read(planFile)) : fraction(fluenceUncertainty));
+                sharedAmplitude, profile, measured, geometry(basis), fluenceUncertainty == null && basis != null
+                        ? basis.fluenceScaleRel() : fraction(fluenceUncertainty));
         if (free == null && !spec.commandLine().getParseResult().hasMatchedOption("--time-zero")) {
             setup = setup.withTimeZeroFreedFor(data);
         }

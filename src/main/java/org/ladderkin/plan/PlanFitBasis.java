@@ -33,9 +33,13 @@ import org.ladderkin.kinetics.state.Charge;
  * @param occupancyPerJ       probe-averaged ⟨N⟩ per joule of pulse energy at that wavelength and rate
  * @param geometry            the plan's pump and probe spots (Gaussian) and the sample's absorbance at the chosen pump
  *                            wavelength, depth-averaged as the planner averages
+ * @param fluenceScaleRel     relative uncertainty of the fluence scale the plan's calibration implies (pulse energy and
+ *                            both radii, as the fluence series' ⟨N⟩ budget counts them, without σ: a fit measures σ,
+ *                            so its law's scatter is no error of the fit)
  */
 public record PlanFitBasis(LadderModel base, ModelAssumptions model, double repetitionRateHz, double pumpWavelengthM,
-                           double crossSectionM2, double occupancyPerJ, ExcitationGeometry geometry) {
+                           double crossSectionM2, double occupancyPerJ, ExcitationGeometry geometry,
+                           double fluenceScaleRel) {
 
     public PlanFitBasis {
         Objects.requireNonNull(base, "base");
@@ -57,16 +61,12 @@ public record PlanFitBasis(LadderModel base, ModelAssumptions model, double repe
                 wavelengthM, plan.chosenRate().repetitionRateHz()), new GaussianBeam(inputs.laser().pumpRadiusM()),
                 new GaussianBeam(inputs.laser().probeRadiusM()), true).geometry();
         return new PlanFitBasis(parameters(plan.model(), g), plan.model(), plan.chosenRate().repetitionRateHz(),
-                wavelengthM, plan.chosenWavelength().crossSectionM2(), top.nProbeAveraged() / top.pulseEnergyJ(), geometry);
+                wavelengthM, plan.chosenWavelength().crossSectionM2(), top.nProbeAveraged() / top.pulseEnergyJ(), geometry,
+                withoutCrossSection(top));
     }
 
-    /**
-     * The relative uncertainty of the fluence scale the plan's calibration implies (pulse energy and both radii, as the
-     * fluence series' ⟨N⟩ budget counts them, without σ: a fit measures σ, so its law's scatter is no error of the fit).
-     */
-    public static double fluenceScaleRel(PlanInputs inputs) {
-        CampaignPlan plan = Planner.plan(inputs, Planner.Progress.NONE, false);
-        FluencePoint top = plan.fluences().get(plan.fluences().size() - 1);
+    /** The ⟨N⟩ budget of {@code top} without σ's share. */
+    private static double withoutCrossSection(FluencePoint top) {
         double sum = 0;
         for (var item : top.nAvgBudget().items()) {
             if (!item.source().startsWith("cross-section")) {
