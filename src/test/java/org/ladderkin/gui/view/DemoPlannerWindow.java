@@ -50,7 +50,8 @@ final class DemoPlannerWindow implements AutoCloseable {
         FrameFixture window = new FrameFixture(frame);
         try {
             window.show(new Dimension(1360, 860));
-            PlannerWindowTest.waitFor("first prediction", () -> frame.deliveredCount() >= 1);
+            // generous: a design search of the previous window may still hold the shared cores for a few seconds
+            PlannerWindowTest.waitFor("first prediction", () -> frame.deliveredCount() >= 1, 60_000);
         } catch (RuntimeException | Error e) {
             // the fixture holds the robot's screen lock: release it, or every later window test waits for it forever
             window.cleanUp();

@@ -297,12 +297,16 @@ class PlannerWindowTest {
     }
 
     static void waitFor(String what, BooleanSupplier condition) {
+        waitFor(what, condition, 10_000);
+    }
+
+    static void waitFor(String what, BooleanSupplier condition, long timeoutMillis) {
         Pause.pause(new Condition(what) {
             @Override
             public boolean test() {
                 return condition.getAsBoolean();
             }
-        }, Timeout.timeout(10_000));
+        }, Timeout.timeout(timeoutMillis));
     }
 
     /** Paints the window (menu bar and content; no title bar under Xvfb) into a PNG under target/screenshots. */
