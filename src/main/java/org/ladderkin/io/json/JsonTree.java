@@ -2,7 +2,6 @@ package org.ladderkin.io.json;
 
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonLocation;
-import com.fasterxml.jackson.core.JsonParseException;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonPointer;
 import com.fasterxml.jackson.core.JsonToken;
@@ -37,8 +36,9 @@ import org.ladderkin.io.SourceLocation;
  */
 public record JsonTree(JsonNode json, SourcePositions positions, String displayName) {
 
+    // the document's text stays out of Jackson's locations and messages: a message names the place, never echoes it
     private static final JsonFactory FACTORY = JsonFactory.builder()
-            .enable(StreamReadFeature.INCLUDE_SOURCE_IN_LOCATION)
+            .disable(StreamReadFeature.INCLUDE_SOURCE_IN_LOCATION)
             .build();
     private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
@@ -100,15 +100,13 @@ public record JsonTree(JsonNode json, SourcePositions positions, String displayN
                         "unexpected content after the end of the document (only one JSON value is allowed)");
             }
             return new JsonTree(root, new SourcePositions(Map.copyOf(table)), displayName);
-        } catch (JsonParseException e) {
-            throw new InputException(at(displayName, e.getLocation()), null, InputProblem.BAD_SYNTAX,
-                    "malformed JSON: " + e.getOriginalMessage());
         } catch (StreamReadException e) {
+            // no cause attached: Jackson's exception carries its processor and the document's text
             throw new InputException(at(displayName, e.getLocation()), null, InputProblem.BAD_SYNTAX,
-                    "malformed JSON: " + e.getOriginalMessage());
+                    "malformed JSON: " + JsonSyntax.describe(e.getOriginalMessage()));
         } catch (IOException e) {
             throw new InputException(SourceLocation.of(displayName), null, InputProblem.UNREADABLE,
-                    "cannot read JSON: " + e.getMessage());
+                    "cannot read the JSON text");
         }
     }
 
