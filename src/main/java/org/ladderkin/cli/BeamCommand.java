@@ -20,6 +20,7 @@ import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Quantity;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -27,17 +28,21 @@ import picocli.CommandLine.Spec;
 
 /** {@code ladderkin beam}: 1/e² radii from knife-edge scans and camera frames, and the caustic through several planes. */
 @Command(name = "beam", mixinStandardHelpOptions = true,
-        description = {"Beam radii for pump and probe spots: knife-edge scans (a table of blade position and power, one",
-            "power column per scan, 'x'/'y' and 'z=1mm' in its header) fitted with the Gaussian's erf profile and checked",
-            "by the 10-90 % rule; camera frames (8/16-bit grayscale PNG, or a pixel matrix as CSV/TSV) by the",
-            "second-moment widths of ISO 11146-1 (D4σ). With radii at several z: the caustic w(z) = w0·√(1+((z−z0)/zR)²),",
-            "and M² = π·w0²/(λ·zR) with --wavelength."},
+        header = "Beam radii from knife-edge scans or camera frames, and M².",
+        description = "Beam radii for pump and probe spots: knife-edge scans (a table of blade position and power, one"
+            + " power column per scan, 'x'/'y' and 'z=1mm' in its header) fitted with the Gaussian's erf profile"
+            + " and checked by the 10-90 %% rule; camera frames (8/16-bit grayscale PNG, or a pixel matrix as"
+            + " CSV/TSV) by the second-moment widths of ISO 11146-1 (D4σ). With radii at several z: the caustic"
+            + " w(z) = w0·√(1+((z−z0)/zR)²), and M² = π·w0²/(λ·zR) with --wavelength.",
         footer = {"", "Example: ladderkin beam cam-z0.png cam-z1.png cam-z2.png cam-z3.png --pixel-pitch 5.5um \\",
             "           --z 0mm,5mm,10mm,15mm --wavelength 400nm"})
 final class BeamCommand implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
+
+    @Mixin
+    QuietOption quiet;
 
     @Parameters(arity = "1..*", paramLabel = "FILE", description = "knife-edge tables, PNG frames or pixel matrices")
     List<Path> files;
@@ -90,7 +95,7 @@ final class BeamCommand implements Callable<Integer> {
             }
         }
         Map<String, CausticFit> caustics = CausticFit.byAxis(planes, lambdaM);
-        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter out = format.equals("json") ? quiet.data() : quiet.summary();
         if (format.equals("json")) {
             out.print(ResolvedJson.toText(json(all, caustics)));
         } else {

@@ -10,6 +10,7 @@ import java.util.function.DoubleSupplier;
 import org.ladderkin.kinetics.KineticModel;
 import org.ladderkin.kinetics.LadderKinetics;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -20,14 +21,19 @@ import picocli.CommandLine.Spec;
  * substitute for JMH: it warms up, then reports the median of repeated runs.
  */
 @Command(name = "bench", mixinStandardHelpOptions = true,
-        description = {"Time the kinetics engine on its four speed cases (31-state ladder, Nmax = 30; 1000 log delays):",
-            "one trace after one pulse; 40-value <N> sweeps with pulse-train steady state at 1 kHz and 80 MHz;",
-            "the cooling-resolved model at Nmax = 20. With --planner PLAN.json also the desktop planner's update after",
-            "an edit (prediction, and prediction plus chart build). Prints ms per case and peak heap used."})
+        header = "Time the kinetics engine on its speed cases.",
+        description = "Time the kinetics engine on its four speed cases (31-state ladder, Nmax = 30; 1000 log delays):"
+            + " one trace after one pulse; 40-value ⟨N⟩ sweeps with pulse-train steady state at 1 kHz and 80"
+            + " MHz; the cooling-resolved model at Nmax = 20. With --planner PLAN.json also the desktop"
+            + " planner's update after an edit (prediction, and prediction plus chart build). Prints ms per case"
+            + " and peak heap used.")
 final class BenchCommand implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
+
+    @Mixin
+    QuietOption quiet;
 
     @Option(names = "--repeats", paramLabel = "N", defaultValue = "15", description = "timed runs per case (default ${DEFAULT-VALUE})")
     int repeats;
@@ -47,7 +53,7 @@ final class BenchCommand implements Callable<Integer> {
         // read the plan first: a bad file should fail before a minute of timing
         PlannerUpdateBench update = plannerPlan == null ? null
                 : new PlannerUpdateBench(org.ladderkin.io.PlanCodec.read(plannerPlan));
-        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter out = quiet.summary();
         resetPeaks();
         KineticModel ladder = BenchCases.ladder31();
         LadderKinetics built = LadderKinetics.on(ladder, ladder.space(30));

@@ -40,16 +40,21 @@ import picocli.CommandLine.Spec;
  * {@code ladderkin excite}: from pulse energy to ⟨N⟩ on the axis and as the probe sees it, and back.
  */
 @Command(name = "excite", mixinStandardHelpOptions = true,
-        description = {"Photon fluence, ⟨N⟩ = σ·j on the pump axis and as the probe sees it (averaged over its spot and",
-            "the sample depth), absorbed fraction and power. With --target-n: the pulse energy giving that ⟨N⟩.",
-            "The sample comes from SAMPLE.json (schema ladderkin.sample/1) or from flags: --material, --diameter",
-            "or --first-peak, --od or --concentration, --path. Radii are 1/e² intensity radii (or use --*-fwhm)."},
+        header = "Fluence and ⟨N⟩ from the pulse, the spots and the sample.",
+        description = "Photon fluence, ⟨N⟩ = σ·j on the pump axis and as the probe sees it (averaged over its spot and"
+            + " the sample depth), absorbed fraction and power. With --target-n: the pulse energy giving that"
+            + " ⟨N⟩. The sample comes from SAMPLE.json (schema ladderkin.sample/1) or from flags: --material,"
+            + " --diameter or --first-peak, --od or --concentration, --path. Radii are 1/e² intensity radii (or"
+            + " use --*-fwhm).",
         footer = {"", "Example: ladderkin excite --material PbSe --diameter 5nm --od 0.3 --path 1mm --pump 800nm \\",
             "           --energy 50nJ --rep-rate 1kHz --pump-radius 100um --probe-radius 40um --target-n 1.5"})
 final class ExciteCommand implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
+
+    @Mixin
+    QuietOption quiet;
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "SAMPLE.json", description = "sample file (or describe it by flags)")
     Path sampleFile;
@@ -183,7 +188,7 @@ final class ExciteCommand implements Callable<Integer> {
             }
         }
         OccupancyUncertainty.Result u = OccupancyUncertainty.of(x, calibrationFlags.calibration().orDefaults(), x.crossSection().relativeUncertainty());
-        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter out = format.equals("json") ? quiet.data() : quiet.summary();
         if (format.equals("json")) {
             ObjectNode root = json(x, targetJ);
             root.set("uncertainty", CalibrationFlags.json(u));

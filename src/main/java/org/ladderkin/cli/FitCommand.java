@@ -51,14 +51,19 @@ import picocli.CommandLine.Spec;
  * fluence series with the exciton ladder, shared parameters free or held, per-trace amplitude and baseline.
  */
 @Command(name = "fit", mixinStandardHelpOptions = true,
-        description = {"Global fit of a transient-absorption fluence series with the exciton ladder.",
-            "DATA: delimited tables, a delay column (unit in the header, e.g. 'delay (ps)') and one column per trace,",
-            "or one file per trace. Each trace's excitation comes from --fluences (in column order) or --traces-json.",
-            "Writes DIR/fit-report.html and DIR/fit-result.json with --out; --format json prints the result."})
+        header = "Global fit of a transient-absorption fluence series.",
+        description = "Global fit of a transient-absorption fluence series with the exciton ladder. DATA: delimited"
+            + " tables, a delay column (unit in the header, e.g. 'delay (ps)') and one column per trace, or one"
+            + " file per trace. Each trace's excitation comes from --fluences (in column order) or"
+            + " --traces-json. Writes DIR/fit-report.html and DIR/fit-result.json with --out; --format json"
+            + " prints the result.")
 final class FitCommand implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
+
+    @Mixin
+    QuietOption quiet;
 
     @Parameters(arity = "1..*", paramLabel = "DATA", description = "trace tables (CSV/TSV)")
     List<Path> dataFiles;
@@ -146,8 +151,6 @@ final class FitCommand implements Callable<Integer> {
     @Option(names = "--format", paramLabel = "text|json", defaultValue = "text", description = "standard output (default ${DEFAULT-VALUE})")
     String format;
 
-    @Option(names = "--quiet", description = "no progress bar")
-    boolean quiet;
 
     @Override
     public Integer call() throws Exception {
@@ -155,6 +158,7 @@ final class FitCommand implements Callable<Integer> {
             throw new IllegalArgumentException("--format must be text or json, was " + format);
         }
         if (outDir != null) {
+            AtomicFiles.checkWritableFolder(outDir);
             org.ladderkin.report.Charts.warmUpInBackground();
         }
         if (irf != null && irfFile != null) {
@@ -181,17 +185,17 @@ final class FitCommand implements Callable<Integer> {
             setup = setup.withTimeZeroFreedFor(data);
         }
         PrintWriter err = spec.commandLine().getErr();
-        if (base.has(CoolingProcess.LIFETIME) && !quiet) {
+        if (base.has(CoolingProcess.LIFETIME) && !quiet.on()) {
             // a hot-resolved ladder has hundreds of states at ⟨N⟩ ≈ 5 and every trial of τ₂ rebuilds it
             err.println("note: the model resolves hot excitons (cooling), which makes every fit step slow (minutes); "
                     + "for delays beyond a few ps fit without the cooling process");
             err.flush();
         }
-        LadderFit.Outcome outcome = LadderFit.fit(data, setup, quiet ? FitProgress.NONE : progress(err));
+        LadderFit.Outcome outcome = LadderFit.fit(data, setup, quiet.on() ? FitProgress.NONE : progress(err));
         FitResult r = outcome.result();
         PlanComparison comparison = planFile == null || !r.ok() ? null : PlanComparison.of(planFile, outcome);
         ObjectNode json = FitResultJson.of(data, outcome, comparison == null ? null : comparison.json());
-        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter out = format.equals("json") ? quiet.data() : quiet.summary();
         if (outDir != null) {
             Files.createDirectories(outDir);
             ResolvedJson.write(outDir.resolve("fit-result.json"), json);

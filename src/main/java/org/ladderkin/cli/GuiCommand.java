@@ -9,20 +9,25 @@ import org.ladderkin.io.InputException;
 import org.ladderkin.io.InputProblem;
 import org.ladderkin.io.SourceLocation;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code ladderkin gui [PLAN.json]}: the desktop planner. */
 @Command(name = "gui", mixinStandardHelpOptions = true,
-        description = {"Open the desktop planner on a campaign plan (default: the bundled demo plan",
-            "experiments-plan/cdse-auger-1khz.plan.json). Needs a display."})
+        header = "Open the desktop planner on a campaign plan.",
+        description = "Open the desktop planner on a campaign plan (default: the bundled demo plan"
+            + " experiments-plan/cdse-auger-1khz.plan.json). Needs a display.")
 final class GuiCommand implements Callable<Integer> {
 
     static final String DEMO_PLAN = "experiments-plan/cdse-auger-1khz.plan.json";
 
     @Spec
     CommandSpec spec;
+
+    @Mixin
+    QuietOption quiet;
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "PLAN.json", description = "campaign plan file to open")
     Path planFile;

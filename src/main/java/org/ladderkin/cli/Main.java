@@ -1,6 +1,7 @@
 package org.ladderkin.cli;
 
 import java.io.PrintWriter;
+import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -10,21 +11,22 @@ import picocli.CommandLine.Spec;
 @Command(name = "ladderkin",
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
-        description = {
-            "Plan and analyse pump-probe and time-resolved PL campaigns on semiconductor nanocrystals:",
-            "multiexciton kinetics, fluence series, risks and global fits."},
+        description = "Plan and analyse pump-probe and time-resolved PL campaigns on semiconductor nanocrystals: "
+            + "multiexciton kinetics, fluence series, risks and global fits.",
         subcommands = {PlanCommand.class, SimulateCommand.class, FitCommand.class, ExciteCommand.class, BeamCommand.class, MaterialsCommand.class,
             GuiCommand.class, BenchCommand.class, CommandLine.HelpCommand.class},
         footer = {"", "Quantities take units as written in the lab: 50 ps, 1 kHz, 2.5 µJ (or uJ), 0.3 mJ/cm², 400 nm.",
             "Exit codes: 0 ok, 2 bad command line, 3 bad input, 4 cannot write output, 1 internal error."})
-public final class Main implements Runnable {
+public final class Main implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
 
+    /** No command given: a script that forgot its command must not pass, so the usage goes to stderr with code 2. */
     @Override
-    public void run() {
-        spec.commandLine().usage(spec.commandLine().getOut());
+    public Integer call() {
+        spec.commandLine().usage(spec.commandLine().getErr());
+        return ExitCodes.USAGE;
     }
 
     /** A configured command line, used by {@link #main} and by tests with captured streams. */
@@ -33,6 +35,7 @@ public final class Main implements Runnable {
         cmd.setOut(out);
         cmd.setErr(err);
         cmd.setExecutionExceptionHandler(new ErrorReporter());
+        cmd.setParameterExceptionHandler(new UsageErrorReporter());
         cmd.setExitCodeExceptionMapper(ex -> ExitCodes.USAGE);
         cmd.setCaseInsensitiveEnumValuesAllowed(true);
         return cmd;

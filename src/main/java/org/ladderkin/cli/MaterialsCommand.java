@@ -12,18 +12,23 @@ import org.ladderkin.sample.Matrix;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.PhysicalConstants;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code ladderkin materials [KEY]}: lists the material library, or shows one material with every value's source. */
 @Command(name = "materials", mixinStandardHelpOptions = true,
-        description = {"List the materials and hosts in models/, or show one with every value and its source.",
-            "Values marked 'from memory' or 'common practice' are defaults to replace with your own."})
+        header = "List the materials and hosts, or show one with its sources.",
+        description = "List the materials and hosts in models/, or show one with every value and its source. Values"
+            + " marked 'from memory' or 'common practice' are defaults to replace with your own.")
 final class MaterialsCommand implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
+
+    @Mixin
+    QuietOption quiet;
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "KEY", description = "material or host key, e.g. CdSe or toluene")
     String key;
@@ -31,7 +36,7 @@ final class MaterialsCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         MaterialLibrary lib = MaterialLibrary.fromHome();
-        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter out = quiet.summary();
         if (key == null) {
             list(lib, out);
         } else if (lib.materials().stream().anyMatch(m -> m.key().equalsIgnoreCase(key))) {

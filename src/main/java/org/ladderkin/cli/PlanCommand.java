@@ -21,6 +21,7 @@ import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Photon;
 import org.ladderkin.units.Quantity;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -28,12 +29,17 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code ladderkin plan PLAN.json --out DIR}: plans a campaign and writes the report. */
 @Command(name = "plan", mixinStandardHelpOptions = true,
-        description = {"Turn a campaign plan (schema ladderkin.plan/1) into settings, predicted signals and a risk table.",
-            "Writes DIR/report.html, DIR/plan-resolved.json (every input and derived number with its unit) and DIR/traces.csv."})
+        header = "Plan a campaign: settings, predicted signals, risks and a report.",
+        description = "Turn a campaign plan (schema ladderkin.plan/1) into settings, predicted signals and a risk"
+            + " table. Writes DIR/report.html, DIR/plan-resolved.json (every input and derived number with its"
+            + " unit) and DIR/traces.csv.")
 final class PlanCommand implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
+
+    @Mixin
+    QuietOption quiet;
 
     @Parameters(index = "0", paramLabel = "PLAN.json", description = "campaign plan file")
     Path planFile;
@@ -45,18 +51,17 @@ final class PlanCommand implements Callable<Integer> {
             + "(repeatable): refresh=static|stirred|flowing:<flow>:<cell volume>, rate=<frequency>"})
     List<String> whatIfs = new ArrayList<>();
 
-    @Option(names = "--quiet", description = "no progress bar")
-    boolean quiet;
 
     @Override
     public Integer call() throws Exception {
         if (outDir != null) {
+            AtomicFiles.checkWritableFolder(outDir);
             org.ladderkin.report.Charts.warmUpInBackground();
         }
         PlanInputs inputs = PlanCodec.read(planFile);
-        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter out = quiet.summary();
         printSummary(inputs, out);
-        CampaignPlan plan = Planner.plan(inputs, quiet ? Planner.Progress.NONE : new ProgressBar(spec.commandLine().getErr()));
+        CampaignPlan plan = Planner.plan(inputs, quiet.on() ? Planner.Progress.NONE : new ProgressBar(spec.commandLine().getErr()));
         printSettings(plan, out);
         List<WhatIf> variants = whatIfs.stream().map(w -> WhatIf.of(inputs, w, WhatIfArgument.parse(w))).toList();
         for (var v : variants) {

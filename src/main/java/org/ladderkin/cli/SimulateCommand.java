@@ -31,19 +31,24 @@ import picocli.CommandLine.Spec;
  * {@code --rep-rate}). The model comes from a file or entirely from flags.
  */
 @Command(name = "simulate", mixinStandardHelpOptions = true,
-        description = {"Band-edge bleach (normalised to one filled level) and PL rate (photons/s per dot) after a pump pulse,",
-            "for each <N>, in the periodic steady state of the pulse train when --rep-rate is given.",
-            "The model is MODEL.json (schema ladderkin.model/1) or built from the model flags (--tau-rad ... --degeneracy)."})
+        header = "Bleach and PL traces of the exciton ladder for given ⟨N⟩.",
+        description = "Band-edge bleach (normalised to one filled level) and PL rate (photons/s per dot) after a pump"
+            + " pulse, for each ⟨N⟩, in the periodic steady state of the pulse train when --rep-rate is given."
+            + " The model is MODEL.json (schema ladderkin.model/1) or built from the model flags (--tau-rad ..."
+            + " --degeneracy).")
 final class SimulateCommand implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
 
+    @Mixin
+    QuietOption quiet;
+
     @Parameters(index = "0", arity = "0..1", paramLabel = "MODEL.json", description = "model file (omit to build the model from flags)")
     Path modelFile;
 
     @Option(names = "--n-avg", split = ",", paramLabel = "N", defaultValue = "1",
-            description = "mean excitons per dot per pulse <N> (with --multiplication-eta: mean absorbed photons), comma list")
+            description = "mean excitons per dot per pulse ⟨N⟩ (with --multiplication-eta: mean absorbed photons), comma list")
     List<String> nAvg;
 
     @Option(names = "--rep-rate", paramLabel = "FREQ", description = "pulse repetition rate, e.g. 1kHz; omit for a single pulse on fresh dots")
@@ -133,7 +138,7 @@ final class SimulateCommand implements Callable<Integer> {
             states.add(ss);
             columns.add(SimulatedObservables.columns(observables, nAvg.get(i).trim(), kinetics, p, after, delaysS, extra));
         }
-        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter out = quiet.data();
         if (format.equals("csv")) {
             writeCsv(out, delaysS, columns);
         } else {

@@ -7,8 +7,12 @@ import java.io.Writer;
 import java.nio.channels.Channels;
 import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.AccessDeniedException;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.FileSystemException;
 import java.nio.file.Files;
+import java.nio.file.NotDirectoryException;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
@@ -75,6 +79,35 @@ public final class AtomicFiles {
                 ? Files.getPosixFilePermissions(target)
                 : java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--");
         Files.setPosixFilePermissions(tmp, perms);
+    }
+
+    /**
+     * Makes sure files can be written into {@code dir} (creating it when missing) the way {@link #write} writes them,
+     * so a caller can find an unusable output folder before the work whose results go there, not after it.
+     *
+     * @throws IOException with a one-line message that names {@code dir} and what is in the way
+     */
+    public static void checkWritableFolder(Path dir) throws IOException {
+        Path absolute = dir.toAbsolutePath();
+        try {
+            if (Files.exists(absolute) && !Files.isDirectory(absolute)) {
+                throw new IOException(dir + ": is a file, not a folder");
+            }
+            Files.createDirectories(absolute);
+            Files.delete(Files.createTempFile(absolute, ".ladderkin-write-check.", ".tmp"));
+        } catch (FileSystemException e) {
+            throw new IOException(dir + ": " + reason(e), e);
+        }
+    }
+
+    private static String reason(FileSystemException e) {
+        if (e instanceof AccessDeniedException) {
+            return "permission denied" + (e.getFile() == null ? "" : " (" + e.getFile() + ")");
+        }
+        if (e instanceof FileAlreadyExistsException || e instanceof NotDirectoryException) {
+            return "a file is in the way" + (e.getFile() == null ? "" : " (" + e.getFile() + " is not a folder)");
+        }
+        return e.getReason() != null ? e.getReason().toLowerCase(java.util.Locale.ROOT) : "cannot write here";
     }
 
     /** Replaces {@code target} with UTF-8 text, or leaves it untouched on failure. */
