@@ -1,20 +1,15 @@
 package org.ladderkin.io;
 
-import java.io.IOException;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.ladderkin.sample.AbsorptionSpectrum;
 
 /**
- * Reads a measured absorption spectrum: a CSV file whose first line that is not a {@code #} comment is the header
- * {@code wavelength_nm,absorbance}, then one {@code wavelength,absorbance} pair per line. Wavelengths may rise or fall
- * (spectrometers export both) but must not repeat. Problems are reported as {@code FILE:LINE: what is wrong}.
+ * Reads a measured absorption spectrum: a table whose first content line is the header
+ * {@code wavelength_nm,absorbance}, then one {@code wavelength,absorbance} pair per line. Delimiters, quotes, comments
+ * and decimal commas as in {@link DelimitedLineReader}. Wavelengths may rise or fall (spectrometers export both) but
+ * must not repeat. Problems are reported as {@code FILE:LINE:COLUMN: what is wrong}.
  */
 public final class AbsorptionSpectrumCsv {
 
@@ -26,56 +21,54 @@ public final class AbsorptionSpectrumCsv {
 
     /** Reads {@code file}; {@code displayName} names it in messages. */
     public static AbsorptionSpectrum read(Path file, String displayName) {
-        List<String> lines;
-        try {
-            lines = List.of(StandardCharsets.UTF_8.newDecoder().decode(java.nio.ByteBuffer.wrap(Files.readAllBytes(file)))
-                    .toString().split("\\R", -1));
-        } catch (NoSuchFileException e) {
-            throw new InputException(SourceLocation.of(displayName), null, InputProblem.NOT_FOUND, "file not found");
-        } catch (CharacterCodingException e) {
-            throw new InputException(SourceLocation.of(displayName), null, InputProblem.UNREADABLE, "not UTF-8 text (save the file as UTF-8)");
-        } catch (IOException e) {
-            throw new InputException(SourceLocation.of(displayName), null, InputProblem.UNREADABLE, "cannot read file: " + e.getMessage());
+        try (DelimitedLineReader in = DelimitedLineReader.open(file, displayName)) {
+            return read(in);
         }
-        return parse(lines, displayName);
     }
 
     /** Parses the lines of a spectrum file. */
     public static AbsorptionSpectrum parse(List<String> lines, String displayName) {
-        boolean headerSeen = false;
+        try (DelimitedLineReader in = DelimitedLineReader.of(String.join("\n", lines), displayName)) {
+            return read(in);
+        }
+    }
+
+    private static AbsorptionSpectrum read(DelimitedLineReader in) {
+        String displayName = in.file();
+        String header = in.nextContentLine();
+        if (header == null) {
+            throw at(displayName, Math.max(1, in.lineNumber()), InputProblem.EMPTY, "no header '" + HEADER + "' found (empty file?)");
+        }
+        in.detectDelimiter(header);
+        String[] names = new String[2];
+        int headerCells = in.split(header, names, new int[2]);
+        if (headerCells != 2 || !names[0].strip().equalsIgnoreCase("wavelength_nm") || !names[1].strip().equalsIgnoreCase("absorbance")) {
+            throw at(displayName, in.lineNumber(), InputProblem.MISSING_FIELD, "expected the header '" + HEADER + "', found '"
+                    + header.strip() + "'");
+        }
         List<double[]> points = new ArrayList<>();
         List<Integer> lineOf = new ArrayList<>();
-        for (int i = 0; i < lines.size(); i++) {
-            String raw = lines.get(i);
-            String line = (i == 0 && raw.startsWith("\uFEFF") ? raw.substring(1) : raw).strip();
-            int lineNo = i + 1;
-            if (line.isEmpty() || line.startsWith("#")) {
-                continue;
+        int[] from = new int[2];
+        int[] to = new int[2];
+        String line;
+        while ((line = in.nextContentLine()) != null) {
+            int lineNo = in.lineNumber();
+            int cells = in.bounds(line, from, to);
+            if (cells != 2) {
+                throw at(displayName, lineNo, InputProblem.BAD_SYNTAX, "expected two values 'wavelength_nm" + in.delimiter()
+                        + "absorbance', found " + cells);
             }
-            if (!headerSeen) {
-                if (!line.replace(" ", "").toLowerCase(Locale.ROOT).equals(HEADER)) {
-                    throw at(displayName, lineNo, InputProblem.MISSING_FIELD, "expected the header '" + HEADER + "', found '" + line + "'");
-                }
-                headerSeen = true;
-                continue;
-            }
-            String[] cells = line.split(",", -1);
-            if (cells.length != 2) {
-                throw at(displayName, lineNo, InputProblem.BAD_SYNTAX, "expected two values 'wavelength_nm,absorbance', found " + cells.length);
-            }
-            double w = number(cells[0], displayName, lineNo, "wavelength");
-            double a = number(cells[1], displayName, lineNo, "absorbance");
+            double w = finite(in, in.number(line, from[0], to[0], "wavelength"), from[0], "wavelength");
+            double a = finite(in, in.number(line, from[1], to[1], "absorbance"), from[1], "absorbance");
             if (!(w > 0)) {
-                throw at(displayName, lineNo, InputProblem.OUT_OF_RANGE, "wavelength must be > 0 nm, was " + cells[0].strip());
+                throw new InputException(in.here(from[0] + 1), "wavelength", InputProblem.OUT_OF_RANGE, "must be > 0 nm, was "
+                        + line.substring(from[0], to[0]).strip());
             }
             points.add(new double[] {w / 1e9, a});
             lineOf.add(lineNo);
         }
-        if (!headerSeen) {
-            throw at(displayName, Math.max(1, lines.size()), InputProblem.EMPTY, "no header '" + HEADER + "' found (empty file?)");
-        }
         if (points.size() < 2) {
-            throw at(displayName, Math.max(1, lines.size()), InputProblem.EMPTY, "needs at least two data lines, found " + points.size());
+            throw at(displayName, in.lineNumber(), InputProblem.EMPTY, "needs at least two data lines, found " + points.size());
         }
         boolean falling = points.get(1)[0] < points.get(0)[0];
         for (int i = 1; i < points.size(); i++) {
@@ -96,17 +89,12 @@ public final class AbsorptionSpectrumCsv {
         return new AbsorptionSpectrum(w, a, displayName);
     }
 
-    private static double number(String cell, String file, int line, String what) {
-        String s = cell.strip();
-        try {
-            double v = Double.parseDouble(s);
-            if (!Double.isFinite(v)) {
-                throw at(file, line, InputProblem.OUT_OF_RANGE, what + " must be a finite number, was '" + s + "'");
-            }
-            return v;
-        } catch (NumberFormatException e) {
-            throw at(file, line, InputProblem.BAD_NUMBER, what + " is not a number: '" + s + "'");
+    private static double finite(DelimitedLineReader in, double v, int from, String what) {
+        if (Double.isNaN(v)) {
+            throw new InputException(in.here(from + 1), what, InputProblem.MISSING_VALUE, "missing value (every line needs "
+                    + "a wavelength and an absorbance)");
         }
+        return v;
     }
 
     private static String fmt(double m) {

@@ -13,8 +13,10 @@ import java.nio.file.Path;
 /**
  * Streams the content lines of a delimited text table one at a time: a UTF-8 byte-order mark is removed, blank lines
  * and comment lines (starting with {@code #} or {@code %}) are skipped, and line numbers are kept for messages.
- * Cells are split on the delimiter detected from the header line (tab, then semicolon, then comma); with tab or
- * semicolon delimiters a decimal comma ("1,5") is read as a decimal point. Nothing holds more than one line.
+ * Cells are split on the delimiter detected from the header line (tab, then semicolon, then comma, else runs of
+ * spaces); with any delimiter but the comma a decimal comma ("1,5") is read as a decimal point. A cell in double
+ * quotes may hold the delimiter ({@code "F1, 2 nJ"}) and a doubled quote stands for one; a quoted cell ends on its
+ * own line. This is the one tokenizer for every table ladderkin reads. Nothing holds more than one line.
  */
 final class DelimitedLineReader implements AutoCloseable {
 
@@ -22,11 +24,18 @@ final class DelimitedLineReader implements AutoCloseable {
     private final String file;
     private int lineNumber;
     private char delimiter;
+    /** Cells are separated by runs of spaces (and tabs), leading and trailing ones ignored. */
+    private boolean whitespace;
     private boolean first = true;
 
     private DelimitedLineReader(BufferedReader in, String file) {
         this.in = in;
         this.file = file;
+    }
+
+    /** Reads text already in memory (a test, or a caller that holds the lines), naming it {@code displayName}. */
+    static DelimitedLineReader of(String text, String displayName) {
+        return new DelimitedLineReader(new BufferedReader(new java.io.StringReader(text)), displayName);
     }
 
     /** Opens {@code path}, naming it {@code displayName} in messages. */
@@ -87,48 +96,71 @@ final class DelimitedLineReader implements AutoCloseable {
         }
     }
 
-    /** Chooses the delimiter from the header line: tab, then semicolon, then comma. */
+    /**
+     * Chooses the delimiter from the header line, outside quoted cells: tab, then semicolon, then comma, else runs of
+     * spaces between words.
+     */
     void detectDelimiter(String headerLine) {
-        if (headerLine.indexOf('\t') >= 0) {
+        boolean tab = false;
+        boolean semicolon = false;
+        boolean comma = false;
+        boolean gap = false;
+        boolean quoted = false;
+        String t = headerLine.strip();
+        for (int i = 0; i < t.length(); i++) {
+            char c = t.charAt(i);
+            if (c == '"') {
+                quoted = !quoted;
+            } else if (!quoted) {
+                tab |= c == '\t';
+                semicolon |= c == ';';
+                comma |= c == ',';
+                gap |= c == ' ';
+            }
+        }
+        whitespace = false;
+        if (tab) {
             delimiter = '\t';
-        } else if (headerLine.indexOf(';') >= 0) {
+        } else if (semicolon) {
             delimiter = ';';
-        } else if (headerLine.indexOf(',') >= 0) {
+        } else if (comma) {
             delimiter = ',';
+        } else if (gap) {
+            delimiter = ' ';
+            whitespace = true;
         } else {
-            throw new InputException(here(0), null, InputProblem.BAD_SYNTAX,
-                    "cannot find the column delimiter in the header line (separate columns with comma, semicolon or tab)");
+            throw new InputException(here(0), null, InputProblem.BAD_SYNTAX, "cannot find the column delimiter in the header "
+                    + "line (separate columns with comma, semicolon, tab or spaces)");
         }
     }
 
     /**
-     * Splits {@code line} into at most {@code cells.length} cells; writes each cell's 1-based start column into
-     * {@code starts}. Returns the number of cells found (which may exceed the array length: the caller reports it).
+     * Splits {@code line} into at most {@code cells.length} cells, quotes removed and doubled quotes made single;
+     * writes each cell's 1-based start column into {@code starts}. Returns the number of cells found (which may
+     * exceed the array length: the caller reports it).
      */
     int split(String line, String[] cells, int[] starts) {
-        int n = 0;
-        int from = 0;
-        int len = line.length();
-        while (true) {
-            int at = line.indexOf(delimiter, from);
-            int end = at < 0 ? len : at;
-            if (n < cells.length) {
-                cells[n] = line.substring(from, end);
-                starts[n] = from + 1;
-            }
-            n++;
-            if (at < 0) {
-                return n;
-            }
-            from = at + 1;
+        int[] from = new int[cells.length];
+        int[] to = new int[cells.length];
+        boolean[] quoted = new boolean[cells.length];
+        int n = scan(line, from, to, starts, quoted);
+        for (int c = 0; c < Math.min(n, cells.length); c++) {
+            String text = line.substring(from[c], to[c]);
+            cells[c] = quoted[c] ? text.replace("\"\"", "\"") : text;
+            starts[c]++;
         }
+        return n;
     }
 
     /**
-     * Finds the cell boundaries of {@code line} without copying: cell c is {@code line[from[c], to[c])}. Returns the
-     * number of cells found (which may exceed the array length: the caller reports it).
+     * Finds the cell boundaries of {@code line} without copying: cell c is {@code line[from[c], to[c])}, inside the
+     * quotes for a quoted cell. Returns the number of cells found (which may exceed the array length: the caller
+     * reports it).
      */
     int bounds(String line, int[] from, int[] to) {
+        if (whitespace || line.indexOf('"') >= 0) {
+            return scan(line, from, to, null, null);
+        }
         int n = 0;
         int start = 0;
         int len = line.length();
@@ -147,6 +179,117 @@ final class DelimitedLineReader implements AutoCloseable {
         }
     }
 
+    /** Number of cells in {@code line}. */
+    int count(String line) {
+        return scan(line, new int[0], new int[0], null, null);
+    }
+
+    /**
+     * The tokenizer: cell c's text is {@code line[from[c], to[c])} (inside the quotes when {@code quoted[c]}), its
+     * first character at 0-based {@code starts[c]}; {@code starts} and {@code quoted} may be null.
+     */
+    private int scan(String line, int[] from, int[] to, int[] starts, boolean[] quoted) {
+        int len = line.length();
+        int i = 0;
+        int n = 0;
+        if (whitespace) {
+            i = skipBlanks(line, 0);
+            if (i == len) {
+                return 0;
+            }
+        }
+        while (true) {
+            int cellStart = i;
+            int j = whitespace ? i : skipSpaces(line, i);
+            int cellFrom;
+            int cellTo;
+            boolean isQuoted = j < len && line.charAt(j) == '"';
+            if (isQuoted) {
+                int close = closingQuote(line, j);
+                cellFrom = j + 1;
+                cellTo = close;
+                i = close + 1;
+                int after = whitespace ? i : skipSpaces(line, i);
+                if (after < len && !(whitespace ? isBlank(line.charAt(after)) : line.charAt(after) == delimiter)) {
+                    throw new InputException(here(after + 1), null, InputProblem.BAD_SYNTAX, "text after the closing quote "
+                            + "of the cell that starts at column " + (j + 1) + " (a quoted cell ends at its quote; "
+                            + "write a quote inside it as \"\")");
+                }
+                i = after;
+            } else {
+                int end = i;
+                if (whitespace) {
+                    while (end < len && !isBlank(line.charAt(end))) {
+                        end++;
+                    }
+                } else {
+                    int at = line.indexOf(delimiter, i);
+                    end = at < 0 ? len : at;
+                }
+                cellFrom = cellStart;
+                cellTo = end;
+                i = end;
+            }
+            if (n < from.length) {
+                from[n] = cellFrom;
+                to[n] = cellTo;
+                if (starts != null) {
+                    starts[n] = cellStart;
+                }
+                if (quoted != null) {
+                    quoted[n] = isQuoted;
+                }
+            }
+            n++;
+            if (whitespace) {
+                i = skipBlanks(line, i);
+                if (i == len) {
+                    return n;
+                }
+            } else {
+                if (i >= len) {
+                    return n;
+                }
+                i++;
+            }
+        }
+    }
+
+    /** The index of the quote that closes the cell opened at {@code open}, skipping doubled quotes. */
+    private int closingQuote(String line, int open) {
+        int k = open + 1;
+        while (true) {
+            int q = line.indexOf('"', k);
+            if (q < 0) {
+                throw new InputException(here(open + 1), null, InputProblem.BAD_SYNTAX, "the quoted cell that starts here "
+                        + "is not closed on this line (close it with \"; a quoted cell cannot span lines)");
+            }
+            if (q + 1 < line.length() && line.charAt(q + 1) == '"') {
+                k = q + 2;
+            } else {
+                return q;
+            }
+        }
+    }
+
+    private static int skipSpaces(String line, int i) {
+        while (i < line.length() && line.charAt(i) == ' ') {
+            i++;
+        }
+        return i;
+    }
+
+    private static int skipBlanks(String line, int i) {
+        while (i < line.length() && isBlank(line.charAt(i))) {
+            i++;
+        }
+        return i;
+    }
+
+    private static boolean isBlank(char c) {
+        return c == ' ' || c == '\t';
+    }
+
     /** The number in {@code line[from, to)}: the exact fast path for plain decimals, else {@link #number(String, int, String)}. */
     double number(String line, int from, int to, String field) {
         int a = from;
@@ -162,17 +305,6 @@ final class DelimitedLineReader implements AutoCloseable {
         }
         double v = DecimalParser.tryParse(line, a, b, delimiter != ',');
         return Double.isNaN(v) ? number(line.substring(from, to), from + 1, field) : v;
-    }
-
-    /** Number of cells in {@code line}. */
-    int count(String line) {
-        int n = 1;
-        for (int i = 0; i < line.length(); i++) {
-            if (line.charAt(i) == delimiter) {
-                n++;
-            }
-        }
-        return n;
     }
 
     /** Whether {@code cell} spells a missing value: empty, NaN, nan, NA, N/A. */
@@ -198,8 +330,9 @@ final class DelimitedLineReader implements AutoCloseable {
         }
         if (!looksNumeric(t)) {
             throw new InputException(here(column), field, InputProblem.BAD_NUMBER, "'" + cell.strip() + "' is not a number"
-                    + (delimiter == ',' && t.indexOf(',') >= 0 ? " (a decimal comma needs ';' or tab as the delimiter)" : "")
-                    + " (write a number such as 1.5e-3, or leave the cell empty / NaN for a missing value)");
+                    + (delimiter == ',' && t.indexOf(',') >= 0 && looksNumeric(t.replace(',', '.'))
+                    ? ": a decimal comma needs ';', tab or spaces as the column delimiter (or write a decimal point)"
+                    : " (write a number such as 1.5e-3, or leave the cell empty / NaN for a missing value)"));
         }
         try {
             double v = Double.parseDouble(t);

@@ -32,13 +32,13 @@ class AbsorptionSpectrumCsvTest {
         assertThatThrownBy(() -> parse("wavelength_nm,absorbance\n400,0.5\n450;0.3\n"))
                 .satisfies(input(InputProblem.BAD_SYNTAX, "a.csv:3", null));
         assertThatThrownBy(() -> parse("wavelength_nm,absorbance\n400,0.5\n450,abc\n"))
-                .satisfies(input(InputProblem.BAD_NUMBER, "a.csv:3", null));
+                .satisfies(input(InputProblem.BAD_NUMBER, "a.csv:3:5", "absorbance"));
         assertThatThrownBy(() -> parse("wavelength_nm,absorbance\n400,0.5\n450,0.4\n450,0.3\n"))
                 .satisfies(input(InputProblem.BAD_ORDER, "a.csv:4", null));
         assertThatThrownBy(() -> parse("wavelength_nm,absorbance\n400,0.5\n"))
-                .satisfies(input(InputProblem.EMPTY, "a.csv:3", null));
+                .satisfies(input(InputProblem.EMPTY, "a.csv:2", null));
         assertThatThrownBy(() -> parse("wavelength_nm,absorbance\n-400,0.5\n450,0.3\n"))
-                .satisfies(input(InputProblem.OUT_OF_RANGE, "a.csv:2", null));
+                .satisfies(input(InputProblem.OUT_OF_RANGE, "a.csv:2:1", "wavelength"));
     }
 
     @Test

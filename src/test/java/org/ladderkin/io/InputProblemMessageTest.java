@@ -104,7 +104,7 @@ class InputProblemMessageTest {
     void badNumber() {
         renders(InputProblem.BAD_NUMBER, () -> AbsorptionSpectrumCsv.parse(
                         List.of("wavelength_nm,absorbance", "400,0.5", "450,abc"), "a.csv"),
-                "a.csv:3: absorbance is not a number: 'abc'");
+                "a.csv:3:5: field 'absorbance': 'abc' is not a number (write a number such as 1.5e-3, or leave the cell empty / NaN for a missing value)");
     }
 
     @Test

@@ -133,7 +133,7 @@ class TraceTableReaderTest {
                 Arguments.of("non-numeric cell", "delay (ps),a\n0,1\n1,abc\n2,0.5\n",
                         "data.csv:3:3: field 'a': 'abc' is not a number"),
                 Arguments.of("decimal comma with comma delimiter", "delay (ps),a\n0,1\n1,\"0,5\"\n2,0.5\n",
-                        "data.csv:3: row has 3 cells but the header at line 1 has 2"),
+                        "data.csv:3:4: field 'a': '0,5' is not a number: a decimal comma needs ';', tab or spaces as the column delimiter"),
                 Arguments.of("unsorted delays", "delay (ps),a\n0,1\n2,0.5\n1,0.7\n",
                         "data.csv:4:1: field 'delay (ps)': delay 1 ps is smaller than 2 ps at line 3"),
                 Arguments.of("duplicate delays", "delay (ps),a\n0,1\n1,0.5\n1,0.7\n",
