@@ -86,6 +86,10 @@ final class PlanCommand implements Callable<Integer> {
         out.println("  pump        " + fmt(w.wavelengthM(), Dimension.LENGTH) + "  (" + String.join("; ", w.reasons()) + ")");
         var r = plan.chosenRate();
         out.println("  rate        " + fmt(r.repetitionRateHz(), Dimension.FREQUENCY) + "  (picker ÷" + r.division() + ")");
+        out.println(String.format(java.util.Locale.ROOT, "  at the top  ⟨N⟩ = %.4g (%s): residual %.3g, charged %.3g, "
+                        + "steady rise %.3g K", r.nAvgProbeWeighted(), fmt(r.pulseEnergyJ(), Dimension.ENERGY), r.residual(),
+                r.charged(), r.steadyRiseK()));
+        out.println("              " + plan.rateChoice());
         out.println("  series      ⟨N⟩ probe-averaged ± relative (largest source) → pulse energy (attenuation)");
         for (var f : plan.fluences()) {
             out.println(String.format(java.util.Locale.ROOT, "              %7.3g ± %-4s (%s) → %-10s (%.2f OD)%s", f.nProbeAveraged(),

@@ -107,6 +107,7 @@ public final class PlanOutputs {
         chosen.put("pumpWavelengthNm", plan.chosenWavelength().wavelengthM() * 1e9);
         chosen.put("repetitionRateHz", plan.chosenRate().repetitionRateHz());
         chosen.put("pulsePickerDivision", plan.chosenRate().division());
+        chosen.put("rateChoice", plan.rateChoice());
         ArrayNode series = chosen.putArray("fluenceSeries");
         for (FluencePoint f : plan.fluences()) {
             ObjectNode o = series.addObject();
@@ -124,18 +125,47 @@ public final class PlanOutputs {
             ObjectNode o = rates.addObject();
             o.put("division", r.division());
             o.put("repetitionRateHz", r.repetitionRateHz());
+            o.put("nAvgProbeWeighted", r.nAvgProbeWeighted());
+            o.put("pulseEnergyNj", r.pulseEnergyJ() * 1e9);
             o.put("residualExcitation", r.residual());
             o.put("chargedFraction", r.charged());
             o.put("steadyRiseK", Double.isFinite(r.steadyRiseK()) ? r.steadyRiseK() : null);
             o.put("verdict", r.verdict().name());
         }
         ObjectNode heat = root.putObject("heatingAtHighestFluence");
+        heat.put("nAvgProbeWeighted", plan.chosenRate().nAvgProbeWeighted());
+        heat.put("pulseEnergyNj", plan.chosenRate().pulseEnergyJ() * 1e9);
+        heat.put("repetitionRateHz", plan.chosenRate().repetitionRateHz());
         heat.put("heatFraction", plan.heat().heatFraction());
         heat.put("heatPowerW", plan.heat().heatPowerW());
         heat.put("steadyRiseK", Double.isFinite(plan.heat().steadyRiseK()) ? plan.heat().steadyRiseK() : null);
         heat.put("perPulseRiseK", Double.isFinite(plan.heat().perPulseRiseK()) ? plan.heat().perPulseRiseK() : null);
         heat.put("dotJumpK", plan.heat().dotJumpK());
         heat.put("model", plan.heat().model());
+        Predictions pr = plan.predictions();
+        ObjectNode train = root.putObject("pulseTrainAtHighestFluence");
+        train.put("nAvgProbeWeighted", plan.highestFluence().nProbeAveraged());
+        train.put("pulsesToSteadyState", pr.pulsesToSteadyState());
+        double[] charged = pr.buildUpCharged();
+        double[] excited = pr.buildUpResidual();
+        train.put("buildUpPulses", charged.length);
+        train.put("chargedBeforeLastPulse", charged[charged.length - 1]);
+        train.put("excitedOrChargedBeforeLastPulse", excited[excited.length - 1]);
+        if (!plan.multiplication().isEmpty()) {
+            ArrayNode cm = root.putArray("multiplicationForecast");
+            for (var mp : plan.multiplication()) {
+                ObjectNode o = cm.addObject();
+                o.put("photonEnergyEv", mp.photonEnergyJ() / PhysicalConstants.ELECTRONVOLT_J);
+                o.put("energyOverFirstExciton", mp.energyOverGap());
+                o.put("eta", mp.eta());
+                o.put("idealRatio", mp.idealRatio());
+                o.put("apparentRatioChosenRate", mp.apparentRatioChosen());
+                o.put("chargedChosenRate", mp.chargedChosen());
+                o.put("apparentRatioFullRate", mp.apparentRatioFullRate());
+                o.put("chargedFullRate", mp.chargedFullRate());
+                o.put("offered", mp.offered());
+            }
+        }
         if (plan.design() != null) {
             ObjectNode d = root.putObject("design");
             d.put("candidatesScored", plan.design().evaluated());

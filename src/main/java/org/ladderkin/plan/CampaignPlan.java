@@ -9,10 +9,11 @@ import org.ladderkin.observe.Risk;
  * @param inputs        what the plan file said
  * @param model         the kinetic model the predictions assume
  * @param wavelengths   every pump wavelength, judged (best first)
- * @param rates         every repetition rate the picker offers, judged at the highest fluence
+ * @param rates         every repetition rate the picker offers, judged at the series' highest ⟨N⟩
  * @param chosenRate    the fastest rate within the limits (or the slowest available when none is)
+ * @param rateChoice    how the rate was chosen (the rule and what it did for this plan), one or two sentences
  * @param fluences      the fluence series at the chosen wavelength
- * @param heat          heating at the highest fluence and the chosen rate
+ * @param heat          heating at the series' highest ⟨N⟩ and the chosen rate
  * @param design        optimal-design search, or null when no TA goal parameter applies
  * @param delayPlans    per instrument
  * @param multiplication carrier-multiplication forecast per requested photon energy (empty without that goal)
@@ -22,12 +23,16 @@ import org.ladderkin.observe.Risk;
  * @param cautions      safety cautions that apply (worded by the report)
  */
 public record CampaignPlan(PlanInputs inputs, ModelAssumptions model, List<WavelengthOption> wavelengths,
-                           List<RateOption> rates, RateOption chosenRate, List<FluencePoint> fluences, HeatBudget heat,
+                           List<RateOption> rates, RateOption chosenRate, String rateChoice, List<FluencePoint> fluences, HeatBudget heat,
                            DesignSearch.Result design, List<DelayPlan> delayPlans,
                            List<MultiplicationPrediction> multiplication, Predictions predictions,
                            List<Risk> risks, List<String> advisories, List<Caution> cautions) {
 
     public CampaignPlan {
+        java.util.Objects.requireNonNull(rateChoice, "rateChoice");
+        if (fluences.isEmpty()) {
+            throw new IllegalArgumentException("a campaign plan needs at least one fluence");
+        }
         wavelengths = List.copyOf(wavelengths);
         rates = List.copyOf(rates);
         fluences = List.copyOf(fluences);
@@ -36,6 +41,11 @@ public record CampaignPlan(PlanInputs inputs, ModelAssumptions model, List<Wavel
         risks = List.copyOf(risks);
         advisories = List.copyOf(advisories);
         cautions = List.copyOf(cautions);
+    }
+
+    /** The series' highest setting: the fluence every "at the highest fluence" number is evaluated at. */
+    public FluencePoint highestFluence() {
+        return fluences.get(fluences.size() - 1);
     }
 
     /** The chosen pump wavelength (the best-ranked). */

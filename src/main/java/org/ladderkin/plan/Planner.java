@@ -3,7 +3,6 @@ package org.ladderkin.plan;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.stream.IntStream;
 import org.ladderkin.excite.BeamProfile;
 import org.ladderkin.excite.Calibration;
 import org.ladderkin.excite.Excitation;
@@ -25,6 +24,8 @@ import org.ladderkin.observe.TimeWindows;
 import org.ladderkin.observe.Verdict;
 import org.ladderkin.sample.Advisory;
 import org.ladderkin.sample.Sample;
+import org.ladderkin.units.Dimension;
+import org.ladderkin.units.Quantity;
 
 /**
  * Turns a sample and a laser into a campaign plan: pump wavelength, repetition rate, an optimal fluence series and
@@ -85,34 +86,67 @@ public final class Planner {
         Excitation atMax = Excitation.of(sample, new Pulse(laser.maxPulseEnergyJ(), chosen.wavelengthM(),
                 laser.repetitionRateHz()), pump, probe, true);
         double nReach = Math.min(atMax.nAvgProbeWeighted(), MODEL_VALIDITY_N);
-        double nTop = Math.min(5, nReach);
 
-        progress.step(1, totalSteps, "judging repetition rates");
-        List<RateOption> rates = rates(in, km, model, atMax, nTop);
-        RateOption chosenRate = rates.stream().filter(r -> r.verdict() != Verdict.FAIL)
-                .max(java.util.Comparator.comparingDouble(RateOption::repetitionRateHz))
-                .orElse(rates.stream().min(java.util.Comparator.comparingDouble(RateOption::repetitionRateHz)).orElseThrow());
-        double period = 1 / chosenRate.repetitionRateHz();
-
-        progress.step(2, totalSteps, "searching the fluence and delay design");
         Instrument ta = in.instruments().stream().filter(i -> i.kind() == Instrument.Kind.TRANSIENT_ABSORPTION)
                 .findFirst().orElse(null);
         double bandEdgeOd = Double.isNaN(sample.firstExcitonEnergyJ()) ? Double.NaN
                 : sample.absorbanceAt(sample.firstExcitonWavelengthM());
         var goalParams = DesignSearch.parametersFor(in.goals());
-        DesignSearch.Result design = null;
         double firstDelay = ta == null ? 1e-12 : Math.max(ta.minDelayS(), 5 * model.coolingS());
         double lastDelay = ta == null ? 3e-9 : ta.maxDelayS();
+        Calibration cal = laser.calibration().orDefaults();
+        DesignSearch.Result design = null;
+        double[] nSeries;
+        List<RateOption> rates;
+        RateOption chosenRate;
+        String rateChoice;
+        if (searchDesign && ta != null && !goalParams.isEmpty() && !Double.isNaN(bandEdgeOd) && nReach > 0.2) {
+            // The rate sets the period the design is scored at, and the design sets the ⟨N⟩ the rate must survive:
+            // a first choice at a provisional ⟨N⟩, then the rates judged again at the designed series' top.
+            double provisionalN = Math.min(PROVISIONAL_N, nReach);
+            progress.step(1, totalSteps, "judging repetition rates");
+            RateOption first = RateJudge.fastestPassing(RateJudge.rates(in, km, atMax, provisionalN));
+            progress.step(2, totalSteps, "searching the fluence and delay design");
+            design = DesignSearch.search(designContext(in, model, g, first, bandEdgeOd, ta, firstDelay, lastDelay, nReach,
+                    goalParams, atMax, cal));
+            nSeries = design.best().nValues();
+            rates = RateJudge.rates(in, km, atMax, top(nSeries));
+            chosenRate = RateJudge.fastestPassing(rates);
+            if (chosenRate.division() == first.division()) {
+                rateChoice = String.format(Locale.ROOT, "Rates first judged at ⟨N⟩ = %.3g to set the period for the design "
+                        + "search, then again at the designed series' highest ⟨N⟩ = %.3g; the choice stands.", provisionalN,
+                        top(nSeries));
+            } else {
+                // one more search at the new rate; the design is not searched a third time
+                RateOption second = chosenRate;
+                double firstTop = top(nSeries);
+                progress.step(2, totalSteps, "searching the design again at " + RateJudge.hz(second));
+                design = DesignSearch.search(designContext(in, model, g, second, bandEdgeOd, ta, firstDelay, lastDelay,
+                        nReach, goalParams, atMax, cal));
+                nSeries = design.best().nValues();
+                rates = RateJudge.rates(in, km, atMax, top(nSeries));
+                RateOption third = RateJudge.fastestPassing(rates);
+                RateOption designedAt = rates.stream().filter(r -> r.division() == second.division()).findFirst().orElseThrow();
+                // never faster than the rate the design was scored at; slower when safety asks for it
+                chosenRate = third.repetitionRateHz() > designedAt.repetitionRateHz() ? designedAt : third;
+                rateChoice = String.format(Locale.ROOT, "Rates first judged at ⟨N⟩ = %.3g (choice %s); the designed series "
+                                + "went to ⟨N⟩ = %.3g, where the choice became %s, so the design was searched again at that "
+                                + "rate; its series goes to ⟨N⟩ = %.3g, where the rates are judged%s.", provisionalN,
+                        RateJudge.hz(first), firstTop, RateJudge.hz(second), top(nSeries), chosenRate.division() == second.division() ? ""
+                                : "; " + RateJudge.hz(chosenRate) + " is the fastest that passes there (the design's expected errors "
+                                + "were scored at " + RateJudge.hz(second) + ")");
+            }
+        } else {
+            // without a design the series does not depend on the rate: judge the rates at its own top
+            nSeries = TimeWindows.logSpaced(0.05, Math.max(0.1, Math.min(3, nReach)), 8);
+            progress.step(1, totalSteps, "judging repetition rates");
+            rates = RateJudge.rates(in, km, atMax, top(nSeries));
+            chosenRate = RateJudge.fastestPassing(rates);
+            rateChoice = String.format(Locale.ROOT, "Rates judged at the series' highest ⟨N⟩ = %.3g.", top(nSeries));
+        }
+        double period = 1 / chosenRate.repetitionRateHz();
         Excitation atChosenRate = Excitation.of(sample, new Pulse(laser.maxPulseEnergyJ(), chosen.wavelengthM(),
                 chosenRate.repetitionRateHz()), pump, probe, true);
-        Calibration cal = laser.calibration().orDefaults();
-        if (searchDesign && ta != null && !goalParams.isEmpty() && !Double.isNaN(bandEdgeOd) && nReach > 0.2) {
-            double budget = in.limits().beamTimeS() * DATA_SHARE_OF_BEAM_TIME;
-            design = DesignSearch.search(new DesignSearch.Context(model, g, period, bandEdgeOd, ta.noiseFloor(), budget,
-                    firstDelay, lastDelay, nReach, goalParams, designErrors(in, ta, atChosenRate, cal)));
-        }
-        double[] nSeries = design != null ? design.best().nValues()
-                : TimeWindows.logSpaced(0.05, Math.max(0.1, Math.min(3, nReach)), 8);
 
         progress.step(3, totalSteps, "converting the series to pulse energies");
         List<FluencePoint> fluences = new ArrayList<>();
@@ -128,23 +162,28 @@ public final class Planner {
         }
 
         progress.step(4, totalSteps, "predicting traces");
-        // the predicted traces are drawn on log axes: the scored grid's positive delays
-        double[] taDelays = design != null ? java.util.Arrays.stream(design.best().delaysS()).filter(t -> t > 0).toArray()
-                : TimeWindows.logSpaced(firstDelay, lastDelay, 60);
-        Predictions predictions = predict(km, nSeries, period, taDelays, bandEdgeOd, model);
         Excitation top = atChosenRate.withEnergyJ(fluences.get(fluences.size() - 1).pulseEnergyJ());
-        HeatBudget heat = heatAt(km, top, nSeries[nSeries.length - 1], period);
-
-        progress.step(5, totalSteps, "delay plans and risks");
+        // the chosen option was judged at the series' top: its heating is the plan's, not a second evaluation
+        HeatBudget heat = chosenRate.heat();
         List<DelayPlan> delayPlans = new ArrayList<>();
         for (Instrument inst : in.instruments()) {
-            delayPlans.add(delayPlan(inst, model, design, nSeries.length, km, nSeries[nSeries.length - 1], period, top, in));
+            delayPlans.add(delayPlan(inst, model, design, nSeries.length, km, top(nSeries), period, top, in));
         }
+        // the predicted traces are drawn on log axes: the printed TA grid's positive delays, so they start where it does
+        double[] taDelays = delayPlans.stream().filter(d -> d.instrument().kind() == Instrument.Kind.TRANSIENT_ABSORPTION)
+                .findFirst().map(d -> java.util.Arrays.stream(d.delaysS()).filter(t -> t > 0).toArray())
+                .filter(t -> t.length >= 2).orElseGet(() -> TimeWindows.logSpaced(firstDelay, lastDelay, 60));
+        Predictions predictions = predict(km, nSeries, period, taDelays, bandEdgeOd, model);
+
+        progress.step(5, totalSteps, "delay plans and risks");
+        String at = String.format(Locale.ROOT, "at the series' highest ⟨N⟩ = %.3g (%s) and %s", top(nSeries),
+                Quantity.formatBest(top.pulse().energyJ(), Dimension.ENERGY, 4),
+                Quantity.formatBest(chosenRate.repetitionRateHz(), Dimension.FREQUENCY, 3));
         List<Risk> risks = new ArrayList<>();
-        risks.add(Heating.risk("steady-state heating", heat.steadyRiseK(), SAMPLE_TEMPERATURE_K, in.limits().maxTemperatureRiseK(),
-                heat.boilingPointK()));
-        risks.add(PulseTrainRisks.chargingRisk(chosenRate.charged(), in.limits().maxChargedFraction()));
-        risks.add(PulseTrainRisks.residualRisk(chosenRate.residual(), in.limits().maxResidualExcitation()));
+        risks.add(evaluatedAt(Heating.risk("steady-state heating", heat.steadyRiseK(), SAMPLE_TEMPERATURE_K,
+                in.limits().maxTemperatureRiseK(), heat.boilingPointK()), at));
+        risks.add(evaluatedAt(PulseTrainRisks.chargingRisk(chosenRate.charged(), in.limits().maxChargedFraction()), at));
+        risks.add(evaluatedAt(PulseTrainRisks.residualRisk(chosenRate.residual(), in.limits().maxResidualExcitation()), at));
         for (DelayPlan d : delayPlans) {
             risks.addAll(d.risks());
         }
@@ -194,8 +233,38 @@ public final class Planner {
         List<Caution> cautions = CautionRules.forCampaign(sample.material().key(), matrixKey, heat.steadyRiseK(),
                 SAMPLE_TEMPERATURE_K, heat.boilingPointK(), peakFluence);
         progress.step(6, totalSteps, "done");
-        return new CampaignPlan(in, model, wavelengths, rates, chosenRate, fluences, heat, design, delayPlans, cm, predictions,
+        return new CampaignPlan(in, model, wavelengths, rates, chosenRate, rateChoice, fluences, heat, design, delayPlans, cm, predictions,
                 risks, advisories, cautions);
+    }
+
+    /**
+     * ⟨N⟩ the rate choice first assumes when a design search will pick the series: the middle of the design's
+     * candidate tops (1 to 8); the rates are judged again at the series' actual top afterwards.
+     */
+    static final double PROVISIONAL_N = 5;
+
+    /** Longest pulse-train build-up kept for the chart (each pulse is one point). */
+    public static final int MAX_BUILD_UP_PULSES = 20_000;
+
+    /** The risk with the fluence and rate it was evaluated at added to its explanation. */
+    private static Risk evaluatedAt(Risk r, String at) {
+        return new Risk(r.name(), r.verdict(), r.value(), r.limit(), r.unit(), r.why() + " (" + at + ")");
+    }
+
+    private static double top(double[] nSeries) {
+        return nSeries[nSeries.length - 1];
+    }
+
+    private static DesignSearch.Context designContext(PlanInputs in, ModelAssumptions model, int g, RateOption rate,
+                                                      double bandEdgeOd, Instrument ta, double firstDelay, double lastDelay,
+                                                      double nReach, java.util.Set<DesignSearch.Parameter> goalParams,
+                                                      Excitation atMax, Calibration cal) {
+        LaserSetup laser = in.laser();
+        Excitation atRate = Excitation.of(atMax.sample(), new Pulse(laser.maxPulseEnergyJ(), atMax.pulse().wavelengthM(),
+                rate.repetitionRateHz()), atMax.geometry().pump(), atMax.geometry().probe(), true);
+        double budget = in.limits().beamTimeS() * DATA_SHARE_OF_BEAM_TIME;
+        return new DesignSearch.Context(model, g, 1 / rate.repetitionRateHz(), bandEdgeOd, ta.noiseFloor(), budget,
+                firstDelay, lastDelay, nReach, goalParams, designErrors(in, ta, atRate, cal));
     }
 
     /**
@@ -225,41 +294,6 @@ public final class Planner {
         LaserSetup l = in.laser();
         return new DesignSearch.Errors(l.pumpFluctuationOrDefault(), l.driftPerHourOrDefault(), scale, stated,
                 crossSectionRel(in, ex), ta.timeZeroUncertaintyOrDefault(), ta.irfFwhmS(), ta.irfWidthRelOrDefault(), ta.measuredIrf());
-    }
-
-    private static List<RateOption> rates(PlanInputs in, KineticModel km, ModelAssumptions model, Excitation atMax,
-                                          double nTop) {
-        LaserSetup laser = in.laser();
-        PulseExcitation pulse = new PulseExcitation.Poisson(nTop);
-        double energyTop = nTop * atMax.pulse().energyJ() / atMax.nAvgProbeWeighted();
-        List<Integer> divisions = laser.pulsePickerDivisions().stream().sorted().toList();
-        RateOption[] out = new RateOption[divisions.size()];
-        IntStream.range(0, divisions.size()).parallel().forEach(i -> {
-            int d = divisions.get(i);
-            double rate = laser.repetitionRateHz() / d;
-            LadderKinetics kin = LadderKinetics.forPulses(km, pulse);
-            SteadyState ss = kin.steadyState(pulse, 1 / rate, false);
-            // the same steady state gives the residual: no second solve
-            double residual = ss.beforePulse().expectation(org.ladderkin.kinetics.Observables.excitedOrCharged(kin.space()));
-            Excitation ex = Excitation.of(atMax.sample(), new Pulse(energyTop, atMax.pulse().wavelengthM(), rate),
-                    atMax.geometry().pump(), atMax.geometry().probe(), true);
-            HeatBudget heat = heatAt(km, ex, nTop, 1 / rate);
-            Limits lim = in.limits();
-            Verdict v = Verdict.against(residual, lim.maxResidualExcitation(), 1)
-                    .worst(Verdict.against(ss.chargedFraction(), lim.maxChargedFraction(), 1))
-                    .worst(Double.isNaN(heat.steadyRiseK()) ? Verdict.WARN
-                            : Verdict.against(heat.steadyRiseK(), lim.maxTemperatureRiseK(), 1));
-            out[i] = new RateOption(d, rate, residual, ss.chargedFraction(), heat.steadyRiseK(), v);
-        });
-        return List.of(out);
-    }
-
-    private static HeatBudget heatAt(KineticModel km, Excitation ex, double n, double period) {
-        PulseExcitation pulse = new PulseExcitation.Poisson(n);
-        LadderKinetics kin = LadderKinetics.forPulses(km, pulse);
-        SteadyState ss = kin.steadyState(pulse, period, false);
-        double emitted = Photoluminescence.emittedPerPulse(kin, ss.afterPulse(), period);
-        return HeatBudget.of(ex, n > 0 ? emitted / n : 0, n);
     }
 
     private static Predictions predict(KineticModel km, double[] nSeries, double period, double[] taDelays,
@@ -295,7 +329,8 @@ public final class Planner {
         }
         PeriodicSteadyState train = kin.pulseTrain(strongest, period);
         int pulses = PeriodicSteadyState.pulsesToOnePercent(train.secondEigenvalueModulus());
-        int shown = Math.max(10, Math.min(200, pulses * 2));
+        // a fifth past the stated pulses to steady state, so the chart shows the plateau the text quotes
+        int shown = Math.min(MAX_BUILD_UP_PULSES, Math.max(10, (int) Math.ceil(1.2 * pulses)));
         PulseTrainRisks.BuildUp buildUp = PulseTrainRisks.buildUp(kin, strongest, period, shown);
         return new Predictions(taDelays, List.of(dA), plDelays, List.of(pl), List.of(el), List.of(occupancy),
                 buildUp.excitedOrCharged(), buildUp.charged(), pulses);

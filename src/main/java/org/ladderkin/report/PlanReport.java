@@ -87,7 +87,10 @@ public final class PlanReport {
             page.block("note", plan.inputs().lab());
         }
         summary(page, plan);
+        String top = highest(plan);
         page.heading(2, "Risks");
+        page.paragraph("Heating, photocharging and residual excitation at " + top + " and the chosen rate ("
+                + q(plan.chosenRate().repetitionRateHz(), Dimension.FREQUENCY) + ").");
         page.table(List.of("risk", "value", "limit", "unit", "what it means", "verdict"),
                 plan.risks().stream().map(r -> List.of(r.name(), num(r.value()), num(r.limit()), r.unit(), r.why(),
                         r.verdict().name())).toList());
@@ -96,8 +99,10 @@ public final class PlanReport {
             page.bullets(plan.advisories());
         }
         page.heading(2, "Predicted signals");
-        page.paragraph("Periodic steady state of the pulse train at the chosen repetition rate, for every fluence of the "
-                + "series; residual excitation from earlier pulses included.");
+        page.paragraph(String.format(Locale.ROOT, "Periodic steady state of the pulse train at the chosen repetition rate, "
+                + "for every fluence of the series; residual excitation from earlier pulses included. The pulse-train "
+                + "build-up is at %s: it takes %d pulses to come within 1 %% of the steady state; %d pulses are drawn.", top,
+                plan.predictions().pulsesToSteadyState(), plan.predictions().buildUpCharged().length));
         page.charts(charts(plan), 520, 340);
         designSection(page, plan);
         multiplicationSection(page, plan);
@@ -109,11 +114,16 @@ public final class PlanReport {
                         num(w.crossSectionM2() * 1e4), num(w.absorbanceOd()), num(w.energyOverGap()),
                         num(w.maxProbeAveragedN()), String.format(Locale.ROOT, "%.2f", w.score()),
                         String.join("; ", w.reasons()))).toList());
-        page.heading(2, "Repetition rates compared (at the highest fluence)");
+        page.heading(2, "Repetition rates compared (at " + top + ")");
+        page.paragraph(plan.rateChoice() + " The rule: every rate is judged at the series' highest ⟨N⟩. With a design "
+                + "search the rates are first judged at a provisional ⟨N⟩ = min(5, reachable) to set the period the design is "
+                + "scored at, then again at the designed series' top; if that changes the choice the design is searched once "
+                + "more at the new rate, and the rate used is the fastest that passes at its top, never faster than the rate "
+                + "that design was scored at.");
         page.table(List.of("division", "rate", "residual at next pulse", "charged", "steady rise (K)", "verdict"),
                 plan.rates().stream().map(r -> List.of("÷" + r.division(), q(r.repetitionRateHz(), Dimension.FREQUENCY),
                         num(r.residual()), num(r.charged()), num(r.steadyRiseK()), r.verdict().name())).toList());
-        page.heading(2, "Heating at the highest fluence");
+        page.heading(2, "Heating at " + top + ", " + q(plan.chosenRate().repetitionRateHz(), Dimension.FREQUENCY));
         var h = plan.heat();
         page.table(List.of("quantity", "value"), List.of(
                 List.of("share of absorbed energy left as heat", num(h.heatFraction())),
@@ -158,9 +168,9 @@ public final class PlanReport {
         lines.add(String.format(Locale.ROOT, "Pump at %s (%.3f eV): %s.", q(w.wavelengthM(), Dimension.LENGTH),
                 w.photonEnergyJ() / PhysicalConstants.ELECTRONVOLT_J, String.join("; ", w.reasons())));
         lines.add(String.format(Locale.ROOT, "Repetition rate %s (pulse picker ÷%d): the fastest offered that keeps residual "
-                        + "excitation (%.2g), charging (%.2g) and heating (%.2g K) within the limits%s.",
+                        + "excitation (%.3g), charging (%.3g) and heating (%.3g K) within the limits at %s%s.",
                 q(r.repetitionRateHz(), Dimension.FREQUENCY), r.division(), r.residual(), r.charged(), r.steadyRiseK(),
-                r.verdict() == Verdict.FAIL ? " — NONE does; this is the slowest available" : ""));
+                highest(plan), r.verdict() == Verdict.FAIL ? " — NONE does; this is the slowest available" : ""));
         for (DelayPlan d : plan.delayPlans()) {
             if (d.instrument().kind() == Instrument.Kind.TRANSIENT_ABSORPTION) {
                 lines.add(String.format(Locale.ROOT, "TA delays: %d points from %s to %s (a baseline before the pulse, the rise, "
@@ -261,14 +271,23 @@ public final class PlanReport {
         for (var w : whatIfs) {
             rows.add(whatIfRow(w.label(), w.plan()));
         }
-        page.table(List.of("variant", "rate", "residual", "charged", "steady rise (K)", "τ₂ rel. error", "worst risk"), rows);
+        page.paragraph("Each variant's residual, charging and heating are at its own series' highest ⟨N⟩.");
+        page.table(List.of("variant", "rate", "at ⟨N⟩", "residual", "charged", "steady rise (K)", "τ₂ rel. error", "worst risk"),
+                rows);
     }
 
     private static List<String> whatIfRow(String label, CampaignPlan p) {
         Verdict worst = p.risks().stream().map(Risk::verdict).reduce(Verdict.PASS, Verdict::worst);
         String tau2 = p.design() == null ? "—" : pct(p.design().best().error(DesignSearch.Parameter.TAU_BIEXCITON));
-        return List.of(label, q(p.chosenRate().repetitionRateHz(), Dimension.FREQUENCY), num(p.chosenRate().residual()),
+        return List.of(label, q(p.chosenRate().repetitionRateHz(), Dimension.FREQUENCY),
+                num(p.chosenRate().nAvgProbeWeighted()), num(p.chosenRate().residual()),
                 num(p.chosenRate().charged()), num(p.chosenRate().steadyRiseK()), tau2, worst.name());
+    }
+
+    /** "the series' highest ⟨N⟩ = 7.499 (879.9 nJ)": where every "at the highest fluence" number is evaluated. */
+    static String highest(CampaignPlan plan) {
+        var f = plan.highestFluence();
+        return "the series' highest ⟨N⟩ = " + num(f.nProbeAveraged()) + " (" + q(f.pulseEnergyJ(), Dimension.ENERGY) + ")";
     }
 
     private static String pct(double relative) {

@@ -66,11 +66,23 @@ class PlannerDemoTest {
             assertThat(p.deltaAOd().get(last)[m]).isCloseTo(-a0 * bleach[m], org.assertj.core.data.Offset.offset(1e-12));
         }
 
-        // the chosen repetition rate: residual recomputed, and it is the fastest option that does not fail
-        double nTop = Math.min(5, Math.min(w.maxProbeAveragedN(), Planner.MODEL_VALIDITY_N));
+        // the chosen repetition rate: residual recomputed at the series' highest ⟨N⟩ (where every rate is judged), and
+        // it is the fastest option that does not fail there
+        double nTop = plan.highestFluence().nProbeAveraged();
+        assertThat(plan.rates()).allSatisfy(r -> assertThat(r.nAvgProbeWeighted()).isEqualTo(nTop));
+        assertThat(plan.heat()).isEqualTo(plan.chosenRate().heat());
         PulseExcitation rateProbe = new PulseExcitation.Poisson(nTop);
         double residual = PulseTrainRisks.residualBeforePulse(LadderKinetics.forPulses(km, rateProbe), rateProbe, period);
         assertThat(plan.chosenRate().residual()).isCloseTo(residual, org.assertj.core.data.Offset.offset(1e-12));
+        SteadyState atTop = LadderKinetics.forPulses(km, rateProbe).steadyState(rateProbe, period, false);
+        assertThat(plan.chosenRate().charged()).isCloseTo(atTop.chargedFraction(), org.assertj.core.data.Offset.offset(1e-12));
+        // the build-up chart at the same ⟨N⟩ runs past the stated pulses to steady state and ends at that steady state
+        double[] charged = p.buildUpCharged();
+        assertThat(charged.length).isGreaterThanOrEqualTo(p.pulsesToSteadyState());
+        assertThat(charged[charged.length - 1]).isCloseTo(atTop.chargedFraction(),
+                org.assertj.core.data.Offset.offset(0.02 * atTop.chargedFraction() + 1e-9));
+        assertThat(plan.risks()).filteredOn(r -> r.name().equals("photocharging")).singleElement()
+                .satisfies(r -> assertThat(r.value()).isEqualTo(plan.chosenRate().charged()));
         List<RateOption> passing = plan.rates().stream().filter(r -> r.verdict() != Verdict.FAIL).toList();
         if (!passing.isEmpty()) {
             assertThat(plan.chosenRate()).isEqualTo(passing.stream().max(Comparator.comparingDouble(RateOption::repetitionRateHz)).get());

@@ -5,10 +5,13 @@ import java.util.List;
 import java.util.Locale;
 import org.ladderkin.plan.CampaignPlan;
 import org.ladderkin.plan.FluencePoint;
+import org.ladderkin.plan.ModelAssumptions;
 import org.ladderkin.plan.PlanInputs;
 import org.ladderkin.plan.Planner;
 import org.ladderkin.plan.WavelengthOption;
 import org.ladderkin.report.Cautions;
+import org.ladderkin.sample.Sample;
+import org.ladderkin.sample.SampleSpec;
 import org.ladderkin.report.PlanReport;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.PhysicalConstants;
@@ -17,7 +20,9 @@ import org.ladderkin.units.Quantity;
 /**
  * The live prediction of the desktop planner: the campaign planner's charts (steady-state bleach and PL per fluence,
  * early/late curve, ⟨N⟩ distribution, pulse-train build-up), its risk table and cautions, and the derived numbers
- * with the formula behind each. The optimal-design search is left to the report so an edit updates quickly.
+ * with the formula behind each. The live prediction skips the optimal-design search so an edit updates quickly: it is
+ * a preview on a log-spaced series and says so in its basis and labels; {@link #designed(CampaignPlan)} turns the full
+ * plan (the report's, computed by {@link ErrorBudgetService}) into the prediction that replaces it.
  */
 public final class PlannerPrediction implements PredictionSource {
 
@@ -34,17 +39,41 @@ public final class PlannerPrediction implements PredictionSource {
     /** Label of the derived number that echoes the highest pulse energy the prediction was computed for. */
     public static final String HIGHEST_ENERGY = "highest pulse energy";
 
+    /** Marks the numbers of the quick preview, which is evaluated on the preview series, not the designed one. */
+    public static final String PREVIEW = "preview";
+
     @Override
     public Prediction predict(PlanInputs plan) {
         CampaignPlan p = Planner.plan(plan, STOP_WHEN_INTERRUPTED, false);
-        return new Prediction(PlanReport.charts(p), p.risks(), derived(p), Cautions.texts(p.cautions()),
-                "multiexciton ladder, periodic steady state at " + Quantity.formatBest(p.chosenRate().repetitionRateHz(),
-                        Dimension.FREQUENCY, 3) + "; log-spaced series (the report adds the optimal design)");
+        double top = p.highestFluence().nProbeAveraged();
+        return new Prediction(PlanReport.charts(p), p.risks(), derived(p, true), Cautions.texts(p.cautions()),
+                String.format(Locale.ROOT, "%s: log-spaced ⟨N⟩ %s–%s (%d values), the designed series follows; "
+                        + "multiexciton ladder, periodic steady state at %s", PREVIEW,
+                        short3(p.fluences().get(0).nProbeAveraged()), short3(top), p.fluences().size(),
+                        Quantity.formatBest(p.chosenRate().repetitionRateHz(), Dimension.FREQUENCY, 3)), false);
     }
 
-    static List<Prediction.DerivedNumber> derived(CampaignPlan p) {
+    /** Three significant digits without trailing zeros: "0.05", "3". */
+    private static String short3(double v) {
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(3)).stripTrailingZeros().toPlainString();
+    }
+
+    /** The prediction of a full plan (with its design search): the report's numbers, charts and risks. */
+    public static Prediction designed(CampaignPlan p) {
+        return new Prediction(PlanReport.charts(p), p.risks(), derived(p, false), Cautions.texts(p.cautions()),
+                String.format(Locale.ROOT, "designed series of %d fluences, ⟨N⟩ %.3g–%.3g, as in the report; "
+                        + "multiexciton ladder, periodic steady state at %s", p.fluences().size(),
+                        p.fluences().get(0).nProbeAveraged(), p.highestFluence().nProbeAveraged(),
+                        Quantity.formatBest(p.chosenRate().repetitionRateHz(), Dimension.FREQUENCY, 3)), true);
+    }
+
+    static List<Prediction.DerivedNumber> derived(CampaignPlan p, boolean preview) {
         List<Prediction.DerivedNumber> out = new ArrayList<>();
         WavelengthOption w = p.chosenWavelength();
+        // numbers at the series' top name it; the preview's top is the preview series', not the design's
+        String atTop = String.format(Locale.ROOT, " at ⟨N⟩ = %.4g%s", p.highestFluence().nProbeAveraged(),
+                preview ? " (" + PREVIEW + " series)" : "");
+        out.addAll(usedValues(p, w));
         out.add(new Prediction.DerivedNumber(HIGHEST_ENERGY, Quantity.formatBest(p.inputs().laser().maxPulseEnergyJ(),
                 Dimension.ENERGY, 6), String.format(Locale.ROOT, "reaches ⟨N⟩ = %.3g probe-averaged at %s",
                 w.maxProbeAveragedN(), Quantity.formatBest(w.wavelengthM(), Dimension.LENGTH, 4))));
@@ -64,17 +93,42 @@ public final class PlannerPrediction implements PredictionSource {
                             + " j_peak = %.3g photons/cm²; ⟨N⟩ uncertainty from the pulse energy, both radii and σ%s",
                     f.nPeak(), f.photonFluencePeakPerM2() * 1e-4, dominant)));
         }
-        out.add(new Prediction.DerivedNumber("steady-state temperature rise", String.format(Locale.ROOT, "%.3g K",
+        out.add(new Prediction.DerivedNumber("steady-state temperature rise" + atTop, String.format(Locale.ROOT, "%.3g K",
                 p.heat().steadyRiseK()), "ΔT = P_heat/(4πκL)·Ein(2R²/w²), P_heat = absorbed power × heat share (" + p.heat().model() + ")"));
-        out.add(new Prediction.DerivedNumber("residual excitation at the next pulse", String.format(Locale.ROOT, "%.3g",
+        out.add(new Prediction.DerivedNumber("residual excitation at the next pulse" + atTop, String.format(Locale.ROOT, "%.3g",
                 p.chosenRate().residual()), "fixed point of the one-period map M = exp(QT)·E, fraction excited or charged"));
-        out.add(new Prediction.DerivedNumber("steady-state charged fraction", String.format(Locale.ROOT, "%.3g",
+        out.add(new Prediction.DerivedNumber("steady-state charged fraction" + atTop, String.format(Locale.ROOT, "%.3g",
                 p.chosenRate().charged()), String.format(Locale.ROOT, "charged states' weight in the fixed point of the "
                 + "one-period map before a pulse, at the highest fluence and %s (limit %.3g)",
                 Quantity.formatBest(p.chosenRate().repetitionRateHz(), Dimension.FREQUENCY, 3),
                 p.inputs().limits().maxChargedFraction())));
-        out.add(new Prediction.DerivedNumber("pulses to steady state", String.valueOf(p.predictions().pulsesToSteadyState()),
+        out.add(new Prediction.DerivedNumber("pulses to steady state" + atTop, String.valueOf(p.predictions().pulsesToSteadyState()),
                 "⌈ln 0.01 / ln|λ₂|⌉ with λ₂ the second eigenvalue of the one-period map"));
         return List.copyOf(out);
+    }
+
+    /** The values the prediction rests on (size, concentration, σ, τ₁, τ₂), each with where it comes from. */
+    private static List<Prediction.DerivedNumber> usedValues(CampaignPlan p, WavelengthOption w) {
+        List<Prediction.DerivedNumber> out = new ArrayList<>();
+        Sample s = p.inputs().sample();
+        String sizeBasis = s.spec().size() instanceof SampleSpec.ByFirstPeak peak
+                ? s.material().sizing().map(c -> String.format(Locale.ROOT, "from the first-exciton peak at %s through the "
+                        + "sizing curve %s (%s)", Quantity.formatBest(peak.wavelengthM(), Dimension.LENGTH, 4), c.formula(),
+                        c.source())).orElse("from the first-exciton peak")
+                : "diameter given in the plan";
+        out.add(new Prediction.DerivedNumber("diameter", String.format(Locale.ROOT, "%.3g nm", s.sizeM() * 1e9), sizeBasis));
+        out.add(new Prediction.DerivedNumber("concentration", String.format(Locale.ROOT, "%.3g µM",
+                s.concentrationMolPerM3() * 1e3), s.concentrationBasis()));
+        ModelAssumptions m = p.model();
+        out.add(new Prediction.DerivedNumber("τ₁ single exciton", Quantity.formatBest(m.tauSingleExcitonS(), Dimension.TIME, 4),
+                basis(m, "τ₁") + String.format(Locale.ROOT, "; radiative lifetime τ_rad = τ₁/QY = %s with QY = %.3g",
+                        Quantity.formatBest(m.tauSingleExcitonS() / m.plQuantumYield(), Dimension.TIME, 4), m.plQuantumYield())));
+        out.add(new Prediction.DerivedNumber("τ₂ biexciton Auger", Quantity.formatBest(m.tauBiexcitonS(), Dimension.TIME, 4),
+                basis(m, "τ₂") + String.format(Locale.ROOT, "; dot volume V = %.3g nm³", s.dotVolumeM3() * 1e27)));
+        return out;
+    }
+
+    private static String basis(ModelAssumptions m, String symbol) {
+        return m.bases().stream().filter(b -> b.startsWith(symbol + ":")).findFirst().orElse(symbol + ": model");
     }
 }

@@ -14,9 +14,11 @@ import org.ladderkin.report.ChartSpec;
  * @param derived  numbers derived from the plan, each with the formula behind it
  * @param cautions safety cautions to keep visible
  * @param basis    one line: what this prediction is based on (and what it leaves out)
+ * @param designed whether it is the full plan's (the designed series, the report's numbers) rather than the quick
+ *                 preview on a log-spaced series
  */
 public record Prediction(List<ChartSpec> charts, List<Risk> risks, List<DerivedNumber> derived, List<String> cautions,
-                         String basis) {
+                         String basis, boolean designed) {
 
     public Prediction {
         charts = List.copyOf(charts);
@@ -24,6 +26,12 @@ public record Prediction(List<ChartSpec> charts, List<Risk> risks, List<DerivedN
         derived = List.copyOf(derived);
         cautions = List.copyOf(cautions);
         Objects.requireNonNull(basis, "basis");
+    }
+
+    /** A preview prediction (not the designed series). */
+    public Prediction(List<ChartSpec> charts, List<Risk> risks, List<DerivedNumber> derived, List<String> cautions,
+                      String basis) {
+        this(charts, risks, derived, cautions, basis, false);
     }
 
     /**

@@ -10,7 +10,8 @@ import org.ladderkin.plan.PlanInputs;
  * computation), a newer request cancels the older one, and only the result of the newest request is delivered.
  * The work runs on a {@link LatestJobRunner}; results go through {@code deliver} (the event thread in the planner,
  * the caller's thread in tests), and its generation counter makes sure a slow stale computation can never overwrite
- * a fresh one.
+ * a fresh one. The quick prediction is a preview; once the full plan of the same edit is known
+ * ({@link #showDesigned}) it replaces the preview and a late preview of that edit is dropped.
  */
 public final class RecomputeService implements AutoCloseable {
 
@@ -29,6 +30,8 @@ public final class RecomputeService implements AutoCloseable {
     private final long debounceMillis;
     private final Consumer<Result> onResult;
     private final LatestJobRunner runner;
+    /** Newest generation whose designed prediction was shown; previews up to it are outdated (guarded by this). */
+    private long designedGeneration;
 
     /**
      * @param debounceMillis wait this long after the last request before computing
@@ -57,12 +60,16 @@ public final class RecomputeService implements AutoCloseable {
 
             @Override
             public void finished(Result value) {
-                onResult.accept(value);
+                if (!supersededByDesign(value.generation())) {
+                    onResult.accept(value);
+                }
             }
 
             @Override
             public void failed(String message) {
-                onResult.accept(new Result(gen, null, message, 0));
+                if (!supersededByDesign(gen)) {
+                    onResult.accept(new Result(gen, null, message, 0));
+                }
             }
         });
         if (submitted != gen) {
@@ -70,6 +77,25 @@ public final class RecomputeService implements AutoCloseable {
                     + ", expected " + gen + ")");
         }
         return gen;
+    }
+
+    /**
+     * Shows the full plan's prediction for the newest request in place of its preview: call it with what the design
+     * search delivered for the same edit (the caller checks that no newer edit came in meanwhile). Delivered through
+     * the same callback, on the calling thread (the event thread in the planner).
+     */
+    public void showDesigned(Prediction designed, long computeNanos) {
+        Objects.requireNonNull(designed, "designed");
+        long gen;
+        synchronized (this) {
+            gen = runner.generation();
+            designedGeneration = gen;
+        }
+        onResult.accept(new Result(gen, designed, null, computeNanos));
+    }
+
+    private synchronized boolean supersededByDesign(long generation) {
+        return generation <= designedGeneration;
     }
 
     /** The generation of the newest request. */

@@ -299,6 +299,10 @@ public final class PlannerFrame extends JFrame {
             budgetStatus.setText("no error budget: " + result.error());
             return;
         }
+        if (result.prediction() != null) {
+            // the full plan of this edit: the report's numbers replace the preview
+            recompute.showDesigned(result.prediction(), result.computeNanos());
+        }
         budgetTable.show(result.errors());
         budgetStatus.setText(result.errors().isEmpty() ? "no transient-absorption goal to design for"
                 : "expected errors of the goal parameters with the optimal design (" + result.delayPoints()

@@ -51,6 +51,35 @@ class RecomputeServiceTest {
     }
 
     @Test
+    void theDesignedPredictionReplacesThePreviewAndALatePreviewOfTheSameEditIsDropped() throws Exception {
+        CountDownLatch previewStarted = new CountDownLatch(1);
+        CountDownLatch release = new CountDownLatch(1);
+        BlockingQueue<RecomputeService.Result> delivered = new LinkedBlockingQueue<>();
+        try (RecomputeService s = new RecomputeService(in -> {
+            previewStarted.countDown();
+            try {
+                release.await(10, TimeUnit.SECONDS);
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+            }
+            return titled(in);
+        }, 0, Runnable::run, delivered::add)) {
+            long gen = s.request(withTitle("preview of edit 1"));
+            assertThat(previewStarted.await(5, TimeUnit.SECONDS)).isTrue();
+            Prediction designed = new Prediction(List.of(), List.of(), List.of(), List.of(), "designed", true);
+            s.showDesigned(designed, 0);
+            RecomputeService.Result r = delivered.poll(5, TimeUnit.SECONDS);
+            assertThat(r.prediction()).isSameAs(designed);
+            assertThat(r.generation()).isEqualTo(gen);
+            release.countDown();
+            assertThat(delivered.poll(500, TimeUnit.MILLISECONDS)).as("the late preview").isNull();
+            // a newer edit's preview is shown again
+            s.request(withTitle("preview of edit 2"));
+            assertThat(delivered.poll(5, TimeUnit.SECONDS).prediction().basis()).isEqualTo("preview of edit 2");
+        }
+    }
+
+    @Test
     void aStaleComputationIsCancelledAndNeverDelivered() throws Exception {
         CountDownLatch slowStarted = new CountDownLatch(1);
         List<String> interrupted = new CopyOnWriteArrayList<>();
