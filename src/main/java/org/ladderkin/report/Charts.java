@@ -5,67 +5,162 @@ import java.awt.Color;
 import java.awt.Font;
 import java.awt.Rectangle;
 import java.awt.geom.Ellipse2D;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import org.jfree.chart.JFreeChart;
-import org.jfree.chart.axis.LogAxis;
-import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.plot.XYPlot;
-import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.renderer.xy.ClusteredXYBarRenderer;
+import org.jfree.chart.renderer.xy.StandardXYBarPainter;
+import org.jfree.data.xy.XYBarDataset;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 import org.jfree.svg.SVGGraphics2D;
 
-/** Builds JFreeChart charts from {@link ChartSpec}s and renders them as SVG text. */
+/**
+ * Builds JFreeChart charts from {@link ChartSpec}s and renders them as SVG text. Series that share a colour index
+ * share one paint, the palette is the spec's, log axes tick at 1–2–5 × 10^k and every axis writes its labels in one
+ * number format.
+ */
 public final class Charts {
-
-    private static final Color[] PALETTE = {
-        new Color(0x1f77b4), new Color(0xd62728), new Color(0x2ca02c), new Color(0x9467bd), new Color(0xff7f0e),
-        new Color(0x17becf), new Color(0x8c564b), new Color(0xe377c2), new Color(0x7f7f7f), new Color(0xbcbd22)};
 
     private Charts() {
     }
 
+    /** The colour a series with colour index {@code index} of {@code count} gets in {@code palette}. */
+    public static Color colour(ChartSpec.Palette palette, int index, int count) {
+        return ChartColours.of(palette, index, count);
+    }
+
+    /** The colour each series of {@code spec} is drawn in, in series order. */
+    public static List<Color> colours(ChartSpec spec) {
+        int[] idx = spec.colourIndices();
+        int count = spec.colourCount();
+        List<Color> out = new ArrayList<>();
+        for (int i : idx) {
+            out.add(ChartColours.of(spec.palette(), i, count));
+        }
+        return out;
+    }
+
     /** A chart for the spec. Non-positive values are left out of log axes, which cannot show them. */
     public static JFreeChart build(ChartSpec spec) {
-        XYSeriesCollection data = new XYSeriesCollection();
-        for (ChartSpec.Series s : spec.series()) {
-            XYSeries xy = new XYSeries(s.name(), false, true);
-            double[] x = s.x();
-            double[] y = s.y();
-            for (int i = 0; i < x.length; i++) {
-                boolean drop = !Double.isFinite(x[i]) || !Double.isFinite(y[i])
-                        || (spec.logX() && x[i] <= 0) || (spec.logY() && y[i] <= 0);
-                if (!drop) {
-                    xy.add(x[i], y[i]);
-                }
+        List<Color> colours = colours(spec);
+        List<ChartSpec.Series> all = spec.series();
+        List<Integer> lineIdx = new ArrayList<>();
+        List<Integer> barIdx = new ArrayList<>();
+        for (int i = 0; i < all.size(); i++) {
+            (all.get(i).style() == ChartSpec.Style.BARS ? barIdx : lineIdx).add(i);
+        }
+        ValueAxis xAxis = spec.logX() ? new ReadableLogAxis(spec.xLabel()) : new ReadableNumberAxis(spec.xLabel(), !barIdx.isEmpty());
+        ValueAxis yAxis = spec.logY() ? new ReadableLogAxis(spec.yLabel()) : new ReadableNumberAxis(spec.yLabel(), false);
+        XYPlot plot = new XYPlot();
+        plot.setDomainAxis(xAxis);
+        plot.setRangeAxis(yAxis);
+        int dataset = 0;
+        if (!lineIdx.isEmpty()) {
+            int[] specIndex = lineIdx.stream().mapToInt(Integer::intValue).toArray();
+            boolean[] legendLine = new boolean[specIndex.length];
+            for (int k = 0; k < specIndex.length; k++) {
+                legendLine[k] = hasUnlistedLineOfItsColour(spec, specIndex[k]);
             }
-            data.addSeries(xy);
+            SeriesRenderer r = new SeriesRenderer(slug(spec.title()), specIndex, legendLine);
+            for (int k = 0; k < specIndex.length; k++) {
+                ChartSpec.Series s = all.get(specIndex[k]);
+                boolean points = s.style() == ChartSpec.Style.POINTS;
+                r.setSeriesPaint(k, colours.get(specIndex[k]));
+                r.setSeriesLinesVisible(k, !points);
+                r.setSeriesShapesVisible(k, points);
+                r.setSeriesShape(k, new Ellipse2D.Double(-2.5, -2.5, 5, 5));
+                r.setSeriesStroke(k, new BasicStroke(1.6f));
+                r.setSeriesVisibleInLegend(k, s.inLegend());
+            }
+            plot.setDataset(dataset, collection(spec, lineIdx));
+            plot.setRenderer(dataset, r);
+            dataset++;
         }
-        ValueAxis xAxis = axis(spec.xLabel(), spec.logX());
-        ValueAxis yAxis = axis(spec.yLabel(), spec.logY());
-        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer();
-        for (int i = 0; i < spec.series().size(); i++) {
-            boolean points = spec.series().get(i).points();
-            renderer.setSeriesPaint(i, PALETTE[i % PALETTE.length]);
-            renderer.setSeriesLinesVisible(i, !points);
-            renderer.setSeriesShapesVisible(i, points);
-            renderer.setSeriesShape(i, new Ellipse2D.Double(-2, -2, 4, 4));
-            renderer.setSeriesStroke(i, new BasicStroke(1.6f));
-        }
-        XYPlot plot = new XYPlot(data, xAxis, yAxis, renderer);
-        if (spec.logX()) {
-            decadeTicks((LogAxis) xAxis, data, true);
-        }
-        if (spec.logY()) {
-            decadeTicks((LogAxis) yAxis, data, false);
+        if (!barIdx.isEmpty()) {
+            ClusteredXYBarRenderer r = new ClusteredXYBarRenderer(0, false);
+            r.setBarPainter(new StandardXYBarPainter());
+            r.setShadowVisible(false);
+            r.setDrawBarOutline(false);
+            for (int k = 0; k < barIdx.size(); k++) {
+                r.setSeriesPaint(k, colours.get(barIdx.get(k)));
+                r.setSeriesVisibleInLegend(k, all.get(barIdx.get(k)).inLegend());
+            }
+            XYSeriesCollection bars = collection(spec, barIdx);
+            plot.setDataset(dataset, new XYBarDataset(bars, 0.8));
+            plot.setRenderer(dataset, r);
+            if (!spec.logX() && bars.getItemCount(0) > 0) {
+                // a bar is drawn on its own integer: no tick beyond the first and last bar ("−1")
+                xAxis.setRange(bars.getDomainLowerBound(false) - 0.6, bars.getDomainUpperBound(false) + 0.6);
+            }
         }
         plot.setBackgroundPaint(Color.WHITE);
         plot.setDomainGridlinePaint(new Color(0xdddddd));
         plot.setRangeGridlinePaint(new Color(0xdddddd));
-        JFreeChart chart = new JFreeChart(spec.title(), new Font("SansSerif", Font.BOLD, 13), plot, spec.series().size() > 1);
+        long listed = all.stream().filter(ChartSpec.Series::inLegend).count();
+        JFreeChart chart = new JFreeChart(spec.title(), new Font("SansSerif", Font.BOLD, 13), plot, listed > 1);
         chart.setBackgroundPaint(Color.WHITE);
+        if (chart.getLegend() != null) {
+            // at the default 10 pt the angle brackets of ⟨N⟩ read as parentheses
+            chart.getLegend().setItemFont(new Font("SansSerif", Font.PLAIN, 12));
+        }
         return chart;
+    }
+
+    private static boolean hasUnlistedLineOfItsColour(ChartSpec spec, int i) {
+        ChartSpec.Series s = spec.series().get(i);
+        if (s.style() != ChartSpec.Style.POINTS || !s.inLegend()) {
+            return false;
+        }
+        int[] idx = spec.colourIndices();
+        for (int j = 0; j < idx.length; j++) {
+            ChartSpec.Series o = spec.series().get(j);
+            if (j != i && idx[j] == idx[i] && o.style() == ChartSpec.Style.LINE && !o.inLegend()) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static XYSeriesCollection collection(ChartSpec spec, List<Integer> indices) {
+        XYSeriesCollection data = new XYSeriesCollection();
+        for (int i : indices) {
+            ChartSpec.Series s = spec.series().get(i);
+            XYSeries xy = new XYSeries(new SeriesKey(i, s.name()), false, true);
+            double[] x = s.x();
+            double[] y = s.y();
+            for (int k = 0; k < x.length; k++) {
+                boolean drop = !Double.isFinite(x[k]) || !Double.isFinite(y[k])
+                        || (spec.logX() && x[k] <= 0) || (spec.logY() && y[k] <= 0);
+                if (!drop) {
+                    xy.add(x[k], y[k]);
+                }
+            }
+            data.addSeries(xy);
+        }
+        return data;
+    }
+
+    /** A dataset key: unique by the spec's index (two series may share a name), shown by its name. */
+    private record SeriesKey(int index, String name) implements Comparable<SeriesKey> {
+        @Override
+        public int compareTo(SeriesKey o) {
+            return Integer.compare(index, o.index);
+        }
+
+        @Override
+        public String toString() {
+            return name;
+        }
+    }
+
+    /** The prefix of a chart's SVG ids: its title in lower-case letters, digits and hyphens. */
+    public static String slug(String title) {
+        String s = title.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("^-|-$", "");
+        return "chart-" + (s.isEmpty() ? "untitled" : s);
     }
 
     /**
@@ -84,63 +179,5 @@ public final class Charts {
         SVGGraphics2D g2 = new SVGGraphics2D(width, height);
         build(spec).draw(g2, new Rectangle(0, 0, width, height));
         return g2.getSVGElement();
-    }
-
-    /** Ticks at whole decades when the data span two or more: fractional log steps ("3.16E1") read badly. */
-    private static void decadeTicks(LogAxis axis, XYSeriesCollection data, boolean domain) {
-        double lo = Double.POSITIVE_INFINITY;
-        double hi = 0;
-        for (int s = 0; s < data.getSeriesCount(); s++) {
-            for (int i = 0; i < data.getItemCount(s); i++) {
-                double v = domain ? data.getXValue(s, i) : data.getYValue(s, i);
-                if (v > 0) {
-                    lo = Math.min(lo, v);
-                    hi = Math.max(hi, v);
-                }
-            }
-        }
-        if (hi > 0 && Math.log10(hi / lo) >= 2) {
-            axis.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
-        }
-    }
-
-    /** Plain numbers from 0.001 to 99 999, scientific outside ("2e6"). */
-    static final class ReadableNumberFormat extends java.text.NumberFormat {
-        private final java.text.DecimalFormat plain = new java.text.DecimalFormat("0.###",
-                java.text.DecimalFormatSymbols.getInstance(java.util.Locale.ROOT));
-        private final java.text.DecimalFormat sci = new java.text.DecimalFormat("0.##E0",
-                java.text.DecimalFormatSymbols.getInstance(java.util.Locale.ROOT));
-
-        @Override
-        public StringBuffer format(double number, StringBuffer toAppendTo, java.text.FieldPosition pos) {
-            double a = Math.abs(number);
-            if (a == 0 || (a >= 1e-3 && a < 1e5)) {
-                return plain.format(number, toAppendTo, pos);
-            }
-            return toAppendTo.append(sci.format(number).replace("E", "e"));
-        }
-
-        @Override
-        public StringBuffer format(long number, StringBuffer toAppendTo, java.text.FieldPosition pos) {
-            return format((double) number, toAppendTo, pos);
-        }
-
-        @Override
-        public Number parse(String source, java.text.ParsePosition parsePosition) {
-            return plain.parse(source, parsePosition);
-        }
-    }
-
-    private static ValueAxis axis(String label, boolean log) {
-        if (log) {
-            LogAxis a = new LogAxis(label);
-            a.setBase(10);
-            a.setSmallestValue(1e-300);
-            a.setNumberFormatOverride(new ReadableNumberFormat());
-            return a;
-        }
-        NumberAxis a = new NumberAxis(label);
-        a.setAutoRangeIncludesZero(false);
-        return a;
     }
 }

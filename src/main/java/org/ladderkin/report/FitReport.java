@@ -99,20 +99,72 @@ public final class FitReport {
     }
 
     /** Data with fitted curves, and residuals, on a log delay axis (delays after time zero only). */
-    static List<ChartSpec> charts(Dataset data, LadderFit.Outcome outcome) {
-        List<ChartSpec.Series> fits = new ArrayList<>();
-        List<ChartSpec.Series> res = new ArrayList<>();
-        for (int i = 0; i < data.size(); i++) {
-            Trace t = data.traces().get(i);
-            List<double[]> kept = plotted(t, outcome, i);
-            double[] x = column(kept, 0);
-            String name = t.label() + String.format(Locale.ROOT, " (⟨N⟩ %.2g)", outcome.meanN()[i]);
-            fits.add(new ChartSpec.Series(name, x, column(kept, 1), true));
-            fits.add(ChartSpec.Series.line(name + " fit", x, column(kept, 2)));
-            res.add(ChartSpec.Series.line(name, x, column(kept, 3)));
+    public static List<ChartSpec> charts(Dataset data, LadderFit.Outcome outcome) {
+        return List.of(overlay("Data and fit", data, outcome, "fit"), residuals("Residuals (data − fit)", data, outcome));
+    }
+
+    /**
+     * Each trace as points and, with an outcome, its curve as a line in the same colour (one legend entry shows both),
+     * as {@link ChartSpec#BLEACH_AXIS}. Traces are coloured on the sequential palette in order of ⟨N⟩ once the
+     * outcome gives it, in file order before; {@link #residuals} colours them alike.
+     *
+     * @param curve what the line is ("fit", "plan's model"), for its name in CSV exports
+     */
+    public static ChartSpec overlay(String title, Dataset data, LadderFit.Outcome outcome, String curve) {
+        List<ChartSpec.Series> series = new ArrayList<>();
+        if (data != null) {
+            int[] colour = traceColours(data, outcome);
+            for (int i = 0; i < data.size(); i++) {
+                List<double[]> kept = plotted(data.traces().get(i), outcome, i);
+                double[] x = column(kept, 0);
+                String name = traceName(data, outcome, i);
+                series.add(ChartSpec.Series.points(name, x, bleachAxis(column(kept, 1))).colour(colour[i]));
+                if (outcome != null) {
+                    series.add(ChartSpec.Series.line(name + " (" + curve + ")", x, bleachAxis(column(kept, 2)))
+                            .colour(colour[i]).unlisted());
+                }
+            }
         }
-        return List.of(new ChartSpec("Data and fit", "delay after time zero (ps)", "signal (file units)", true, false, fits),
-                new ChartSpec("Residuals (data − fit)", "delay after time zero (ps)", "residual (file units)", true, false, res));
+        return new ChartSpec(title, "delay after time zero (ps)", ChartSpec.BLEACH_AXIS, true, false, series,
+                ChartSpec.Palette.SEQUENTIAL);
+    }
+
+    /** Data minus curve per trace, in the overlay's sign, unit and colours; no series without an outcome. */
+    public static ChartSpec residuals(String title, Dataset data, LadderFit.Outcome outcome) {
+        List<ChartSpec.Series> series = new ArrayList<>();
+        if (data != null && outcome != null) {
+            int[] colour = traceColours(data, outcome);
+            for (int i = 0; i < data.size(); i++) {
+                List<double[]> kept = plotted(data.traces().get(i), outcome, i);
+                series.add(ChartSpec.Series.line(traceName(data, outcome, i), column(kept, 0), bleachAxis(column(kept, 3)))
+                        .colour(colour[i]));
+            }
+        }
+        return new ChartSpec(title, "delay after time zero (ps)", "residual of −ΔA (mOD)", true, false, series,
+                ChartSpec.Palette.SEQUENTIAL);
+    }
+
+    private static boolean knowsMeanN(Dataset data, LadderFit.Outcome outcome) {
+        return outcome != null && outcome.meanN().length == data.size();
+    }
+
+    private static int[] traceColours(Dataset data, LadderFit.Outcome outcome) {
+        return knowsMeanN(data, outcome) ? ChartSpec.ranks(outcome.meanN()) : java.util.stream.IntStream.range(0, data.size()).toArray();
+    }
+
+    /** "F1, ⟨N⟩ = 0.13", or the label alone before ⟨N⟩ is known. */
+    private static String traceName(Dataset data, LadderFit.Outcome outcome, int i) {
+        String label = data.traces().get(i).label();
+        return knowsMeanN(data, outcome) ? label + ", " + ChartSpec.meanN(outcome.meanN()[i]) : label;
+    }
+
+    /** ΔA as read (OD; the trace reader converts mOD and µOD columns) to the charts' bleach axis. */
+    private static double[] bleachAxis(double[] deltaAOd) {
+        double[] out = new double[deltaAOd.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = deltaAOd[i] * ChartSpec.BLEACH_AXIS_PER_OD;
+        }
+        return out;
     }
 
     /**

@@ -30,41 +30,61 @@ public final class PlanReport {
     private PlanReport() {
     }
 
-    /** The charts of a plan, shared by the report, CSV export and the desktop planner. */
+    /**
+     * The charts of a plan, shared by the report, CSV export and the desktop planner. Fluence series are coloured on
+     * the sequential palette in order of ⟨N⟩ and named by it; ΔA is shown as {@link ChartSpec#BLEACH_AXIS}.
+     */
     public static List<ChartSpec> charts(CampaignPlan plan) {
         Predictions p = plan.predictions();
         List<ChartSpec> charts = new ArrayList<>();
         double[] ps = scale(p.delaysS(), 1e12);
+        double[] plNs = scale(p.plDelaysS(), 1e9);
+        double[] meanN = plan.fluences().stream().mapToDouble(FluencePoint::nProbeAveraged).toArray();
+        int[] rank = ChartSpec.ranks(meanN);
         List<ChartSpec.Series> ta = new ArrayList<>();
         List<ChartSpec.Series> pl = new ArrayList<>();
-        double[] plNs = scale(p.plDelaysS(), 1e9);
-        for (int i = 0; i < plan.fluences().size(); i++) {
-            String name = String.format(Locale.ROOT, "<N> = %.3g", plan.fluences().get(i).nProbeAveraged());
-            double[] mdA = scale(p.deltaAOd().get(i), -1e3);
-            ta.add(ChartSpec.Series.line(name, ps, mdA));
-            pl.add(ChartSpec.Series.line(name, plNs, p.plPerDot().get(i)));
+        for (int i = 0; i < meanN.length; i++) {
+            String name = ChartSpec.meanN(meanN[i]);
+            ta.add(ChartSpec.Series.line(name, ps, scale(p.deltaAOd().get(i), ChartSpec.BLEACH_AXIS_PER_OD)).colour(rank[i]));
+            pl.add(ChartSpec.Series.line(name, plNs, p.plPerDot().get(i)).colour(rank[i]));
         }
-        charts.add(new ChartSpec("Band-edge bleach (steady state)", "delay (ps)", "−ΔA (mOD)", true, false, ta));
-        charts.add(new ChartSpec("Photoluminescence per dot", "delay (ns)", "PL rate (photons/s per dot)", true, true, pl));
-        double[] n = plan.predictions().earlyLate().stream().mapToDouble(EarlyLate.Point::meanExcitons).toArray();
+        charts.add(new ChartSpec("Band-edge bleach (steady state)", "delay (ps)", ChartSpec.BLEACH_AXIS, true, false, ta,
+                ChartSpec.Palette.SEQUENTIAL));
+        charts.add(new ChartSpec("Photoluminescence per dot", "delay (ns)", "PL rate (photons/s per dot)", true, true, pl,
+                ChartSpec.Palette.SEQUENTIAL));
+        double[] n = p.earlyLate().stream().mapToDouble(EarlyLate.Point::meanExcitons).toArray();
         double[] early = p.earlyLate().stream().mapToDouble(EarlyLate.Point::early).toArray();
         double[] late = p.earlyLate().stream().mapToDouble(EarlyLate.Point::late).toArray();
         double[] ratio = p.earlyLate().stream().mapToDouble(EarlyLate.Point::ratio).toArray();
-        charts.add(new ChartSpec("Early/late analysis", "<N> (probe-averaged)", "bleach (filled levels) and A/B", true, false,
-                List.of(ChartSpec.Series.line("early A", n, early), ChartSpec.Series.line("late B", n, late),
-                        ChartSpec.Series.line("A/B", n, ratio))));
+        // A and B share a unit and belong on one axis; their ratio is a pure number of another size and gets its own
+        charts.add(new ChartSpec("Early and late bleach", "⟨N⟩ (probe-averaged)", "bleach (filled band-edge levels)", true, false,
+                List.of(ChartSpec.Series.line("early A", n, early), ChartSpec.Series.line("late B", n, late))));
+        charts.add(new ChartSpec("Early/late ratio", "⟨N⟩ (probe-averaged)", "A/B", true, false,
+                List.of(ChartSpec.Series.line("A/B", n, ratio))));
         List<ChartSpec.Series> occ = new ArrayList<>();
-        int[] picks = {0, plan.fluences().size() / 2, plan.fluences().size() - 1};
+        int[] picks = java.util.stream.IntStream.of(0, meanN.length / 2, meanN.length - 1).filter(i -> i >= 0).distinct().toArray();
+        int[] pickRank = ChartSpec.ranks(java.util.Arrays.stream(picks).mapToDouble(i -> meanN[i]).toArray());
+        // the Poisson tail beyond 0.1 % in every shown series is a row of invisible bars
+        int shownN = 3;
         for (int i : picks) {
             double[] d = p.occupancy().get(i);
-            double[] x = new double[d.length];
-            for (int k = 0; k < d.length; k++) {
-                x[k] = k;
+            for (int j = 0; j < d.length; j++) {
+                if (d[j] >= 1e-3) {
+                    shownN = Math.max(shownN, j);
+                }
             }
-            occ.add(new ChartSpec.Series(String.format(Locale.ROOT, "<N> = %.3g", plan.fluences().get(i).nProbeAveraged()),
-                    x, d, true));
         }
-        charts.add(new ChartSpec("Excitons per dot after a pulse", "N", "probability", false, false, occ));
+        for (int k = 0; k < picks.length; k++) {
+            double[] all = p.occupancy().get(picks[k]);
+            double[] d = java.util.Arrays.copyOf(all, Math.min(all.length, shownN + 1));
+            double[] x = new double[d.length];
+            for (int j = 0; j < d.length; j++) {
+                x[j] = j;
+            }
+            occ.add(ChartSpec.Series.bars(ChartSpec.meanN(meanN[picks[k]]), x, d).colour(pickRank[k]));
+        }
+        charts.add(new ChartSpec("Excitons per dot after a pulse", "N (excitons in a dot)", "probability P(N)", false, false, occ,
+                ChartSpec.Palette.SEQUENTIAL));
         double[] pulse = new double[p.buildUpResidual().length];
         for (int k = 0; k < pulse.length; k++) {
             pulse[k] = k + 1;

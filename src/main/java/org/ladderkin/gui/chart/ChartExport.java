@@ -48,14 +48,53 @@ public final class ChartExport {
     public static final int WIDTH = 900;
     public static final int HEIGHT = 560;
 
+    /**
+     * How large an image is: the chart is laid out at {@code widthPx × heightPx} (fonts and lines keep their size
+     * relative to it) and a PNG is drawn {@code scale} times as many pixels each way, for print or high-density
+     * screens. SVG is vector and takes only the layout size.
+     *
+     * @param widthPx  layout width, 200 to 4000
+     * @param heightPx layout height, 150 to 4000
+     * @param scale    1 to 4
+     */
+    public record ImageSize(int widthPx, int heightPx, int scale) {
+        public static final ImageSize DEFAULT = new ImageSize(WIDTH, HEIGHT, 1);
+
+        public ImageSize {
+            if (widthPx < 200 || widthPx > 4000) {
+                throw new IllegalArgumentException("width must be 200 to 4000 px, was " + widthPx);
+            }
+            if (heightPx < 150 || heightPx > 4000) {
+                throw new IllegalArgumentException("height must be 150 to 4000 px, was " + heightPx);
+            }
+            if (scale < 1 || scale > 4) {
+                throw new IllegalArgumentException("scale must be 1 to 4, was " + scale);
+            }
+        }
+
+        /** "900 × 560 px at 2× (1800 × 1120 px)". */
+        public String describe() {
+            return widthPx + " × " + heightPx + " px" + (scale == 1 ? "" : " at " + scale + "× (" + widthPx * scale + " × "
+                    + heightPx * scale + " px)");
+        }
+    }
+
     private ChartExport() {
     }
 
-    /** Writes {@code spec} to {@code file} in {@code format}. */
+    /** Writes {@code spec} to {@code file} in {@code format} at the default size. */
     public static void write(ChartSpec spec, Format format, Path file) throws IOException {
+        write(spec, format, file, ImageSize.DEFAULT);
+    }
+
+    /** Writes {@code spec} to {@code file} in {@code format}; images at {@code size}. */
+    public static void write(ChartSpec spec, Format format, Path file, ImageSize size) throws IOException {
+        int w = size.widthPx();
+        int h = size.heightPx();
         switch (format) {
-            case PNG -> AtomicFiles.write(file, out -> ChartUtils.writeChartAsPNG(out, Charts.build(spec), WIDTH, HEIGHT));
-            case SVG -> AtomicFiles.writeString(file, Charts.svg(spec, WIDTH, HEIGHT) + "\n");
+            case PNG -> AtomicFiles.write(file, out -> ChartUtils.writeScaledChartAsPNG(out, Charts.build(spec), w, h,
+                    size.scale(), size.scale()));
+            case SVG -> AtomicFiles.writeString(file, Charts.svg(spec, w, h) + "\n");
             case CSV -> AtomicFiles.writeString(file, ChartCsv.of(spec));
         }
     }

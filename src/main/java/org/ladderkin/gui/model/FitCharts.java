@@ -7,7 +7,6 @@ import org.ladderkin.fit.Dataset;
 import org.ladderkin.fit.FitResult;
 import org.ladderkin.fit.LadderFit;
 import org.ladderkin.fit.ParameterEstimate;
-import org.ladderkin.fit.Trace;
 import org.ladderkin.report.ChartSpec;
 import org.ladderkin.report.FitReport;
 
@@ -49,37 +48,15 @@ public final class FitCharts {
         };
     }
 
-    /** Traces as points; with an outcome, its curves as lines. */
+    /** Traces as points; with an outcome, its curves as lines in each trace's colour. */
     static ChartSpec overlay(Dataset data, LadderFit.Outcome outcome, boolean fitted) {
-        List<ChartSpec.Series> series = new ArrayList<>();
         String title = outcome == null ? "Measured traces" : fitted ? "Measured traces and the fit" : "Measured traces over the plan's model";
-        if (data != null) {
-                        for (int i = 0; i < data.size(); i++) {
-                Trace t = data.traces().get(i);
-                List<double[]> kept = FitReport.plotted(t, outcome, i);
-                double[] x = FitReport.column(kept, 0);
-                String name = name(t, outcome, i);
-                series.add(new ChartSpec.Series(name, x, FitReport.column(kept, 1), true));
-                if (outcome != null) {
-                    series.add(ChartSpec.Series.line(name + (fitted ? " fit" : " plan"), x, FitReport.column(kept, 2)));
-                }
-            }
-        }
-        return new ChartSpec(title, "delay after time zero (ps)", "signal (file units)", true, false, series);
+        return FitReport.overlay(title, data, outcome, fitted ? "fit" : "plan's model");
     }
 
-    /** Data minus curve per trace; empty without an outcome. */
+    /** Data minus curve per trace, in the overlay's colours; empty without an outcome. */
     static ChartSpec residuals(Dataset data, LadderFit.Outcome outcome, boolean fitted) {
-        List<ChartSpec.Series> series = new ArrayList<>();
-        if (data != null && outcome != null) {
-                        for (int i = 0; i < data.size(); i++) {
-                Trace t = data.traces().get(i);
-                List<double[]> kept = FitReport.plotted(t, outcome, i);
-                series.add(ChartSpec.Series.line(name(t, outcome, i), FitReport.column(kept, 0), FitReport.column(kept, 3)));
-            }
-        }
-        return new ChartSpec(fitted ? "Residuals (data − fit)" : "Residuals (data − plan's model)",
-                "delay after time zero (ps)", "residual (file units)", true, false, series);
+        return FitReport.residuals(fitted ? "Residuals (data − fit)" : "Residuals (data − plan's model)", data, outcome);
     }
 
     /** Rows for the shared parameters (amplitudes and baselines are per trace and left out). */
@@ -114,11 +91,6 @@ public final class FitCharts {
             lines.add("warning: " + w);
         }
         return List.copyOf(lines);
-    }
-
-    private static String name(Trace t, LadderFit.Outcome outcome, int i) {
-        return outcome == null || outcome.meanN().length == 0 ? t.label()
-                : t.label() + String.format(Locale.ROOT, " (⟨N⟩ %.2g)", outcome.meanN()[i]);
     }
 
     static String num(double v) {

@@ -56,8 +56,20 @@ final class ChartsPanel extends JTabbedPane {
         return views.stream().map(ChartView::spec).toList();
     }
 
-    private static String shortTitle(String title) {
+    /**
+     * A tab title short enough for six tabs in one row of the chart column; the tab's tooltip holds the full title.
+     */
+    static String shortTitle(String title) {
+        for (String[] row : SHORT) {
+            if (title.startsWith(row[0])) {
+                return row[1];
+            }
+        }
         int paren = title.indexOf(" (");
         return paren > 0 ? title.substring(0, paren) : title;
     }
+
+    private static final String[][] SHORT = {
+        {"Band-edge bleach", "Bleach"}, {"Photoluminescence", "PL"}, {"Early and late", "Early/late"},
+        {"Early/late ratio", "A/B"}, {"Excitons per dot", "P(N)"}, {"Pulse-train build-up", "Build-up"}};
 }

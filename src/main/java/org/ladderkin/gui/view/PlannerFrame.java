@@ -436,12 +436,16 @@ public final class PlannerFrame extends JFrame {
         JFileChooser chooser = new JFileChooser(prefs.lastDirectory().map(Path::toFile).orElse(null));
         chooser.setFileFilter(new FileNameExtensionFilter(format.description(), format.extension()));
         chooser.setSelectedFile(new File(slug(spec.title()) + "." + format.extension()));
+        var size = new org.ladderkin.gui.chart.ImageSizePanel(format == ChartExport.Format.PNG);
+        if (format != ChartExport.Format.CSV) {
+            chooser.setAccessory(size);
+        }
         if (chooser.showSaveDialog(this) != JFileChooser.APPROVE_OPTION) {
             return;
         }
         Path target = format.withExtension(chooser.getSelectedFile().toPath());
         try {
-            ChartExport.write(spec, format, target);
+            ChartExport.write(spec, format, target, size.imageSize());
             predictionStatus.setText("exported " + target.getFileName());
         } catch (IOException e) {
             error("Cannot export the chart", target + ": " + e.getMessage());

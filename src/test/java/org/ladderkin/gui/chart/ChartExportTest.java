@@ -45,4 +45,38 @@ class ChartExportTest {
             assertThat(files).hasSize(3);
         }
     }
+
+    @Test
+    void aChosenSizeAndScaleAreWhatThePngAndSvgMeasure(@TempDir Path dir) throws Exception {
+        Path png = dir.resolve("big.png");
+        Path svg = dir.resolve("big.svg");
+        ChartExport.ImageSize size = new ChartExport.ImageSize(640, 400, 3);
+        ChartExport.write(SPEC, ChartExport.Format.PNG, png, size);
+        ChartExport.write(SPEC, ChartExport.Format.SVG, svg, size);
+        var image = ImageIO.read(png.toFile());
+        assertThat(image.getWidth()).isEqualTo(1920);
+        assertThat(image.getHeight()).isEqualTo(1200);
+        // the same layout, three times the pixels: the title's ink is three times as tall as at 1×
+        Path small = dir.resolve("small.png");
+        ChartExport.write(SPEC, ChartExport.Format.PNG, small, new ChartExport.ImageSize(640, 400, 1));
+        assertThat(inkRows(image)).isBetween(3 * inkRows(ImageIO.read(small.toFile())) - 3, 3 * inkRows(ImageIO.read(small.toFile())) + 3);
+        assertThat(Files.readString(svg)).contains("width='640.0' height='400.0'");
+        assertThat(size.describe()).isEqualTo("640 × 400 px at 3× (1920 × 1200 px)");
+        org.assertj.core.api.Assertions.assertThatThrownBy(() -> new ChartExport.ImageSize(640, 400, 5))
+                .hasMessage("scale must be 1 to 4, was 5");
+    }
+
+    /** Rows of the top tenth of the image (the title) that hold any dark pixel. */
+    private static int inkRows(java.awt.image.BufferedImage image) {
+        int rows = 0;
+        for (int y = 0; y < image.getHeight() / 10; y++) {
+            for (int x = 0; x < image.getWidth(); x++) {
+                if ((image.getRGB(x, y) & 0xff) < 128) {
+                    rows++;
+                    break;
+                }
+            }
+        }
+        return rows;
+    }
 }

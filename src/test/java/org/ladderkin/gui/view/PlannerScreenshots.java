@@ -66,7 +66,7 @@ class PlannerScreenshots {
             save(PlannerWindowTest.screenshot(frame, "planner-laser-" + suffix + ".png"));
 
             window.tabbedPane("forms").selectTab("Instruments");
-            window.tabbedPane("charts").selectTab("Early/late analysis");
+            window.tabbedPane("charts").selectTab("Early/late");
             save(PlannerWindowTest.screenshot(frame, "planner-instruments-" + suffix + ".png"));
 
             window.tabbedPane("forms").selectTab("Sample");
