@@ -243,13 +243,18 @@ public record FitIdentifiability(List<String> free, double conditionNumber, Stri
         return ParameterNaming.label(key).symbol();
     }
 
-    /** Enough decimals to show how far from ±1 it is: 0.95, 0.9998, 0.99996. */
+    /**
+     * Enough decimals to show how far from ±1 it is (0.95, 0.9998, 0.99996), cut rather than rounded so that a
+     * correlation short of 1 never reads as 1 (−0.9999996 reads −0.999999).
+     */
     static String corr(double c) {
         if (Math.abs(c) >= 1) {
             return String.format(Locale.ROOT, "%.0f", c);
         }
         int digits = (int) Math.max(2, Math.min(6, Math.ceil(-Math.log10(1 - Math.abs(c)))));
-        return String.format(Locale.ROOT, "%." + digits + "f", c);
+        double scale = Math.pow(10, digits);
+        double cut = Math.copySign(Math.floor(Math.abs(c) * scale + 1e-9) / scale, c);
+        return String.format(Locale.ROOT, "%." + digits + "f", cut);
     }
 
     private static String time(double s) {

@@ -70,6 +70,7 @@ class FitIdentifiabilityTest {
         assertThat(FitIdentifiability.corr(0.95)).isEqualTo("0.95");
         assertThat(FitIdentifiability.corr(0.99983)).isEqualTo("0.9998");
         assertThat(FitIdentifiability.corr(-0.999962)).isEqualTo("-0.99996");
+        assertThat(FitIdentifiability.corr(-0.9999995931)).isEqualTo("-0.999999");
         assertThat(FitIdentifiability.corr(1.0)).isEqualTo("1");
     }
 }
