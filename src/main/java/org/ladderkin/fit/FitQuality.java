@@ -53,8 +53,29 @@ public record FitQuality(double reducedChiSquare, String noiseBasis, double[] no
                 reducedChiSquare, noiseBasis, runsZ, lag1);
     }
 
-    /** The quality of fit {@code r} to {@code data}. */
-    static FitQuality of(Dataset data, FitResult r) {
+    /**
+     * The reduced χ² of residuals {@code r} (per trace) the way {@link #of} forms it: already weighted residuals are
+     * summed as they are, unweighted ones against each trace's point-to-point scatter. NaN without degrees of freedom.
+     */
+    static double reducedChiSquare(double[][] r, boolean weighted, int dof) {
+        if (dof <= 0) {
+            return Double.NaN;
+        }
+        double chi2 = 0;
+        for (double[] ri : r) {
+            double s = weighted ? 1 : scatter(ri);
+            if (!(s > 0)) {
+                continue;
+            }
+            for (double v : ri) {
+                chi2 += (v / s) * (v / s);
+            }
+        }
+        return chi2 / dof;
+    }
+
+    /** The quality of fit {@code r} to {@code data} (a failed fit has no residuals and gives NaN). */
+    public static FitQuality of(Dataset data, FitResult r) {
         List<double[]> res = r.residuals();
         boolean given = data.traces().stream().allMatch(Trace::hasUncertainty);
         double[] noise = new double[res.size()];

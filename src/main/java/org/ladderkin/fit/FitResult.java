@@ -7,7 +7,9 @@ import java.util.Optional;
 /**
  * What a global fit found, or why it could not. Never carries a NaN without saying so: a failed fit has status
  * {@link Status#FAILED}, a message, no estimates and NaN statistics; a fit whose covariance could not be formed has
- * status {@link Status#UNCERTAINTY_UNAVAILABLE}, a message naming the parameters at fault, and NaN standard errors.
+ * status {@link Status#UNCERTAINTY_UNAVAILABLE}, a message naming the parameters at fault, and NaN standard errors; an
+ * optimiser stopped at its limit leaves status {@link Status#NOT_CONVERGED} with the best point it met, NaN standard
+ * errors and a message saying why it stopped.
  *
  * @param status            outcome
  * @param message           what happened, one line (empty when converged cleanly)
@@ -40,6 +42,11 @@ public record FitResult(Status status, String message, List<ParameterEstimate> e
         CONVERGED,
         /** Converged, but the covariance is singular: estimates are available, standard errors are not. */
         UNCERTAINTY_UNAVAILABLE,
+        /**
+         * The optimiser stopped at a limit before converging: the estimates are the best point it met (lowest χ²),
+         * without standard errors, and the message says why it stopped and what to change.
+         */
+        NOT_CONVERGED,
         /** No usable fit; see the message. */
         FAILED
     }
@@ -81,9 +88,19 @@ public record FitResult(Status status, String message, List<ParameterEstimate> e
                 Double.NaN, Double.NaN, List.of(), List.of(), 0, 0, startsTried, startsTried, List.of(), warnings);
     }
 
-    /** Whether estimates are available. */
+    /** Whether estimates are available (for a {@link Status#NOT_CONVERGED} fit: the best point met, not an optimum). */
     public boolean ok() {
         return status != Status.FAILED;
+    }
+
+    /** Whether the optimiser converged (estimates are an optimum, not just the best point met). */
+    public boolean converged() {
+        return status == Status.CONVERGED || status == Status.UNCERTAINTY_UNAVAILABLE;
+    }
+
+    /** "converged", "uncertainty unavailable", "not converged" or "failed", for people. */
+    public String statusText() {
+        return status.name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ');
     }
 
     /** The shared estimate with key {@code key}. */

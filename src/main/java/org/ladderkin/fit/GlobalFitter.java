@@ -1,3 +1,4 @@
+// Over 400 lines: the multi-start loop, the optimiser run and the result's covariance and statistics share one projection.
 package org.ladderkin.fit;
 
 import java.util.ArrayList;
@@ -59,8 +60,10 @@ public final class GlobalFitter {
         starts.add(Map.of());
         starts.addAll(options.starts());
         Run best = null;
+        Stopped stopped = null;
         String firstFailure = null;
         int failed = 0;
+        int[] evaluations = {0};
         for (int i = 0; i < starts.size(); i++) {
             String failure;
             double[][] startValues;
@@ -73,9 +76,11 @@ public final class GlobalFitter {
                 firstFailure = firstFailure == null ? unusable : firstFailure;
                 continue;
             }
+            BestSoFar tracker = null;
             try {
                 Projection p = i == 0 ? proj : new Projection(problem, startValues, options.analyticJacobian());
-                Run r = optimise(p, options);
+                tracker = new BestSoFar(p, options.progress(), evaluations, best == null ? Double.POSITIVE_INFINITY : best.chiSquare);
+                Run r = optimise(p, options, tracker);
                 if (best == null || r.chiSquare < best.chiSquare) {
                     best = r;
                 }
@@ -87,6 +92,9 @@ public final class GlobalFitter {
                 failure = e.getMessage();
             } catch (MathRuntimeException e) {
                 failure = "optimiser stopped: " + e.getMessage();
+                if (tracker != null && tracker.bestU != null && (stopped == null || tracker.bestChi2 < stopped.run().chiSquare())) {
+                    stopped = new Stopped(tracker.run(), tracker, e.getMessage());
+                }
             } catch (RuntimeException e) {
                 // a model that throws must not take the caller down with it; the message says what it was
                 failure = "model failed: " + e.getClass().getSimpleName() + ": " + e.getMessage();
@@ -94,6 +102,18 @@ public final class GlobalFitter {
             failed++;
             firstFailure = firstFailure == null ? failure : firstFailure;
             options.progress().update("start", i + 1, starts.size());
+        }
+        if (best == null && stopped != null) {
+            // no start converged: the best point met is still worth showing, marked as such and explained
+            try {
+                String why = explainStop(stopped, options);
+                if (failed > 1) {
+                    warnings.add(failed + " of " + starts.size() + " starts did not converge; the first: " + firstFailure);
+                }
+                return assemble(stopped.run(), problem, options, starts.size(), failed, warnings, why);
+            } catch (Projection.FitFailure e) {
+                return FitResult.failed(e.getMessage(), starts.size(), warnings);
+            }
         }
         if (best == null) {
             return FitResult.failed(starts.size() == 1 ? firstFailure
@@ -103,7 +123,7 @@ public final class GlobalFitter {
             warnings.add(failed + " of " + starts.size() + " starts failed; the first: " + firstFailure);
         }
         try {
-            return assemble(best, problem, options, starts.size(), failed, warnings);
+            return assemble(best, problem, options, starts.size(), failed, warnings, null);
         } catch (Projection.FitFailure e) {
             return FitResult.failed(e.getMessage(), starts.size(), warnings);
         }
@@ -126,9 +146,30 @@ public final class GlobalFitter {
     }
 
     static Run optimise(Projection p, FitOptions options) {
+        return optimise(p, options, null);
+    }
+
+    /**
+     * One Levenberg–Marquardt run from the projection's start. {@code tracker}, when given, sees every evaluation and
+     * keeps the best point, which outlives an optimiser that stops at its limits.
+     */
+    static Run optimise(Projection p, FitOptions options, BestSoFar tracker) {
         double[] u0 = p.startU();
         double[] target = p.target();
-        Projection.Evaluation first = p.evaluate(u0);
+        // the optimiser asks for value and Jacobian at the same point separately: evaluate the series once per point
+        Projection.Evaluation[] last = new Projection.Evaluation[1];
+        double[][] lastU = new double[1][];
+        java.util.function.Function<double[], Projection.Evaluation> at = u -> {
+            if (lastU[0] == null || !java.util.Arrays.equals(lastU[0], u)) {
+                last[0] = p.evaluate(u);
+                lastU[0] = u.clone();
+                if (tracker != null) {
+                    tracker.offer(u, last[0]);
+                }
+            }
+            return last[0];
+        };
+        Projection.Evaluation first = at.apply(u0);
         LeastSquaresOptimizer.Optimum o;
         if (u0.length == 0) {
             return new Run(p, u0, first, chiSquare(first.value, target), 0, 1);
@@ -136,7 +177,7 @@ public final class GlobalFitter {
         LeastSquaresProblem lsp = new LeastSquaresBuilder()
                 .start(u0)
                 .target(target)
-                .model(u -> p.evaluate(u).value, u -> p.projectedJacobian(u, p.evaluate(u)))
+                .model(u -> at.apply(u).value, u -> p.projectedJacobian(u, at.apply(u)))
                 .lazyEvaluation(true)
                 .maxIterations(options.maxIterations())
                 .maxEvaluations(options.maxEvaluations())
@@ -148,8 +189,43 @@ public final class GlobalFitter {
                 throw new Projection.FitFailure("optimiser returned a non-finite parameter vector");
             }
         }
-        Projection.Evaluation at = p.evaluate(u);
-        return new Run(p, u, at, chiSquare(at.value, target), o.getIterations(), o.getEvaluations());
+        Projection.Evaluation atU = at.apply(u);
+        return new Run(p, u, atU, chiSquare(atU.value, target), o.getIterations(), o.getEvaluations());
+    }
+
+    /** An optimiser run that stopped at a limit, with its best point. */
+    private record Stopped(Run run, BestSoFar tracker, String reason) {
+    }
+
+    /**
+     * Why the optimiser stopped, in words a user can act on: the limit reached, the pair the data cannot tell apart at
+     * the best point, which parameters were still moving, and that the values shown are the best point so far.
+     */
+    private static String explainStop(Stopped stopped, FitOptions options) {
+        String reason = stopped.reason();
+        String limit;
+        if (reason.contains("(" + options.maxIterations() + ")")) {
+            limit = "the optimiser reached its " + options.maxIterations() + "-iteration limit before converging";
+        } else if (reason.contains("(" + options.maxEvaluations() + ")")) {
+            limit = "the optimiser reached its " + options.maxEvaluations() + "-evaluation limit before converging";
+        } else {
+            limit = "the optimiser stopped before converging (" + reason + ")";
+        }
+        List<String> parts = new ArrayList<>();
+        parts.add(limit);
+        Run run = stopped.run();
+        FitIdentifiability id = FitIdentifiability.at(run.projection(), run.u(), run.at());
+        if (id.warns()) {
+            parts.add(id.pairPhrase().isEmpty() ? id.warning() : id.pairPhrase() + "; " + id.warning()
+                    .substring(id.warning().lastIndexOf("; ") + 2).replace("hold one", "hold one of them"));
+        }
+        List<String> moving = stopped.tracker().stillMoving();
+        if (!moving.isEmpty()) {
+            parts.add("still moving at the end: " + String.join(", ", moving));
+        }
+        parts.add(String.format(java.util.Locale.ROOT, "the values shown are the best point so far (after %d evaluations), "
+                + "not converged", run.evaluations()));
+        return String.join("; ", parts);
     }
 
     static double chiSquare(double[] value, double[] target) {
@@ -178,8 +254,13 @@ public final class GlobalFitter {
         return v;
     }
 
+    /**
+     * The result at {@code run}'s point. With {@code notConverged} (why the optimiser stopped) the point is the best one
+     * met, not an optimum: no covariance is formed there (standard errors would describe a point the fit had not
+     * settled on) and no profiles are traced.
+     */
     private static FitResult assemble(Run run, FitProblem problem, FitOptions options, int startsTried, int startsFailed,
-                                      List<String> warnings) {
+                                      List<String> warnings, String notConverged) {
         Projection p = run.projection();
         int nSlots = p.slots.size();
         int lin = p.linearPerTrace();
@@ -213,10 +294,13 @@ public final class GlobalFitter {
         for (int c = 0; c < k; c++) {
             norm[c] = Math.sqrt(norm[c]);
             if (!(norm[c] > 0)) {
-                status = "the data do not depend on " + keys.get(c) + " at the best fit (fix it, or widen the delay range)";
+                status = "the data do not depend on " + FitIdentifiability.symbol(keys.get(c))
+                        + " at the best fit (fix it, or widen the delay range)";
             }
         }
-        if (status.isEmpty() && k > 0) {
+        if (notConverged != null) {
+            status = notConverged;
+        } else if (status.isEmpty() && k > 0) {
             double[][] jtj = new double[k][k];
             for (double[] row : j) {
                 for (int a = 0; a < k; a++) {
@@ -247,8 +331,7 @@ public final class GlobalFitter {
                 }
             }
             if (!(min > SINGULAR_RATIO * max)) {
-                status = "parameters " + mostInvolved(eig.getEigenvector(minIndex).toArray(), keys)
-                        + " are not separately determined by these data (fix one of them or add data)";
+                status = mostInvolved(eig.getEigenvector(minIndex).toArray(), keys);
             } else {
                 RealMatrix v = eig.getV();
                 cov = new double[k][k];
@@ -273,15 +356,15 @@ public final class GlobalFitter {
             double value = phys[slot.spec()][Math.max(slot.trace(), 0)];
             double near = 1e-6 * spec.scale();
             if (value - spec.lower() <= near || spec.upper() - value <= near) {
-                atBound.add(slot.label() + " = " + Projection.brief(value) + " ran to its bound "
-                        + Projection.brief(value - spec.lower() <= near ? spec.lower() : spec.upper()));
+                atBound.add(ParameterNaming.shown(slot.label(), value) + " ran to its bound "
+                        + ParameterNaming.shown(slot.label(), value - spec.lower() <= near ? spec.lower() : spec.upper()).replaceFirst("^.* = ", ""));
             }
         }
         if (!atBound.isEmpty()) {
             String note = String.join("; ", atBound) + " (the data do not hold it away from the bound: fix it or drop that part of the model)";
             warnings.add(note);
             if (!status.isEmpty()) {
-                status = note + "; " + status;
+                status = notConverged != null ? status + "; " + note : note + "; " + status;
             }
         }
         List<ParameterEstimate> estimates = new ArrayList<>();
@@ -349,11 +432,12 @@ public final class GlobalFitter {
                         p.label(i), a[0]));
             }
         }
-        FitResult.Status st = cov != null || k == 0 ? FitResult.Status.CONVERGED : FitResult.Status.UNCERTAINTY_UNAVAILABLE;
+        FitResult.Status st = notConverged != null ? FitResult.Status.NOT_CONVERGED
+                : cov != null || k == 0 ? FitResult.Status.CONVERGED : FitResult.Status.UNCERTAINTY_UNAVAILABLE;
         FitResult result = new FitResult(st, status, estimates, cov == null ? List.of() : keys, corr, run.chiSquare(), n, k,
                 run.chiSquare() / dof, aic, bic, residuals, acf, run.iterations(), run.evaluations(), startsTried, startsFailed,
                 List.of(), warnings);
-        if (options.profile().isEmpty()) {
+        if (options.profile().isEmpty() || notConverged != null) {
             return result;
         }
         List<ProfileInterval> profiles = new ArrayList<>();
@@ -362,7 +446,7 @@ public final class GlobalFitter {
             try {
                 profiles.add(ProfileLikelihood.interval(problem, options, run, result, key));
             } catch (Projection.FitFailure | MathRuntimeException e) {
-                allWarnings.add("profile of " + key + " failed: " + e.getMessage());
+                allWarnings.add("profile of " + FitIdentifiability.symbol(key) + " failed: " + e.getMessage());
             }
         }
         return new FitResult(st, status, estimates, result.correlationKeys(), corr, run.chiSquare(), n, k, run.chiSquare() / dof,
@@ -393,6 +477,9 @@ public final class GlobalFitter {
                 second = i;
             }
         }
-        return second < 0 ? keys.get(first) : keys.get(Math.min(first, second)) + " and " + keys.get(Math.max(first, second));
+        return second < 0 ? FitIdentifiability.symbol(keys.get(first)) + " is not determined by these data (fix it or add data)"
+                : FitIdentifiability.symbol(keys.get(Math.min(first, second))) + " and "
+                + FitIdentifiability.symbol(keys.get(Math.max(first, second)))
+                + " are not separately determined by these data (fix one of them or add data)";
     }
 }

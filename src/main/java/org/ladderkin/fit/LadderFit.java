@@ -69,8 +69,69 @@ public final class LadderFit {
         }
     }
 
+    /** A ladder fit set up: the excitations, the model, the problem and the options, before anything is fitted. */
+    private record Prepared(Excitation.Kind kind, double[] x, String scaleKey, List<ParameterSpec> specs,
+                            LadderBleachModel model, FitProblem problem, FitOptions options) {
+    }
+
     /** Fits {@code data}; every trace must carry an excitation of the same kind. */
     public static Outcome fit(Dataset data, LadderFitSetup setup, FitProgress progress) {
+        Prepared prepared = prepare(data, setup, progress);
+        Excitation.Kind kind = prepared.kind();
+        double[] x = prepared.x();
+        String scaleKey = prepared.scaleKey();
+        List<ParameterSpec> specs = prepared.specs();
+        LadderBleachModel model = prepared.model();
+        FitProblem problem = prepared.problem();
+        FitOptions options = prepared.options();
+        FitResult r = GlobalFitter.fit(problem, options);
+        if (!r.ok()) {
+            return new Outcome(r, kind, scaleKey, x, new double[0], List.of(), List.of(), setup.measuredIrf());
+        }
+        ParameterValues best = valuesAt(r, specs);
+        double[] n = new double[x.length];
+        List<double[]> curves = new ArrayList<>();
+        for (int i = 0; i < x.length; i++) {
+            n[i] = model.meanOccupancy(i, best);
+            Trace t = data.traces().get(i);
+            double[] shape = model.predict(i, t.delaysS(), best);
+            double a = r.find("amplitude", i).map(ParameterEstimate::value).orElse(1.0);
+            double b = r.find("baseline", i).map(ParameterEstimate::value).orElse(0.0);
+            for (int m = 0; m < shape.length; m++) {
+                shape[m] = a * shape[m] + b;
+            }
+            curves.add(shape);
+        }
+        List<String> diagnostics = new ArrayList<>();
+        FitQuality quality = FitQuality.of(data, r);
+        FitDiagnostics.residualStructure(data, r, quality, best, model, setup.free()).ifPresent(diagnostics::add);
+        diagnostics.addAll(FitDiagnostics.find(data, model, best, r, n,
+                Double.isNaN(setup.scaleStart()) || !setup.free().contains(LadderParameter.SCALE) ? Double.NaN : setup.scaleStart(), scaleKey));
+        List<String> checks = new ArrayList<>();
+        String[] charging = FitDiagnostics.photochargingInData(data, r, quality, best, x, n, curves);
+        if (charging[0] != null && diagnostics.stream().noneMatch(d -> d.startsWith("photocharging"))) {
+            diagnostics.add(charging[0]);
+        } else if (charging[1] != null) {
+            checks.add(charging[1]);
+        }
+        Map<String, Double> total = calibrated(r, problem, options, specs, scaleKey, setup.fluenceScaleUncertainty());
+        return new Outcome(r, kind, scaleKey, x, n, curves, diagnostics, setup.measuredIrf(), quality, checks,
+                setup.fluenceScaleUncertainty(), total);
+    }
+
+    /**
+     * Whether the parameters {@code setup} frees can be told apart by {@code data}, judged at the start point before
+     * a fit (one Jacobian: two model evaluations of the series per freed parameter). Call it before {@link #fit} to
+     * warn; the fit runs either way.
+     *
+     * @throws IllegalArgumentException as {@link #fit} does for traces without a usable excitation
+     */
+    public static FitIdentifiability identifiability(Dataset data, LadderFitSetup setup) {
+        Prepared p = prepare(data, setup, FitProgress.NONE);
+        return FitIdentifiability.of(p.problem(), p.options().analyticJacobian());
+    }
+
+    private static Prepared prepare(Dataset data, LadderFitSetup setup, FitProgress progress) {
         Excitation.Kind kind = null;
         double[] x = new double[data.size()];
         for (int i = 0; i < data.size(); i++) {
@@ -117,39 +178,7 @@ public final class LadderFit {
             }
             options = options.withProfile(keys);
         }
-        FitResult r = GlobalFitter.fit(problem, options);
-        if (!r.ok()) {
-            return new Outcome(r, kind, scaleKey, x, new double[0], List.of(), List.of(), setup.measuredIrf());
-        }
-        ParameterValues best = valuesAt(r, specs);
-        double[] n = new double[x.length];
-        List<double[]> curves = new ArrayList<>();
-        for (int i = 0; i < x.length; i++) {
-            n[i] = model.meanOccupancy(i, best);
-            Trace t = data.traces().get(i);
-            double[] shape = model.predict(i, t.delaysS(), best);
-            double a = r.find("amplitude", i).map(ParameterEstimate::value).orElse(1.0);
-            double b = r.find("baseline", i).map(ParameterEstimate::value).orElse(0.0);
-            for (int m = 0; m < shape.length; m++) {
-                shape[m] = a * shape[m] + b;
-            }
-            curves.add(shape);
-        }
-        List<String> diagnostics = new ArrayList<>();
-        FitQuality quality = FitQuality.of(data, r);
-        FitDiagnostics.residualStructure(data, r, quality, best, model, setup.free()).ifPresent(diagnostics::add);
-        diagnostics.addAll(FitDiagnostics.find(data, model, best, r, n,
-                Double.isNaN(setup.scaleStart()) || !setup.free().contains(LadderParameter.SCALE) ? Double.NaN : setup.scaleStart(), scaleKey));
-        List<String> checks = new ArrayList<>();
-        String[] charging = FitDiagnostics.photochargingInData(data, r, quality, best, x, n, curves);
-        if (charging[0] != null && diagnostics.stream().noneMatch(d -> d.startsWith("photocharging"))) {
-            diagnostics.add(charging[0]);
-        } else if (charging[1] != null) {
-            checks.add(charging[1]);
-        }
-        Map<String, Double> total = calibrated(r, problem, options, specs, scaleKey, setup.fluenceScaleUncertainty());
-        return new Outcome(r, kind, scaleKey, x, n, curves, diagnostics, setup.measuredIrf(), quality, checks,
-                setup.fluenceScaleUncertainty(), total);
+        return new Prepared(kind, x, scaleKey, specs, model, problem, options);
     }
 
     /**

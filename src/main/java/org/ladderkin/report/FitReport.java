@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.ladderkin.fit.Dataset;
+import org.ladderkin.fit.FitQuality;
 import org.ladderkin.fit.FitResult;
 import org.ladderkin.fit.LadderFit;
 import org.ladderkin.fit.ParameterEstimate;
@@ -34,7 +35,7 @@ public final class FitReport {
         if (outcome.measuredIrf() != null) {
             page.paragraph("Instrument response: " + measuredIrfNote(outcome.measuredIrf()) + ".");
         }
-        page.paragraph("Status: " + r.status().name().toLowerCase(Locale.ROOT) + (r.message().isEmpty() ? "" : " — " + r.message()));
+        page.paragraph("Status: " + r.statusText() + (r.message().isEmpty() ? "" : " — " + r.message()));
         if (!r.ok()) {
             return page.render();
         }
@@ -55,7 +56,8 @@ public final class FitReport {
                     + num(p.upper() * t.factor()) + (p.upperOpen() ? " (open)" : "")).orElse("");
             String total = e.fixed() ? "" : outcome.totalStdError(e.key()).stream().mapToObj(v -> num(v * t.factor()))
                     .findFirst().orElse("—");
-            rows.add(List.of(t.key(), num(e.value() * t.factor()), e.fixed() ? "fixed" : num(e.stdError() * t.factor()), total, profile));
+            rows.add(List.of(ParameterNaming.label(e.key()).withUnit(), num(e.value() * t.factor()),
+                    e.fixed() ? "fixed" : num(e.stdError() * t.factor()), total, profile));
         }
         page.table(List.of("parameter", "value", "statistical error", "total error (with calibration)", "68% profile interval"), rows);
         if (outcome.fluenceScaleUncertainty() > 0) {
@@ -64,11 +66,9 @@ public final class FitReport {
                     new java.math.BigDecimal(100 * outcome.fluenceScaleUncertainty()).round(new java.math.MathContext(3))
                             .stripTrailingZeros().toPlainString()));
         }
-        String quality = outcome.quality() == null ? String.format(Locale.ROOT, "mean square residual %.4g", r.reducedChiSquare())
-                : outcome.quality().describe();
         page.paragraph(String.format(Locale.ROOT, "%s; %d points, %d free parameters; AIC %.6g, BIC %.6g. "
                 + "Statistical errors are scaled by the residuals' own mean square (as if the reduced χ² were 1).",
-                quality, r.points(), r.freeParameters(), r.aic(), r.bic()));
+                quality(data, outcome).describe(), r.points(), r.freeParameters(), r.aic(), r.bic()));
         page.heading(2, "Traces");
         List<List<String>> traceRows = new ArrayList<>();
         for (int i = 0; i < data.size(); i++) {
@@ -90,6 +90,15 @@ public final class FitReport {
             page.table(List.of("quantity", "plan", "fit", "note"), planRows);
         }
         return page.render();
+    }
+
+    /**
+     * How well the fit matches the data against the data's own noise (given uncertainties, else the residuals'
+     * point-to-point scatter): the outcome's, or measured here for an outcome built without one. Never the unweighted
+     * mean square, whose size is that of the signal's units squared and says nothing about the fit.
+     */
+    public static FitQuality quality(Dataset data, LadderFit.Outcome outcome) {
+        return outcome.quality() != null ? outcome.quality() : FitQuality.of(data, outcome.result());
     }
 
     /** One line saying which measured IRF the fit used, e.g. "measured IRF from irf.csv, FWHM 104 fs". */

@@ -155,7 +155,7 @@ class GlobalFitterTest {
                 ParameterSpec.unbounded("weight", "2", 0.5, 1.0), ParameterSpec.unbounded("weight", "3", 0.3, 1.0));
         FitResult r = GlobalFitter.fit(new FitProblem(d, model, specs, LinearTerms.AMPLITUDE_AND_BASELINE), FitOptions.defaults());
         assertThat(r.status()).isEqualTo(FitResult.Status.UNCERTAINTY_UNAVAILABLE);
-        assertThat(r.message()).isEqualTo("parameters weight2 and weight3 are not separately determined by these data "
+        assertThat(r.message()).isEqualTo("weight2 and weight3 are not separately determined by these data "
                 + "(fix one of them or add data)");
         assertThat(r.estimate("tau1S").stdError()).isNaN();
         assertThat(r.estimate("tau2S").fixed()).isTrue();

@@ -6,6 +6,7 @@ import java.util.Optional;
 import java.util.Set;
 import org.ladderkin.fit.Dataset;
 import org.ladderkin.fit.Excitation;
+import org.ladderkin.fit.FitIdentifiability;
 import org.ladderkin.fit.FitProgress;
 import org.ladderkin.fit.LadderFit;
 import org.ladderkin.fit.LadderFitSetup;
@@ -57,13 +58,29 @@ final class FitJobs {
         PlanFitBasis basis = basis(request.plan());
         Set<LadderParameter> free = new LinkedHashSet<>();
         request.options().free().forEach(k -> free.add(LadderParameter.of(k)));
+        LadderFit.Outcome outcome = LadderFit.fit(request.data(), setup(request, basis, free), progress);
+        PushBack push = outcome.result().converged() ? PushBack.of(outcome, request.data(), basis, free)
+                : PushBack.nothing(outcome.result().ok() ? "the fit did not converge: its best point so far is shown, not "
+                + "written into the plan" : "the fit failed");
+        return new Result(outcome, request.data(), push);
+    }
+
+    /**
+     * Whether the data can tell apart the parameters {@code request} frees, at the plan's values (the fit's start):
+     * one Jacobian, on a worker thread.
+     */
+    FitIdentifiability identifiability(FitRequest request) {
+        PlanFitBasis basis = basis(request.plan());
+        Set<LadderParameter> free = new LinkedHashSet<>();
+        request.options().free().forEach(k -> free.add(LadderParameter.of(k)));
+        return LadderFit.identifiability(request.data(), setup(request, basis, free));
+    }
+
+    private static LadderFitSetup setup(FitRequest request, PlanFitBasis basis, Set<LadderParameter> free) {
         Instrument ta = request.options().instrumentResponse() ? taInstrument(request.plan()).orElse(null) : null;
         double fwhm = ta == null || ta.measuredIrf() != null ? Double.NaN : ta.irfFwhmS();
-        LadderFitSetup setup = new LadderFitSetup(basis.base(), request.options().pulseTrain() ? basis.periodS() : Double.NaN,
+        return new LadderFitSetup(basis.base(), request.options().pulseTrain() ? basis.periodS() : Double.NaN,
                 free, planScale(kindOf(request.data()), basis), 0, fwhm, false, false, ta == null ? null : ta.measuredIrf());
-        LadderFit.Outcome outcome = LadderFit.fit(request.data(), setup, progress);
-        PushBack push = outcome.result().ok() ? PushBack.of(outcome, request.data(), basis, free) : PushBack.nothing("the fit failed");
-        return new Result(outcome, request.data(), push);
     }
 
     /** The plan's chosen repetition rate, once a job has computed the plan's ladder. */

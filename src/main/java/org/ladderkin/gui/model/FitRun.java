@@ -9,6 +9,7 @@ import java.util.concurrent.CopyOnWriteArrayList;
 import java.util.concurrent.Executor;
 import java.util.function.UnaryOperator;
 import org.ladderkin.fit.Dataset;
+import org.ladderkin.fit.FitProgress;
 import org.ladderkin.fit.LadderFit;
 import org.ladderkin.plan.PlanInputs;
 
@@ -29,21 +30,32 @@ public final class FitRun implements AutoCloseable {
     /** Where a fit stands. */
     public enum RunState { IDLE, RUNNING, DONE, FAILED, CANCELLED }
 
-    /** Model evaluations that make the progress bar half full; ladder fits usually take a few tens. */
-    static final double HALF_BAR_EVALUATIONS = 25;
+    /**
+     * @param result      the newest fit that finished and still matches its inputs; hidden while another one runs
+     * @param startedNanos when the running (or last) fit started, {@link System#nanoTime()}
+     * @param endedNanos  when it ended, or 0 while it runs
+     * @param evaluations model evaluations of the series so far
+     * @param first       the first point the optimiser told (the start), or null
+     * @param best        the best point so far, or null before the first evaluation
+     */
+    private record Status(RunState state, String stage, String message, FitJobs.Result result, long startedNanos,
+                          long endedNanos, int evaluations, FitProgress.Best first, FitProgress.Best best) {
 
-    /** @param result the newest fit that finished and still matches its inputs; hidden while another one runs */
-    private record Status(RunState state, double progress, String stage, String message, FitJobs.Result result) {
-
-        static final Status IDLE = new Status(RunState.IDLE, 0, "", "", null);
+        static final Status IDLE = new Status(RunState.IDLE, "", "", null, 0, 0, 0, null, null);
 
         Status ended(RunState s, String why, FitJobs.Result kept) {
-            return new Status(s, s == RunState.DONE ? 1 : 0, "", why, kept);
+            long end = endedNanos != 0 || startedNanos == 0 ? endedNanos : System.nanoTime();
+            return new Status(s, "", why, kept, startedNanos, end, evaluations, first, best);
+        }
+
+        Status withMessage(String why) {
+            return new Status(state, stage, why, result, startedNanos, endedNanos, evaluations, first, best);
         }
     }
 
     private final FitJobs jobs;
     private final LatestJobRunner runner;
+    private final Executor deliver;
     private final List<Runnable> listeners = new CopyOnWriteArrayList<>();
     private volatile Status status = Status.IDLE;
     private volatile FitOptions options = FitOptions.initial();
@@ -53,6 +65,7 @@ public final class FitRun implements AutoCloseable {
     FitRun(FitJobs jobs, Executor deliver) {
         this.jobs = Objects.requireNonNull(jobs, "jobs");
         this.runner = new LatestJobRunner("ladderkin-fit", deliver);
+        this.deliver = Objects.requireNonNull(deliver, "deliver");
     }
 
     /** {@code l} is told after every change, on the thread that made it. */
@@ -119,8 +132,9 @@ public final class FitRun implements AutoCloseable {
         synchronized (this) {
             FitRequest request = new FitRequest(data, plan, options);
             long mine = ++ticket;
-            status = new Status(RunState.RUNNING, 0, "starting", "fitting " + data.size() + " traces", status.result());
-            runner.submit(p -> jobs.compute(request, p), new LatestJobRunner.Callback<FitJobs.Result>() {
+            status = new Status(RunState.RUNNING, "starting", "fitting " + data.size() + " traces", status.result(),
+                    System.nanoTime(), 0, 0, null, null);
+            runner.submit(p -> jobs.compute(request, withBest(p, mine)), new LatestJobRunner.Callback<FitJobs.Result>() {
                 @Override
                 public void progress(String stage, int done, int total) {
                     progressed(mine, stage, done, total);
@@ -140,10 +154,28 @@ public final class FitRun implements AutoCloseable {
         fire();
     }
 
+    /**
+     * The runner's progress listener, also passing each new best point to this model (through the same
+     * {@code deliver} executor, dropped once the job is no longer the newest).
+     */
+    private FitProgress withBest(FitProgress runnerProgress, long mine) {
+        return new FitProgress() {
+            @Override
+            public void update(String stage, int done, int total) {
+                runnerProgress.update(stage, done, total);
+            }
+
+            @Override
+            public void improved(Best best) {
+                deliver.execute(() -> bestArrived(mine, best));
+            }
+        };
+    }
+
     /** Says why a fit could not start; nothing else changes. */
     void refuse(String why) {
         synchronized (this) {
-            status = new Status(status.state(), status.progress(), status.stage(), why, status.result());
+            status = status.withMessage(why);
         }
         fire();
     }
@@ -155,7 +187,9 @@ public final class FitRun implements AutoCloseable {
                 return;
             }
             stop();
-            status = status.ended(RunState.CANCELLED, "fit cancelled", status.result());
+            Status s = status;
+            status = s.ended(RunState.CANCELLED, s.best() == null ? "fit cancelled" : "fit cancelled after "
+                    + evaluationsText(s.evaluations()) + "; " + FitSummary.bestSoFar(s.first(), s.best()), s.result());
         }
         fire();
     }
@@ -203,10 +237,27 @@ public final class FitRun implements AutoCloseable {
                 return;
             }
             status = stage.equals("evaluation")
-                    ? new Status(s.state(), done / (done + HALF_BAR_EVALUATIONS), done + " model evaluation" + (done == 1 ? "" : "s"), s.message(), s.result())
-                    : new Status(s.state(), s.progress(), stage + " " + done + " of " + total, s.message(), s.result());
+                    ? new Status(s.state(), evaluationsText(done), s.message(), s.result(), s.startedNanos(), 0, done, s.first(), s.best())
+                    : new Status(s.state(), stage + " " + done + " of " + total, s.message(), s.result(), s.startedNanos(), 0,
+                    s.evaluations(), s.first(), s.best());
         }
         fire();
+    }
+
+    private void bestArrived(long mine, FitProgress.Best best) {
+        synchronized (this) {
+            Status s = status;
+            if (mine != ticket || s.state() != RunState.RUNNING) {
+                return;
+            }
+            status = new Status(s.state(), s.stage(), s.message(), s.result(), s.startedNanos(), 0, s.evaluations(),
+                    s.first() == null ? best : s.first(), best);
+        }
+        fire();
+    }
+
+    private static String evaluationsText(int n) {
+        return n + " model evaluation" + (n == 1 ? "" : "s");
     }
 
     private void ended(long mine, FitJobs.Result value, String thrown) {
@@ -216,8 +267,7 @@ public final class FitRun implements AutoCloseable {
             }
             if (value != null && value.outcome().result().ok()) {
                 var r = value.outcome().result();
-                status = status.ended(RunState.DONE, "fit " + r.status().name().toLowerCase(Locale.ROOT)
-                        + (r.message().isEmpty() ? "" : ": " + r.message()), value);
+                status = status.ended(RunState.DONE, "fit " + r.statusText() + (r.message().isEmpty() ? "" : ": " + r.message()), value);
             } else {
                 status = status.ended(RunState.FAILED, "fit failed: " + (thrown != null ? thrown : value.outcome().result().message()), null);
             }
@@ -231,9 +281,39 @@ public final class FitRun implements AutoCloseable {
         return status.state();
     }
 
-    /** Progress of a running fit, 0 to 1 (asymptotic: a fit's number of evaluations is not known in advance). */
-    public double progress() {
-        return status.progress();
+    /**
+     * What a running fit has done, live: elapsed time, model evaluations and the reduced χ² of the best point so far
+     * ("0:42 elapsed · 37 model evaluations · best χ²/ν 3.21"); after a fit, the same for the whole run with how it
+     * ended; "" before any fit. A fit's number of evaluations is not known in advance, so no fraction is claimed.
+     */
+    public String progressText() {
+        Status s = status;
+        if (s.startedNanos() == 0 || s.state() == RunState.IDLE) {
+            return "";
+        }
+        long end = s.endedNanos() == 0 ? System.nanoTime() : s.endedNanos();
+        String head = switch (s.state()) {
+            case RUNNING -> elapsed(end - s.startedNanos()) + " elapsed";
+            case DONE -> (s.result() != null && !s.result().outcome().result().converged() ? "not converged (best point so far) after "
+                    : "done in ") + elapsed(end - s.startedNanos());
+            case CANCELLED -> "cancelled after " + elapsed(end - s.startedNanos());
+            case FAILED -> "failed after " + elapsed(end - s.startedNanos());
+            case IDLE -> "";
+        };
+        String chi = s.best() == null ? "" : String.format(Locale.ROOT, " · best χ²/ν %.3g", s.best().reducedChiSquare());
+        return head + " · " + evaluationsText(s.evaluations()) + chi;
+    }
+
+    /** The best point the running (or last) fit has met, once it has met one. */
+    public Optional<FitProgress.Best> best() {
+        return Optional.ofNullable(status.best());
+    }
+
+    /** "0:42", "12:05", "1:02:03". */
+    static String elapsed(long nanos) {
+        long s = Math.max(0, nanos) / 1_000_000_000L;
+        return s >= 3600 ? String.format(Locale.ROOT, "%d:%02d:%02d", s / 3600, s / 60 % 60, s % 60)
+                : String.format(Locale.ROOT, "%d:%02d", s / 60, s % 60);
     }
 
     /** What the running fit is doing, e.g. "12 model evaluations". */

@@ -27,11 +27,13 @@ public final class FitSession implements AutoCloseable {
     private final FitData data = new FitData();
     private final FitRun fit;
     private final FitPreview preview;
+    private final FitCheck check;
 
     /** @param deliver runs results and progress (e.g. {@code SwingUtilities::invokeLater}) */
     public FitSession(Executor deliver) {
         fit = new FitRun(jobs, deliver);
         preview = new FitPreview(jobs, deliver);
+        check = new FitCheck(jobs, deliver);
     }
 
     public FitData data() {
@@ -46,11 +48,17 @@ public final class FitSession implements AutoCloseable {
         return preview;
     }
 
+    /** Whether the data can tell the freed parameters apart, checked before a fit. */
+    public FitCheck check() {
+        return check;
+    }
+
     /** {@code l} is told after every change of any of the three models, on the thread that made it. */
     public void addListener(Runnable l) {
         data.addListener(l);
         fit.addListener(l);
         preview.addListener(l);
+        check.addListener(l);
     }
 
     // ---- changes that concern more than one model ----------------------------------------------------------------
@@ -64,8 +72,15 @@ public final class FitSession implements AutoCloseable {
         if (problem.isEmpty()) {
             fit.reset();
             preview.setTraces(data.excited(), fit.options(), true);
+            recheck();
         }
         return problem;
+    }
+
+    /** Frees or holds one shared parameter for the next fit, and checks the new choice against the data. */
+    public void setFree(String key, boolean isFree) {
+        fit.setFree(key, isFree);
+        recheck();
     }
 
     /** Sets trace {@code i}'s excitation text; a change outdates the fit. */
@@ -73,6 +88,7 @@ public final class FitSession implements AutoCloseable {
         if (data.setExcitation(i, text)) {
             fit.inputsChanged();
             preview.setTraces(data.excited(), fit.options(), false);
+            recheck();
         }
     }
 
@@ -80,6 +96,7 @@ public final class FitSession implements AutoCloseable {
     public void setPulseTrain(boolean on) {
         if (fit.setPulseTrain(on)) {
             preview.setTraces(data.excited(), fit.options(), false);
+            recheck();
         }
     }
 
@@ -90,12 +107,22 @@ public final class FitSession implements AutoCloseable {
     public void setInstrumentResponse(boolean on) {
         if (fit.setInstrumentResponse(on)) {
             preview.setTraces(data.excited(), fit.options(), false);
+            recheck();
         }
     }
 
     /** The plan currently edited (its last valid state). */
     public void setPlan(PlanInputs inputs) {
+        Optional<PlanInputs> before = preview.plan();
         preview.setPlan(inputs);
+        if (!before.equals(preview.plan())) {
+            recheck();
+        }
+    }
+
+    /** Checks what a fit would now run on (the check drops an unchanged request and waits a moment itself). */
+    private void recheck() {
+        check.inputs(data.excited(), preview.plan(), fit.options());
     }
 
     /** Why a fit cannot start now, or empty when it can. */
@@ -138,6 +165,21 @@ public final class FitSession implements AutoCloseable {
                 ? "⚠ " + blocked.get() : message();
     }
 
+    /**
+     * The check before a fit: "⚠ Before fitting: τ_rad and τ_trap cannot be told apart … — Run Fit runs it anyway",
+     * a note while it is computed, or "" when the data tell the freed parameters apart (or nothing is loaded).
+     */
+    public String checkLine() {
+        if (data.traceCount() == 0) {
+            return "";
+        }
+        Optional<String> warning = check.warning();
+        if (warning.isPresent()) {
+            return "⚠ Before fitting: " + warning.get() + " — Run Fit runs it anyway.";
+        }
+        return check.checking() ? "checking whether the data can tell the freed parameters apart…" : "";
+    }
+
     /** The plan's chosen repetition rate used for pulse-train fits, once the plan's ladder has been computed. */
     public Optional<Double> planRepetitionRateHz() {
         return jobs.planRepetitionRateHz();
@@ -158,7 +200,7 @@ public final class FitSession implements AutoCloseable {
     /** Parameter rows of the fit, or of the plan's model (all held) before a fit. */
     public List<FitCharts.ParameterRow> parameterRows() {
         Shown s = shown();
-        return s.outcome() == null ? List.of() : FitCharts.rows(s.outcome());
+        return s.outcome() == null ? List.of() : FitSummary.rows(s.outcome());
     }
 
     /**
@@ -172,7 +214,7 @@ public final class FitSession implements AutoCloseable {
             lines.add(preview.problem());
         }
         if (s.outcome() != null) {
-            lines.addAll(FitCharts.diagnostics(s.outcome(), s.fitted()));
+            lines.addAll(FitSummary.diagnostics(s.data(), s.outcome(), s.fitted()));
         }
         return List.copyOf(lines);
     }
@@ -192,5 +234,6 @@ public final class FitSession implements AutoCloseable {
     public void close() {
         fit.close();
         preview.close();
+        check.close();
     }
 }

@@ -12,18 +12,21 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
+import java.awt.event.ActionEvent;
+import javax.swing.AbstractAction;
 import javax.swing.AbstractCellEditor;
+import javax.swing.Action;
 import javax.swing.JButton;
 import javax.swing.JCheckBox;
 import javax.swing.JFileChooser;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
-import javax.swing.JProgressBar;
 import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
 import javax.swing.JTable;
 import javax.swing.JTextArea;
 import javax.swing.JTextField;
+import javax.swing.Timer;
 import javax.swing.UIManager;
 import javax.swing.event.DocumentEvent;
 import javax.swing.event.DocumentListener;
@@ -45,7 +48,8 @@ import org.ladderkin.units.Quantity;
 
 /**
  * The "Measured data &amp; fit" view: load traces (file chooser or drag and drop), type each trace's excitation, choose
- * the freed parameters, run or cancel the fit with a progress bar, see the traces over the plan's model or the fit,
+ * the freed parameters (checked against the data before a fit), run or cancel the fit with its elapsed time,
+ * evaluations and best χ² so far, see the traces over the plan's model or the fit,
  * the residuals, the parameter table and diagnostics, and push the fitted values into the plan. State lives in the
  * {@link FitSession}'s models; this panel lays out, forwards and redraws, always on the event thread (the session
  * delivers fit results and progress there).
@@ -60,9 +64,27 @@ public final class FitPanel extends JPanel {
     private final Consumer<Path> directoryUsed;
 
     private final JButton load = new JButton("Load traces…");
-    private final JButton fit = new JButton("Fit");
-    private final JButton cancel = new JButton("Cancel");
-    private final JProgressBar progress = new JProgressBar(0, 1000);
+    /** Run Fit, enabled only when loaded traces and a valid plan let a fit start and none runs. */
+    private final Action runAction = new AbstractAction("Run Fit") {
+        @Override
+        public void actionPerformed(ActionEvent e) {
+            runFit();
+        }
+    };
+    /** Cancel Fit, enabled only while a fit runs. */
+    private final Action cancelAction = new AbstractAction("Cancel Fit") {
+        @Override
+        public void actionPerformed(ActionEvent e) {
+            run.cancel();
+        }
+    };
+    private final JButton fit = new JButton(runAction);
+    private final JButton cancel = new JButton(cancelAction);
+    /** Elapsed time, model evaluations and the best reduced χ² so far; a fit's length is not known in advance. */
+    private final JLabel progress = new JLabel(" ");
+    /** Ticks the elapsed time while a fit runs. */
+    private final Timer clock = new Timer(1000, e -> showProgress());
+    private final JLabel check = new JLabel(" ");
     private final JButton push = new JButton("Use fitted values in the plan");
     private final JLabel status = new JLabel(" ");
     private final ExcitationModel excitationModel = new ExcitationModel();
@@ -103,7 +125,7 @@ public final class FitPanel extends JPanel {
      * @param directoryUsed told the folder of loaded files
      */
     public FitPanel(FitSession session, PlanEditor editor, Supplier<Optional<Path>> lastDirectory, Consumer<Path> directoryUsed) {
-        super(new MigLayout("insets 6, fill", "[grow]", "[][][grow]"));
+        super(new MigLayout("insets 6, fill", "[grow]", "[][][][grow]"));
         this.session = session;
         this.data = session.data();
         this.run = session.fit();
@@ -120,20 +142,18 @@ public final class FitPanel extends JPanel {
         fit.setName("fit:run");
         cancel.setName("fit:cancel");
         progress.setName("fit:progress");
-        progress.setStringPainted(true);
+        check.setName("fit:check");
         push.setName("fit:push");
         status.setName("fit:status");
         load.addActionListener(e -> loadTracesWithChooser());
-        fit.addActionListener(e -> runFit());
-        cancel.addActionListener(e -> run.cancel());
         push.addActionListener(e -> pushBack());
         fit.setToolTipText("Fit the loaded traces (Ctrl+R)");
 
-        JPanel toolbar = new JPanel(new MigLayout("insets 0", "[][]16[][][180!]16[]"));
+        JPanel toolbar = new JPanel(new MigLayout("insets 0", "[][]16[][][320:320:, grow]16[]"));
         toolbar.add(load);
         toolbar.add(fit);
         toolbar.add(cancel);
-        toolbar.add(progress, "growx");
+        toolbar.add(progress, "wmin 0, growx");
         toolbar.add(push);
 
         excitations.setName("fit:excitations");
@@ -146,7 +166,7 @@ public final class FitPanel extends JPanel {
         for (FitOptions.FreeParameter p : FitRun.offered()) {
             JCheckBox box = new JCheckBox(p.label());
             box.setName("fit:free:" + p.key());
-            box.addActionListener(e -> run.setFree(p.key(), box.isSelected()));
+            box.addActionListener(e -> session.setFree(p.key(), box.isSelected()));
             freeBoxes.put(p.key(), box);
             freePanel.add(box);
         }
@@ -193,6 +213,7 @@ public final class FitPanel extends JPanel {
 
         add(toolbar, "growx, wrap");
         add(status, "wmin 0, growx, wrap");
+        add(check, "wmin 0, growx, hidemode 3, wrap");
         add(body, "grow");
         setTransferHandler(new FileDropHandler(files -> {
             loadFiles(files);
@@ -203,6 +224,19 @@ public final class FitPanel extends JPanel {
     }
 
     // ---- what the frame and tests use ---------------------------------------------------------------------------
+
+    /**
+     * The Run Fit action, enabled exactly when the panel's Run Fit button is (traces loaded and usable, a valid plan,
+     * no fit running), for the window's Fit menu.
+     */
+    public Action runAction() {
+        return runAction;
+    }
+
+    /** The Cancel Fit action, enabled only while a fit runs, for the window's Fit menu. */
+    public Action cancelAction() {
+        return cancelAction;
+    }
 
     /** Starts a fit, or says in the status line why it cannot start. */
     public void runFit() {
@@ -262,11 +296,22 @@ public final class FitPanel extends JPanel {
         boolean running = state == FitRun.RunState.RUNNING;
         Optional<String> blocked = session.runProblem();
         load.setEnabled(true);
-        fit.setEnabled(!running && blocked.isEmpty());
+        runAction.setEnabled(!running && blocked.isEmpty());
         fit.setToolTipText(blocked.map(b -> "Cannot fit yet: " + b).orElse("Fit the loaded traces (Ctrl+R)"));
-        cancel.setEnabled(running);
-        progress.setValue((int) Math.round(1000 * run.progress()));
-        progress.setString(running ? run.stage() : state.name().toLowerCase(java.util.Locale.ROOT));
+        cancelAction.setEnabled(running);
+        cancel.setToolTipText(running ? "Stop the fit; the best point it has met is shown" : "No fit is running");
+        showProgress();
+        if (running && !clock.isRunning()) {
+            clock.start();
+        } else if (!running) {
+            clock.stop();
+        }
+        String checkLine = session.checkLine();
+        check.setText(checkLine);
+        check.setToolTipText(checkLine.isEmpty() ? null : checkLine);
+        check.setVisible(!checkLine.isEmpty());
+        Color warn = UIManager.getColor("Ladderkin.verdict.fail");
+        check.setForeground(checkLine.startsWith("⚠") && warn != null ? warn : UIManager.getColor("Label.foreground"));
         PushBack p = run.pushBack();
         push.setEnabled(!p.edits().isEmpty());
         push.setToolTipText("<html>" + escape(String.join("<br>", pushLines(p))) + "</html>");
@@ -301,6 +346,18 @@ public final class FitPanel extends JPanel {
         }
         diagnostics.setText(String.join("\n", lines));
         diagnostics.setCaretPosition(0);
+    }
+
+    private void showProgress() {
+        String text = run.progressText();
+        progress.setText(text.isEmpty() ? " " : text);
+        progress.setToolTipText(text.isEmpty() ? null : text);
+    }
+
+    @Override
+    public void removeNotify() {
+        clock.stop();
+        super.removeNotify();
     }
 
     private static List<String> pushLines(PushBack p) {

@@ -58,7 +58,46 @@ class FitRunTest {
                 .isLessThan(4 * tau.stdError());
         ParameterEstimate sigma = run.outcome().orElseThrow().result().estimate("crossSectionM2");
         assertThat(Math.abs(sigma.value() - fx.series().sigmaM2())).isLessThan(4 * sigma.stdError());
-        assertThat(run.progress()).isEqualTo(1.0);
+        assertThat(run.progressText()).matches("done in \\d+:\\d\\d · \\d+ model evaluations · best χ²/ν [0-9.e+-]+");
+    }
+
+    @Test
+    void progressWhileRunningIsElapsedTimeEvaluationsAndTheBestChiSquareSoFar() {
+        List<String> seen = new CopyOnWriteArrayList<>();
+        run.addListener(() -> {
+            if (run.state() == FitRun.RunState.RUNNING && run.best().isPresent()) {
+                seen.add(run.progressText());
+            }
+        });
+        fitToTheEnd(fx.plan());
+        assertThat(seen).isNotEmpty().allMatch(t -> t.matches("\\d+:\\d\\d elapsed · \\d+ model evaluations? · best χ²/ν [0-9.e+-]+"));
+        // the best χ² shown only falls, and ends at the finished fit's quality
+        double[] chi = seen.stream().mapToDouble(t -> Double.parseDouble(t.substring(t.lastIndexOf(' ') + 1))).toArray();
+        for (int i = 1; i < chi.length; i++) {
+            assertThat(chi[i]).isLessThanOrEqualTo(chi[i - 1]);
+        }
+        assertThat(run.best().orElseThrow().reducedChiSquare()).isCloseTo(run.outcome().orElseThrow().quality().reducedChiSquare(),
+                org.assertj.core.data.Percentage.withPercentage(1e-6));
+        assertThat(FitRun.elapsed(62_500_000_000L)).isEqualTo("1:02");
+        assertThat(FitRun.elapsed(3_723_000_000_000L)).isEqualTo("1:02:03");
+    }
+
+    @Test
+    void aCancelledFitShowsItsBestPointSoFarAsNotConverged() {
+        int[] bests = {0};
+        run.addListener(() -> {
+            if (run.state() == FitRun.RunState.RUNNING && run.best().isPresent() && run.best().get().evaluations() > 1
+                    && bests[0]++ == 0) {
+                run.cancel();
+            }
+        });
+        run.start(data, fx.plan());
+        waitFor("the cancel", () -> run.state() != FitRun.RunState.RUNNING);
+        assertThat(run.state()).isEqualTo(FitRun.RunState.CANCELLED);
+        assertThat(run.message()).startsWith("fit cancelled after ").contains("best point so far (not converged): χ²/ν ")
+                .containsPattern("τ₂ = [0-9.e+-]+ ps");
+        assertThat(run.progressText()).startsWith("cancelled after ").contains("best χ²/ν");
+        assertThat(run.pushBack().edits()).isEmpty();
     }
 
     @Test
@@ -72,7 +111,7 @@ class FitRunTest {
         run.start(data, fx.plan());
         waitFor("the cancel", () -> run.state() != FitRun.RunState.RUNNING);
         assertThat(run.state()).isEqualTo(FitRun.RunState.CANCELLED);
-        assertThat(run.message()).isEqualTo("fit cancelled");
+        assertThat(run.message()).startsWith("fit cancelled");
         assertThat(run.outcome()).isEmpty();
         assertThat(progressSeen[0]).isEqualTo(1);
         // nothing of the cancelled fit arrives later, and the worker is free for the next one

@@ -65,11 +65,21 @@ class FitSessionTest {
         ParameterEstimate tau = session.fit().outcome().orElseThrow().result().estimate("tauAuger2S");
         double truth = FitDemoSeries.TAU2_FACTOR * PlanFitBasis.of(fx.plan()).model().tauBiexcitonS();
         assertThat(Math.abs(tau.value() - truth)).as(tau.value() + " ± " + tau.stdError()).isLessThan(4 * tau.stdError());
-        assertThat(session.parameterRows()).anyMatch(r -> r.name().startsWith("τ₂") && r.free() && r.value().endsWith(" ps")
-                && r.error().startsWith("± "));
+        assertThat(session.parameterRows()).anyMatch(r -> r.name().equals("τ₂ (ps)") && r.free()
+                && Double.parseDouble(r.value()) > 0 && r.error().startsWith("± "));
+        assertThat(session.parameterRows()).allMatch(r -> !r.name().matches(".*\\b[a-z]+[A-Z].*"));
         assertThat(session.overlayChart().title()).isEqualTo("Measured traces and the fit");
         assertThat(session.residualChart().series()).hasSize(session.data().traceCount());
-        assertThat(session.diagnostics()).anyMatch(l -> l.startsWith("χ²/dof"));
+        // the reduced χ² shown is the one against the data's noise: near 1 for the simulated series, never the
+        // unweighted mean square (here of order 1e-8 in the file's units)
+        String chi = session.diagnostics().stream().filter(l -> l.startsWith("reduced χ² = ")).findFirst().orElseThrow();
+        double shown = Double.parseDouble(chi.substring("reduced χ² = ".length(), chi.indexOf(',')));
+        var outcome = session.fit().outcome().orElseThrow();
+        assertThat(shown).isCloseTo(outcome.quality().reducedChiSquare(), org.assertj.core.data.Percentage.withPercentage(0.5))
+                .isBetween(0.5, 2.0);
+        assertThat(outcome.result().reducedChiSquare()).isLessThan(1e-4);
+        assertThat(chi).contains("the point-to-point scatter of the residuals");
+        assertThat(session.diagnostics()).noneMatch(l -> l.contains("χ²/dof"));
         assertThat(session.statusLine()).isEqualTo(session.fit().message()).startsWith("fit ");
 
         // pushing fitted values into the plan edits the plan: the fit must survive that
@@ -77,6 +87,25 @@ class FitSessionTest {
         session.setPlan(fx.editor().lastValid().orElseThrow());
         assertThat(session.fit().outcome()).isPresent();
         assertThat(session.overlayChart().title()).isEqualTo("Measured traces and the fit");
+    }
+
+    @Test
+    void beforeAFitTwoSlowLifetimesTheDataCannotSeparateAreFlaggedAndTheDefaultChoiceIsNot() {
+        Path demo = FitFixture.HOME.resolve("experiments-plan/fh-cdse-ta-series.csv");
+        assertThat(session.load(List.of(demo))).isEmpty();
+        waitFor("the check of σ and τ₂", () -> !session.check().checking());
+        assertThat(session.check().result()).as("the default choice was checked").isPresent();
+        assertThat(session.checkLine()).as(session.check().result().toString()).isEmpty();
+
+        session.setFree("tau-rad", true);
+        session.setFree("tau-trap", true);
+        waitFor("the check of τ_rad and τ_trap", () -> !session.check().checking());
+        var found = session.check().result().orElseThrow();
+        assertThat(found.warns()).as(found.toString()).isTrue();
+        assertThat(session.checkLine()).startsWith("⚠ Before fitting: τ_rad and τ_trap cannot be told apart")
+                .endsWith("— Run Fit runs it anyway.");
+        // a warning, not a block
+        assertThat(session.runProblem()).isEmpty();
     }
 
     @Test

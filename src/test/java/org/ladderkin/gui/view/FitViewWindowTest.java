@@ -91,7 +91,7 @@ class FitViewWindowTest {
 
         window.pressAndReleaseKey(KeyPressInfo.keyCode(KeyEvent.VK_R).modifiers(PlannerWindowTest.CTRL));
         waitFor("the fit", () -> GuiActionRunner.execute(() -> frame.fitSession().fit().state()) == FitRun.RunState.DONE);
-        assertThat(window.progressBar("fit:progress").target().getValue()).isEqualTo(1000);
+        assertThat(window.label("fit:progress").text()).matches("done in \\d+:\\d\\d · \\d+ model evaluations · best χ²/ν [0-9.e+-]+");
         var table = window.table("fit:parameters");
         int tauRow = -1;
         for (int r = 0; r < table.rowCount(); r++) {
@@ -100,11 +100,11 @@ class FitViewWindowTest {
             }
         }
         assertThat(tauRow).as("a τ₂ row").isNotNegative();
-        String tauText = table.valueAt(TableCell.row(tauRow).column(1));
-        assertThat(tauText).endsWith(" ps");
+        assertThat(table.valueAt(TableCell.row(tauRow).column(0))).isEqualTo("τ₂ (ps)");
+        assertThat(Double.parseDouble(table.valueAt(TableCell.row(tauRow).column(1)))).isPositive();
         assertThat(table.valueAt(TableCell.row(tauRow).column(2))).startsWith("± ");
         assertThat(table.valueAt(TableCell.row(tauRow).column(3))).isEqualTo("free");
-        assertThat(window.textBox("fit:diagnostics").text()).contains("χ²/dof");
+        assertThat(window.textBox("fit:diagnostics").text()).contains("reduced χ² = ").doesNotContain("χ²/dof");
         PlannerWindowTest.screenshot(frame, "planner-fit-light.png");
 
         double fittedTauS = GuiActionRunner.execute(() -> frame.fitSession().fit().outcome().orElseThrow().result().estimate("tauAuger2S").value());
@@ -162,8 +162,54 @@ class FitViewWindowTest {
         window.button("fit:cancel").requireDisabled();
         window.button("fit:run").requireEnabled();
         assertThat(window.label("fit:status").text()).isEqualTo("fit cancelled");
-        assertThat(GuiActionRunner.execute(() -> window.progressBar("fit:progress").target().getString())).isEqualTo("cancelled");
+        assertThat(window.label("fit:progress").text()).startsWith("cancelled after ");
         window.button("fit:push").requireDisabled();
+    }
+
+    @Test
+    void runAndCancelAreDisabledWithoutTracesAndProgressShowsEvaluationsAndTheBestChiSquare() {
+        window.tabbedPane("centre").selectTab("Measured data & fit");
+        window.button("fit:run").requireDisabled().requireText("Run Fit");
+        window.button("fit:cancel").requireDisabled().requireText("Cancel Fit");
+        assertThat(GuiActionRunner.execute(() -> frame.fitPanel().runAction().isEnabled())).isFalse();
+        assertThat(GuiActionRunner.execute(() -> frame.fitPanel().cancelAction().isEnabled())).isFalse();
+        assertThat(window.label("fit:progress").text().trim()).isEmpty();
+
+        GuiActionRunner.execute(() -> frame.fitPanel().loadFiles(java.util.List.of(csv)));
+        waitFor("the plan's curves", () -> GuiActionRunner.execute(() -> frame.fitSession().preview().hasCurves()));
+        window.button("fit:run").requireEnabled();
+        window.button("fit:cancel").requireDisabled();
+        assertThat(GuiActionRunner.execute(() -> frame.fitPanel().runAction().isEnabled())).isTrue();
+        assertThat(GuiActionRunner.execute(() -> frame.fitPanel().cancelAction().isEnabled())).isFalse();
+
+        // two 40-ns-scale lifetimes freed on data that end at 3 ns: warned before the run, which still runs
+        window.checkBox("fit:free:tau-rad").click();
+        window.checkBox("fit:free:tau-trap").click();
+        waitFor("the check", () -> GuiActionRunner.execute(() -> !frame.fitSession().check().checking()));
+        assertThat(window.label("fit:check").text()).startsWith("⚠ Before fitting: τ_rad and τ_trap cannot be told apart");
+        window.button("fit:run").requireEnabled();
+        window.checkBox("fit:free:tau-rad").click();
+        window.checkBox("fit:free:tau-trap").click();
+        waitFor("the check", () -> GuiActionRunner.execute(() -> !frame.fitSession().check().checking()));
+        var checkLabel = window.robot().finder().findByName(frame, "fit:check", javax.swing.JLabel.class, false);
+        assertThat(GuiActionRunner.execute(checkLabel::isVisible)).as("no warning for σ and τ₂").isFalse();
+
+        // what the progress label says while the fit runs, read right after the panel redrew it
+        java.util.List<String> shown = new java.util.concurrent.CopyOnWriteArrayList<>();
+        boolean[] cancelEnabled = {false};
+        GuiActionRunner.execute(() -> frame.fitSession().addListener(() -> {
+            if (frame.fitSession().fit().state() == FitRun.RunState.RUNNING) {
+                shown.add(window.label("fit:progress").target().getText());
+                cancelEnabled[0] |= frame.fitPanel().cancelAction().isEnabled() && !frame.fitPanel().runAction().isEnabled();
+            }
+        }));
+        window.button("fit:run").click();
+        waitFor("the fit", () -> GuiActionRunner.execute(() -> frame.fitSession().fit().state()) == FitRun.RunState.DONE);
+        assertThat(cancelEnabled[0]).as("Cancel enabled and Run disabled while running").isTrue();
+        assertThat(shown).anyMatch(t -> t.matches("\\d+:\\d\\d elapsed · \\d+ model evaluations? · best χ²/ν [0-9.e+-]+"));
+        window.button("fit:cancel").requireDisabled();
+        window.button("fit:run").requireEnabled();
+        assertThat(window.label("fit:progress").text()).startsWith("done in ").contains("model evaluations").contains("best χ²/ν");
     }
 
     @Test
