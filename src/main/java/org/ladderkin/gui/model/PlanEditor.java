@@ -63,6 +63,9 @@ public final class PlanEditor {
     private ObjectNode document;
     private SourcePositions positions = SourcePositions.NONE;
     private ObjectNode saved;
+    // the file's text as opened or last saved, and the document it reads as: a save changes only what changed
+    private String sourceText;
+    private ObjectNode sourceDocument;
     private Path file;
     private PlanCheck check;
     private PlanInputs lastValid;
@@ -294,6 +297,7 @@ public final class PlanEditor {
         }
         // the tree was built for this editor alone, so it is taken without a copy
         replace(object, tree.positions(), planFile.toAbsolutePath().normalize());
+        source(readText(planFile), object);
         fire(Change.REPLACED, null);
     }
 
@@ -306,12 +310,15 @@ public final class PlanEditor {
     }
 
     /**
-     * Saves to {@code target}, atomically, and makes it the current file. Data files the plan names by a relative
+     * Saves to {@code target}, atomically, and makes it the current file. The text is the file's text as opened (or
+     * last saved) with only the changed values rewritten ({@link SplicedJson}), so key order, layout and number
+     * spellings stay; an untitled plan is written whole. Data files the plan names by a relative
      * path (spectrum, IRF) are re-expressed relative to the new folder, so a plan saved elsewhere still finds them.
      */
     public void saveAs(Path target) throws IOException {
         ObjectNode toSave = rebased(SampleCodec.baseDir(target.toAbsolutePath().normalize()));
-        String text = ResolvedJson.toText(toSave);
+        String text = sourceText == null ? ResolvedJson.toText(toSave)
+                : SplicedJson.update(sourceText, sourceDocument, toSave).orElseGet(() -> ResolvedJson.toText(toSave));
         AtomicFiles.writeString(target, text);
         boolean pathsChanged = !toSave.equals(document);
         file = target.toAbsolutePath().normalize();
@@ -320,6 +327,7 @@ public final class PlanEditor {
         document = (ObjectNode) written.json();
         positions = written.positions();
         saved = document.deepCopy();
+        source(text, document);
         history.boundary();
         recheck();
         if (pathsChanged) {
@@ -359,12 +367,25 @@ public final class PlanEditor {
     public void restore(ObjectNode recovered, Path originalFile) {
         replace(recovered.deepCopy(), SourcePositions.NONE, originalFile);
         saved = null;
+        if (originalFile != null) {
+            // the file as it is on disk: saving the restored plan then changes only what the recovery changed
+            try {
+                String text = readText(originalFile);
+                if (JsonTree.of(text, originalFile.toString()).json() instanceof ObjectNode onDisk) {
+                    source(text, onDisk);
+                }
+            } catch (InputException e) {
+                // unreadable or gone: the plan is saved as a whole
+            }
+        }
         fire(Change.REPLACED, null);
     }
 
     // ---- internals ---------------------------------------------------------------------------------------------
 
     private void replace(ObjectNode doc, SourcePositions newPositions, Path newFile) {
+        sourceText = null;
+        sourceDocument = null;
         document = doc;
         positions = newPositions;
         file = newFile;
@@ -372,6 +393,20 @@ public final class PlanEditor {
         saved = doc.deepCopy();
         lastValid = null;
         recheckAllFields();
+    }
+
+    private void source(String text, ObjectNode readAs) {
+        sourceText = text;
+        sourceDocument = text == null ? null : readAs.deepCopy();
+    }
+
+    /** The file's text, or null when it cannot be read again (it was read a moment ago). */
+    private static String readText(Path f) {
+        try {
+            return java.nio.file.Files.readString(f);
+        } catch (IOException | RuntimeException e) {
+            return null;
+        }
     }
 
     private void restoreSnapshot(Snapshot snapshot) {
