@@ -199,6 +199,23 @@ public final class PlanEditor {
         return history.canRedo();
     }
 
+    /** What undo would take back, in the form's words ("pump radius"), if anything. */
+    public Optional<String> undoName() {
+        return history.undoName();
+    }
+
+    /** What redo would make again, if anything. */
+    public Optional<String> redoName() {
+        return history.redoName();
+    }
+
+    /** A field's label as a menu names its step: "pump radius", but "IRF FWHM" as written. */
+    static String stepName(FieldSpec field) {
+        String label = field.label();
+        boolean word = label.length() > 1 && Character.isUpperCase(label.charAt(0)) && Character.isLowerCase(label.charAt(1));
+        return word ? Character.toLowerCase(label.charAt(0)) + label.substring(1) : label;
+    }
+
     // ---- editing -----------------------------------------------------------------------------------------------
 
     /**
@@ -219,7 +236,10 @@ public final class PlanEditor {
             }
             return;
         }
-        history.beforeEdit(new Snapshot(document, positions), path);
+        // typing that came back to where it began leaves no step behind
+        if (!history.revertsOpenRun(path, s -> s.document().equals(next))) {
+            history.beforeEdit(new Snapshot(document, positions), path, stepName(field));
+        }
         document = next;
         positions = positions.without(field.path().pointer());
         recheck();
@@ -254,7 +274,8 @@ public final class PlanEditor {
             return;
         }
         history.boundary();
-        history.beforeEdit(new Snapshot(document, positions), null);
+        history.beforeEdit(new Snapshot(document, positions), null, edits.size() == 1
+                ? stepName(edits.get(0).getKey()) : edits.size() + " fields");
         history.boundary();
         document = next;
         positions = nextPositions;

@@ -381,6 +381,8 @@ public final class PlannerFrame extends JFrame {
         }
         undoAction.setEnabled(editor.canUndo());
         redoAction.setEnabled(editor.canRedo());
+        undoAction.putValue(Action.NAME, editor.undoName().map(n -> "Undo: " + n).orElse("Undo"));
+        redoAction.putValue(Action.NAME, editor.redoName().map(n -> "Redo: " + n).orElse("Redo"));
     }
 
     // ---- user actions -------------------------------------------------------------------------------------------
