@@ -48,6 +48,7 @@ import org.ladderkin.gui.chart.ChartExport;
 import org.ladderkin.gui.model.Autosaver;
 import org.ladderkin.gui.model.FitSession;
 import org.ladderkin.gui.model.PlanEditor;
+import org.ladderkin.gui.model.PlanFiles;
 import org.ladderkin.gui.model.PlanForms;
 import org.ladderkin.gui.model.Prediction;
 import org.ladderkin.gui.model.PredictionReport;
@@ -666,7 +667,7 @@ public final class PlannerFrame extends JFrame {
     private void rebuildRecentMenu() {
         recentMenu.removeAll();
         for (Path p : prefs.recentFiles().files()) {
-            JMenuItem item = new JMenuItem(p.getFileName().toString());
+            JMenuItem item = new JMenuItem(PlanFiles.menuLabel(p));
             item.setToolTipText(p.toString());
             item.addActionListener(e -> openRecent(p));
             recentMenu.add(item);
@@ -731,7 +732,19 @@ public final class PlannerFrame extends JFrame {
 
     private JFileChooser chooser() {
         JFileChooser chooser = new JFileChooser(prefs.lastDirectory().map(Path::toFile).orElse(null));
-        chooser.setFileFilter(new FileNameExtensionFilter("Campaign plans (*.json)", "json"));
+        chooser.addChoosableFileFilter(new FileNameExtensionFilter("All JSON files (*.json)", "json"));
+        // not every .json is a plan: trace sidecars, samples and materials sit beside plans
+        chooser.setFileFilter(new javax.swing.filechooser.FileFilter() {
+            @Override
+            public boolean accept(java.io.File f) {
+                return PlanFiles.listed(f.toPath());
+            }
+
+            @Override
+            public String getDescription() {
+                return "Campaign plans (*.plan.json, or a plan's schema)";
+            }
+        });
         return chooser;
     }
 
