@@ -176,8 +176,7 @@ public final class PlanForms {
     /** The fields of instrument {@code index} of the document, chosen by its {@code kind}. */
     public static List<FieldSpec> instrument(JsonNode document, int index) {
         String p = "instruments[" + index + "].";
-        JsonNode kindNode = JsonPath.of(p + "kind").get(document);
-        String kind = kindNode == null ? "" : kindNode.asText();
+        String kind = instrumentKind(document, index);
         List<FieldSpec> fields = new ArrayList<>();
         if (kind.equals(Instrument.Kind.TCSPC.key())) {
             fields.add(FieldSpec.quantity("Time bin", p + "timeBin", Dimension.TIME, "width of one TCSPC histogram bin"));
@@ -211,7 +210,7 @@ public final class PlanForms {
 
     /** The {@code kind} of instrument {@code index}, or "" when missing. */
     public static String instrumentKind(JsonNode document, int index) {
-        JsonNode n = JsonPath.of("instruments[" + index + "].kind").get(document);
-        return n == null ? "" : n.asText();
+        return document.at(com.fasterxml.jackson.core.JsonPointer.empty().appendProperty("instruments")
+                .appendIndex(index).appendProperty("kind")).asText("");
     }
 }
