@@ -147,9 +147,50 @@ public final class PlanEditor {
             return Optional.of(typed);
         }
         if (!check.valid() && field.path().concerns(check.field())) {
-            return Optional.of(check.problem());
+            return Optional.of(inFormWords(field));
         }
         return Optional.empty();
+    }
+
+    /**
+     * The first marked field and its problem, in the words its tooltip uses ("Lowest pulse energy: must be > 0, was
+     * 0 nJ"), for a status line; empty when no field is marked.
+     */
+    public Optional<String> firstFieldProblem() {
+        for (FieldSpec f : fields()) {
+            Optional<String> p = problem(f);
+            if (p.isPresent()) {
+                return Optional.of(f.label() + ": " + p.get());
+            }
+        }
+        return Optional.empty();
+    }
+
+    /**
+     * The plan reader's problem as the form shows it. The file writes a range as one list, "[lowest, highest]", and
+     * the reader says so; the form shows the two ends as two fields, so it names the other field instead.
+     */
+    private String inFormWords(FieldSpec field) {
+        if (check.key() == InputProblem.BAD_ORDER && check.field() != null) {
+            FieldSpec low = fieldAt(check.field() + "[0]");
+            FieldSpec high = fieldAt(check.field() + "[1]");
+            if (low != null && high != null) {
+                boolean isHigh = field.path().equals(high.path());
+                FieldSpec other = isHigh ? low : high;
+                return (isHigh ? "must be above the " : "must be below the ") + stepName(other) + " ("
+                        + other.read(document) + ")";
+            }
+        }
+        return check.problem();
+    }
+
+    private FieldSpec fieldAt(String path) {
+        for (FieldSpec f : fields()) {
+            if (f.path().toString().equals(path)) {
+                return f;
+            }
+        }
+        return null;
     }
 
     /**

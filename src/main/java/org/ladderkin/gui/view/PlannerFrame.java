@@ -376,7 +376,8 @@ public final class PlannerFrame extends JFrame {
             planStatus.setToolTipText(null);
         } else {
             String general = editor.generalProblem().orElse(null);
-            String msg = general != null ? general : "a marked field needs attention: " + editor.check().problem();
+            String msg = general != null ? general : "a marked field needs attention — "
+                    + editor.firstFieldProblem().orElse(editor.check().problem());
             planStatus.setText("⚠ " + msg + (editor.lastValid().isPresent() ? " — charts show the last valid plan" : ""));
             planStatus.setToolTipText(msg);
         }
