@@ -66,7 +66,7 @@ public record Quantity(double value, Unit unit) {
     public static Quantity parse(String text, Dimension expected) {
         Objects.requireNonNull(text, "text");
         Matcher m = NUMBER_THEN_UNIT.matcher(text);
-        String wanted = expected == null ? "a quantity such as 50 ps" : "a " + expected.label() + " such as " + expected.example();
+        String wanted = expected == null ? "a quantity such as 50 ps" : article(expected.label()) + " such as " + expected.example();
         if (!m.matches()) {
             throw new QuantityFormatException(text, QuantityFormatException.Reason.BAD_NUMBER, "cannot read a number in '" + text + "': expected " + wanted);
         }
@@ -86,10 +86,15 @@ public record Quantity(double value, Unit unit) {
                     + " (units: " + Units.accepted(expected) + ")");
         }
         Unit unit = Units.find(unitText);
+        if (unit == null && unitText.matches(",\\d.*")) {
+            // "1,5 nJ": a decimal comma; unlike a table cell, a quantity's comma may separate list items
+            throw new QuantityFormatException(text, QuantityFormatException.Reason.BAD_NUMBER, "decimal comma in '" + text
+                    + "': write the decimal with a point (" + m.group(1) + "." + unitText.substring(1) + ")");
+        }
         if (unit == null) {
             String list = expected == null ? "see 'ladderkin --help'" : Units.accepted(expected);
             throw new QuantityFormatException(text, QuantityFormatException.Reason.UNKNOWN_UNIT, "unknown unit '" + unitText + "' in '" + text + "': expected "
-                    + (expected == null ? "a known unit" : "a " + expected.label() + " in " + list));
+                    + (expected == null ? "a known unit" : article(expected.label()) + " in " + list));
         }
         if (expected != null && unit.dimension() != expected) {
             throw new QuantityFormatException(text, QuantityFormatException.Reason.WRONG_DIMENSION, "'" + text + "' is " + article(unit.dimension().label()) + ", expected "

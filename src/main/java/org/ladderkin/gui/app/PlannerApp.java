@@ -3,9 +3,12 @@ package org.ladderkin.gui.app;
 import java.awt.GraphicsEnvironment;
 import java.awt.event.WindowAdapter;
 import java.awt.event.WindowEvent;
+import java.io.IOException;
 import java.lang.reflect.InvocationTargetException;
 import java.nio.file.Path;
 import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.function.Consumer;
 import javax.swing.SwingUtilities;
 import org.ladderkin.gui.model.PlannerPrediction;
 import org.ladderkin.gui.model.RecoveryStore;
@@ -34,17 +37,27 @@ public final class PlannerApp {
         System.setProperty("awt.useSystemAAFontSettings", System.getProperty("awt.useSystemAAFontSettings", "on"));
         GuiPrefs prefs = GuiPrefs.user();
         CountDownLatch closed = new CountDownLatch(1);
+        RecoveryStore recovery = new RecoveryStore(RecoveryStore.defaultFolder());
+        PlannerPrediction source = new PlannerPrediction();
+        // the planner runs until its last window is closed: recovered plans may open windows of their own
+        AtomicInteger open = new AtomicInteger();
+        Consumer<PlannerFrame> track = frame -> {
+            open.incrementAndGet();
+            frame.addWindowListener(new WindowAdapter() {
+                @Override
+                public void windowClosed(WindowEvent e) {
+                    if (open.decrementAndGet() == 0) {
+                        closed.countDown();
+                    }
+                }
+            });
+        };
         try {
             SwingUtilities.invokeAndWait(() -> {
                 prefs.theme().install();
-                PlannerFrame frame = new PlannerFrame(prefs, new RecoveryStore(RecoveryStore.defaultFolder()),
-                        new PlannerPrediction());
-                frame.addWindowListener(new WindowAdapter() {
-                    @Override
-                    public void windowClosed(WindowEvent e) {
-                        closed.countDown();
-                    }
-                });
+                PlannerFrame frame = new PlannerFrame(prefs, recovery, source);
+                track.accept(frame);
+                frame.setWindowOpener(r -> openRecovered(prefs, recovery, source, track, r));
                 if (plan != null) {
                     frame.openFile(plan);
                 }
@@ -57,6 +70,20 @@ public final class PlannerApp {
             throw cause instanceof RuntimeException r ? r : new IllegalStateException(cause);
         }
         closed.await();
+    }
+
+    /** A window of its own for a recovered plan that the first window did not take. */
+    private static void openRecovered(GuiPrefs prefs, RecoveryStore recovery, PlannerPrediction source,
+                                      Consumer<PlannerFrame> track, RecoveryStore.Recovered r) {
+        PlannerFrame frame = new PlannerFrame(prefs, recovery, source);
+        track.accept(frame);
+        frame.setWindowOpener(next -> openRecovered(prefs, recovery, source, track, next));
+        try {
+            frame.restore(r);
+        } catch (IOException e) {
+            // the plan is restored all the same; only its copy stays unowned and is offered again next time
+        }
+        frame.setVisible(true);
     }
 
     /** Predictions computed after start-up so the compiler has done its work before the user's first edit. */

@@ -3,17 +3,23 @@ package org.ladderkin.gui.model;
 import java.util.ArrayDeque;
 import java.util.Deque;
 import java.util.Objects;
+import java.util.Optional;
+import java.util.function.Predicate;
 
 /**
  * Undo and redo as snapshots of the whole plan document. A plan is a few kilobytes, so snapshots are cheaper to get
  * right than inverse operations. Snapshots must not change once handed over. Consecutive edits with the same coalescing key (typing in one field)
- * make one undo step until {@link #boundary()} is called (focus left the field, a save, an undo).
+ * make one undo step until {@link #boundary()} is called (focus left the field, a save, an undo). Each step carries
+ * the name a menu shows for it ("pump radius").
  */
 public final class EditHistory<S> {
 
+    private record Step<S>(S state, String name) {
+    }
+
     private final int capacity;
-    private final Deque<S> undo = new ArrayDeque<>();
-    private final Deque<S> redo = new ArrayDeque<>();
+    private final Deque<Step<S>> undo = new ArrayDeque<>();
+    private final Deque<Step<S>> redo = new ArrayDeque<>();
     private String openKey;
 
     /** @param capacity how many undo steps are kept; older ones are dropped */
@@ -31,12 +37,24 @@ public final class EditHistory<S> {
      * @param key    coalescing key (the field's path), or null for an edit that never merges
      */
     public void beforeEdit(S before, String key) {
+        beforeEdit(before, key, "");
+    }
+
+    /**
+     * Called before an edit changes the document.
+     *
+     * @param before the document as it was before this edit
+     * @param key    coalescing key (the field's path), or null for an edit that never merges
+     * @param name   what the step changes, for "Undo: name"
+     */
+    public void beforeEdit(S before, String key, String name) {
         Objects.requireNonNull(before, "before");
+        Objects.requireNonNull(name, "name");
         redo.clear();
         if (key != null && key.equals(openKey)) {
             return;
         }
-        undo.push(before);
+        undo.push(new Step<>(before, name));
         while (undo.size() > capacity) {
             undo.removeLast();
         }
@@ -48,6 +66,20 @@ public final class EditHistory<S> {
         openKey = null;
     }
 
+    /**
+     * Whether an edit with {@code key} ends the open run of merged edits where it began ({@code unchanged} says the
+     * document after the edit equals that run's snapshot); if so the run's step is forgotten, so undo never offers a
+     * step that changes nothing. The caller then records no step for this edit.
+     */
+    public boolean revertsOpenRun(String key, Predicate<S> unchanged) {
+        if (key == null || !key.equals(openKey) || undo.isEmpty() || !unchanged.test(undo.peek().state())) {
+            return false;
+        }
+        undo.pop();
+        openKey = null;
+        return true;
+    }
+
     public boolean canUndo() {
         return !undo.isEmpty();
     }
@@ -56,14 +88,25 @@ public final class EditHistory<S> {
         return !redo.isEmpty();
     }
 
+    /** The name of the step undo would take back, if any. */
+    public Optional<String> undoName() {
+        return undo.isEmpty() ? Optional.empty() : Optional.of(undo.peek().name());
+    }
+
+    /** The name of the step redo would make again, if any. */
+    public Optional<String> redoName() {
+        return redo.isEmpty() ? Optional.empty() : Optional.of(redo.peek().name());
+    }
+
     /** The snapshot to return to, given the current document; the current one becomes redoable. */
     public S undo(S current) {
         if (undo.isEmpty()) {
             throw new IllegalStateException("nothing to undo");
         }
         openKey = null;
-        redo.push(current);
-        return undo.pop();
+        Step<S> step = undo.pop();
+        redo.push(new Step<>(current, step.name()));
+        return step.state();
     }
 
     /** The snapshot undone last, given the current document; the current one becomes undoable. */
@@ -72,8 +115,9 @@ public final class EditHistory<S> {
             throw new IllegalStateException("nothing to redo");
         }
         openKey = null;
-        undo.push(current);
-        return redo.pop();
+        Step<S> step = redo.pop();
+        undo.push(new Step<>(current, step.name()));
+        return step.state();
     }
 
     /** Forgets everything (a new or opened document). */

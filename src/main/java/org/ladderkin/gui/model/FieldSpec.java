@@ -7,9 +7,12 @@ import com.fasterxml.jackson.databind.node.TextNode;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.Set;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Quantity;
 import org.ladderkin.units.QuantityFormatException;
@@ -25,10 +28,12 @@ import org.ladderkin.units.QuantityFormatException;
  * @param choices   allowed words (for {@link Kind#CHOICE} and {@link Kind#KEY_SET}), file-name extensions offered
  *                  for {@link Kind#FILE}, else empty
  * @param optional  a blank field removes the key from the document instead of storing ""
- * @param help      one sentence for the tooltip
+ * @param help      one sentence for the tooltip, in the user's words (no file keys)
+ * @param choiceLabels what a form shows for a choice ("biexciton Auger lifetime" for "biexciton-auger"); a choice
+ *                  missing here is shown as written
  */
 public record FieldSpec(String label, JsonPath path, Kind kind, Dimension dimension, List<String> choices,
-                        boolean optional, String help) {
+                        boolean optional, String help, Map<String, String> choiceLabels) {
 
     /** How the text of a field maps to JSON. */
     public enum Kind {
@@ -59,12 +64,19 @@ public record FieldSpec(String label, JsonPath path, Kind kind, Dimension dimens
         Objects.requireNonNull(kind, "kind");
         choices = List.copyOf(choices);
         help = help == null ? "" : help;
+        choiceLabels = Map.copyOf(choiceLabels);
         if ((kind == Kind.QUANTITY || kind == Kind.QUANTITY_LIST) && dimension == null) {
             throw new IllegalArgumentException("quantity field '" + path + "' needs a dimension");
         }
         if ((kind == Kind.CHOICE || kind == Kind.KEY_SET) && choices.isEmpty()) {
             throw new IllegalArgumentException("choice field '" + path + "' needs choices");
         }
+    }
+
+    /** A field whose choices are shown as written. */
+    public FieldSpec(String label, JsonPath path, Kind kind, Dimension dimension, List<String> choices, boolean optional,
+                     String help) {
+        this(label, path, kind, dimension, choices, optional, help, Map.of());
     }
 
     /** A required quantity field. */
@@ -108,7 +120,17 @@ public record FieldSpec(String label, JsonPath path, Kind kind, Dimension dimens
 
     /** The same field, but a blank value removes the key (the instance is not changed). */
     public FieldSpec asOptional() {
-        return new FieldSpec(label, path, kind, dimension, choices, true, help);
+        return new FieldSpec(label, path, kind, dimension, choices, true, help, choiceLabels);
+    }
+
+    /** The same field showing its choices in these words. */
+    public FieldSpec withChoiceLabels(Map<String, String> labels) {
+        return new FieldSpec(label, path, kind, dimension, choices, optional, help, labels);
+    }
+
+    /** What a form shows for {@code choice}. */
+    public String choiceLabel(String choice) {
+        return choiceLabels.getOrDefault(choice, choice);
     }
 
     /** The text this field shows for the document: "" when absent, list items joined by ", ". */
@@ -137,7 +159,8 @@ public record FieldSpec(String label, JsonPath path, Kind kind, Dimension dimens
         }
         JsonNodeFactory f = JsonNodeFactory.instance;
         return Optional.of(switch (kind) {
-            case TEXT, QUANTITY, FRACTION, CHOICE, FILE -> TextNode.valueOf(t);
+            case QUANTITY, FRACTION -> TextNode.valueOf(decimalPoint(t));
+            case TEXT, CHOICE, FILE -> TextNode.valueOf(t);
             case QUANTITY_LIST, KEY_SET -> {
                 ArrayNode a = f.arrayNode();
                 splitList(t).forEach(a::add);
@@ -166,14 +189,18 @@ public record FieldSpec(String label, JsonPath path, Kind kind, Dimension dimens
         try {
             switch (kind) {
                 case TEXT, FILE -> { }
-                case QUANTITY -> positiveOrZero(Quantity.parse(t, dimension));
+                case QUANTITY -> positive(Quantity.parse(decimalPoint(t), dimension));
                 case QUANTITY_LIST -> {
+                    Optional<String> comma = decimalCommaInList(t);
+                    if (comma.isPresent()) {
+                        return comma;
+                    }
                     for (String part : splitList(t)) {
-                        positiveOrZero(Quantity.parse(part, dimension));
+                        positive(Quantity.parse(part, dimension));
                     }
                 }
                 case FRACTION -> {
-                    double p = Quantity.parse(t, Dimension.DIMENSIONLESS).si();
+                    double p = Quantity.parse(decimalPoint(t), Dimension.DIMENSIONLESS).si();
                     if (p < 0 || p > 1) {
                         return Optional.of("must be a fraction between 0 and 1 (e.g. \"5 %\"), was " + t);
                     }
@@ -214,10 +241,37 @@ public record FieldSpec(String label, JsonPath path, Kind kind, Dimension dimens
         return Optional.empty();
     }
 
-    private static void positiveOrZero(Quantity q) {
-        if (q.si() < 0 && q.unit().offsetSi() == 0) {
-            throw new QuantityFormatException(q.format(), QuantityFormatException.Reason.OUT_OF_RANGE, "must not be negative, was " + q.format());
+    /** The plan reader's own words for the same problem, so a field and the status bar never disagree. */
+    private static void positive(Quantity q) {
+        if (!(q.si() > 0) && q.unit().offsetSi() == 0) {
+            throw new QuantityFormatException(q.format(), QuantityFormatException.Reason.OUT_OF_RANGE, "must be > 0, was " + q.format());
         }
+    }
+
+    /** A single number written with a decimal comma ("1,5 nJ"), or null. */
+    private static final Pattern DECIMAL_COMMA = Pattern.compile("^([+-]?\\d+),(\\d+(?:[eE][+-]?\\d+)?)(\\s*[^\\d,;].*)?$");
+
+    /**
+     * "1,5 nJ" read as "1.5 nJ", as the trace tables read decimal commas; stored with a point so the plan file reads
+     * the same everywhere. Only one value: in a list the comma separates items.
+     */
+    static String decimalPoint(String text) {
+        Matcher m = DECIMAL_COMMA.matcher(text);
+        return m.matches() ? m.group(1) + "." + m.group(2) + (m.group(3) == null ? "" : m.group(3)) : text;
+    }
+
+    /** In a list, "1,5 nJ" is the items "1" and "5 nJ": said plainly instead of "missing unit in '1'". */
+    private Optional<String> decimalCommaInList(String text) {
+        List<String> parts = splitList(text);
+        for (int i = 0; i + 1 < parts.size(); i++) {
+            String joined = parts.get(i) + "," + parts.get(i + 1);
+            // "1, 2 nJ" is a list with a unit missing; only "1,2 nJ" without a space reads as a decimal comma
+            if (parts.get(i).matches("[+-]?\\d+") && parts.get(i + 1).matches("\\d.*") && text.contains(joined)) {
+                return Optional.of("'" + joined + "': commas separate the items of this list; write decimals with a point ("
+                        + decimalPoint(joined) + ")");
+            }
+        }
+        return Optional.empty();
     }
 
     private String example() {

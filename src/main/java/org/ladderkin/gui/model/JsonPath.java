@@ -3,25 +3,27 @@ package org.ladderkin.gui.model;
 import com.fasterxml.jackson.core.JsonPointer;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.Objects;
 
 /**
  * A form field's place in the plan document, spelled the way {@link org.ladderkin.io.InputException#field()} names
  * fields ({@code laser.pulseEnergyRange[1]}, {@code instruments[0].irfFwhm}) so an error from the plan reader lands
- * on the field that shows the offending value. Reading and removing go through the equivalent Jackson
- * {@link JsonPointer}; only setting is done here, because a form may fill an item beyond the end of a list and
- * Jackson has no "grow the list up to this index" operation.
+ * on the field that shows the offending value. Everything else is Jackson's JSON Pointer support on the equivalent
+ * {@link JsonPointer}: reading ({@link JsonNode#at}), creating what is missing ({@code withObject}, {@code withArray})
+ * and removing; only the growth of a list up to an index, which Jackson leaves to the caller, is done here.
  */
 public final class JsonPath {
 
     private final String text;
     private final JsonPointer pointer;
+    // a pointer cannot tell "[1]" from ".1"; the path can
+    private final boolean lastIsIndex;
 
     private JsonPath(String text, JsonPointer pointer) {
         this.text = text;
         this.pointer = pointer;
+        this.lastIsIndex = text.endsWith("]");
     }
 
     /** Parses {@code a.b[2].c}; names are non-empty, indexes are whole numbers ≥ 0. */
@@ -67,25 +69,23 @@ public final class JsonPath {
     }
 
     /**
-     * Puts {@code value} at this path, creating missing objects and arrays on the way; an array grows with empty
-     * strings up to the index.
+     * Puts {@code value} at this path, creating missing objects and arrays on the way (Jackson's
+     * {@link JsonNode#withObject(JsonPointer, JsonNode.OverwriteMode, boolean)}); a list the value goes into grows
+     * with empty strings up to the index, so a form may fill the second end of a range before the first.
      */
     public void set(ObjectNode root, JsonNode value) {
-        JsonNode n = root;
-        for (JsonPointer step = pointer; ; step = step.tail()) {
-            JsonPointer rest = step.tail();
-            if (rest.matches()) {
-                put(n, step, value);
-                return;
+        JsonPointer parent = pointer.head();
+        JsonPointer last = pointer.last();
+        if (lastIsIndex) {
+            ArrayNode array = root.withArray(parent, JsonNode.OverwriteMode.ALL, true);
+            int index = last.getMatchingIndex();
+            while (array.size() <= index) {
+                array.add("");
             }
-            JsonNode child = child(n, step);
-            if (child == null || !child.isContainerNode()) {
-                // a pointer cannot say "[1]" from ".1"; the forms' paths never name a field with a number
-                child = rest.getMatchingIndex() >= 0
-                        ? JsonNodeFactory.instance.arrayNode() : JsonNodeFactory.instance.objectNode();
-                put(n, step, child);
-            }
-            n = child;
+            array.set(index, value);
+        } else {
+            ObjectNode object = parent.matches() ? root : root.withObject(parent, JsonNode.OverwriteMode.ALL, true);
+            object.set(last.getMatchingProperty(), value);
         }
     }
 
@@ -93,22 +93,6 @@ public final class JsonPath {
     public void remove(ObjectNode root) {
         if (root.at(pointer.head()) instanceof ObjectNode parent) {
             parent.remove(pointer.last().getMatchingProperty());
-        }
-    }
-
-    private static JsonNode child(JsonNode n, JsonPointer step) {
-        return n.isArray() ? n.get(step.getMatchingIndex()) : n.get(step.getMatchingProperty());
-    }
-
-    private static void put(JsonNode parent, JsonPointer step, JsonNode value) {
-        if (parent instanceof ArrayNode array) {
-            int index = step.getMatchingIndex();
-            while (array.size() <= index) {
-                array.add("");
-            }
-            array.set(index, value);
-        } else {
-            ((ObjectNode) parent).set(step.getMatchingProperty(), value);
         }
     }
 

@@ -63,6 +63,9 @@ public final class PlanEditor {
     private ObjectNode document;
     private SourcePositions positions = SourcePositions.NONE;
     private ObjectNode saved;
+    // the file's text as opened or last saved, and the document it reads as: a save changes only what changed
+    private String sourceText;
+    private ObjectNode sourceDocument;
     private Path file;
     private PlanCheck check;
     private PlanInputs lastValid;
@@ -144,9 +147,50 @@ public final class PlanEditor {
             return Optional.of(typed);
         }
         if (!check.valid() && field.path().concerns(check.field())) {
-            return Optional.of(check.problem());
+            return Optional.of(inFormWords(field));
         }
         return Optional.empty();
+    }
+
+    /**
+     * The first marked field and its problem, in the words its tooltip uses ("Lowest pulse energy: must be > 0, was
+     * 0 nJ"), for a status line; empty when no field is marked.
+     */
+    public Optional<String> firstFieldProblem() {
+        for (FieldSpec f : fields()) {
+            Optional<String> p = problem(f);
+            if (p.isPresent()) {
+                return Optional.of(f.label() + ": " + p.get());
+            }
+        }
+        return Optional.empty();
+    }
+
+    /**
+     * The plan reader's problem as the form shows it. The file writes a range as one list, "[lowest, highest]", and
+     * the reader says so; the form shows the two ends as two fields, so it names the other field instead.
+     */
+    private String inFormWords(FieldSpec field) {
+        if (check.key() == InputProblem.BAD_ORDER && check.field() != null) {
+            FieldSpec low = fieldAt(check.field() + "[0]");
+            FieldSpec high = fieldAt(check.field() + "[1]");
+            if (low != null && high != null) {
+                boolean isHigh = field.path().equals(high.path());
+                FieldSpec other = isHigh ? low : high;
+                return (isHigh ? "must be above the " : "must be below the ") + stepName(other) + " ("
+                        + other.read(document) + ")";
+            }
+        }
+        return check.problem();
+    }
+
+    private FieldSpec fieldAt(String path) {
+        for (FieldSpec f : fields()) {
+            if (f.path().toString().equals(path)) {
+                return f;
+            }
+        }
+        return null;
     }
 
     /**
@@ -196,6 +240,23 @@ public final class PlanEditor {
         return history.canRedo();
     }
 
+    /** What undo would take back, in the form's words ("pump radius"), if anything. */
+    public Optional<String> undoName() {
+        return history.undoName();
+    }
+
+    /** What redo would make again, if anything. */
+    public Optional<String> redoName() {
+        return history.redoName();
+    }
+
+    /** A field's label as a menu names its step: "pump radius", but "IRF FWHM" as written. */
+    static String stepName(FieldSpec field) {
+        String label = field.label();
+        boolean word = label.length() > 1 && Character.isUpperCase(label.charAt(0)) && Character.isLowerCase(label.charAt(1));
+        return word ? Character.toLowerCase(label.charAt(0)) + label.substring(1) : label;
+    }
+
     // ---- editing -----------------------------------------------------------------------------------------------
 
     /**
@@ -216,7 +277,10 @@ public final class PlanEditor {
             }
             return;
         }
-        history.beforeEdit(new Snapshot(document, positions), path);
+        // typing that came back to where it began leaves no step behind
+        if (!history.revertsOpenRun(path, s -> s.document().equals(next))) {
+            history.beforeEdit(new Snapshot(document, positions), path, stepName(field));
+        }
         document = next;
         positions = positions.without(field.path().pointer());
         recheck();
@@ -251,7 +315,8 @@ public final class PlanEditor {
             return;
         }
         history.boundary();
-        history.beforeEdit(new Snapshot(document, positions), null);
+        history.beforeEdit(new Snapshot(document, positions), null, edits.size() == 1
+                ? stepName(edits.get(0).getKey()) : edits.size() + " fields");
         history.boundary();
         document = next;
         positions = nextPositions;
@@ -294,6 +359,7 @@ public final class PlanEditor {
         }
         // the tree was built for this editor alone, so it is taken without a copy
         replace(object, tree.positions(), planFile.toAbsolutePath().normalize());
+        source(readText(planFile), object);
         fire(Change.REPLACED, null);
     }
 
@@ -306,12 +372,15 @@ public final class PlanEditor {
     }
 
     /**
-     * Saves to {@code target}, atomically, and makes it the current file. Data files the plan names by a relative
+     * Saves to {@code target}, atomically, and makes it the current file. The text is the file's text as opened (or
+     * last saved) with only the changed values rewritten ({@link SplicedJson}), so key order, layout and number
+     * spellings stay; an untitled plan is written whole. Data files the plan names by a relative
      * path (spectrum, IRF) are re-expressed relative to the new folder, so a plan saved elsewhere still finds them.
      */
     public void saveAs(Path target) throws IOException {
         ObjectNode toSave = rebased(SampleCodec.baseDir(target.toAbsolutePath().normalize()));
-        String text = ResolvedJson.toText(toSave);
+        String text = sourceText == null ? ResolvedJson.toText(toSave)
+                : SplicedJson.update(sourceText, sourceDocument, toSave).orElseGet(() -> ResolvedJson.toText(toSave));
         AtomicFiles.writeString(target, text);
         boolean pathsChanged = !toSave.equals(document);
         file = target.toAbsolutePath().normalize();
@@ -320,6 +389,7 @@ public final class PlanEditor {
         document = (ObjectNode) written.json();
         positions = written.positions();
         saved = document.deepCopy();
+        source(text, document);
         history.boundary();
         recheck();
         if (pathsChanged) {
@@ -359,12 +429,25 @@ public final class PlanEditor {
     public void restore(ObjectNode recovered, Path originalFile) {
         replace(recovered.deepCopy(), SourcePositions.NONE, originalFile);
         saved = null;
+        if (originalFile != null) {
+            // the file as it is on disk: saving the restored plan then changes only what the recovery changed
+            try {
+                String text = readText(originalFile);
+                if (JsonTree.of(text, originalFile.toString()).json() instanceof ObjectNode onDisk) {
+                    source(text, onDisk);
+                }
+            } catch (InputException e) {
+                // unreadable or gone: the plan is saved as a whole
+            }
+        }
         fire(Change.REPLACED, null);
     }
 
     // ---- internals ---------------------------------------------------------------------------------------------
 
     private void replace(ObjectNode doc, SourcePositions newPositions, Path newFile) {
+        sourceText = null;
+        sourceDocument = null;
         document = doc;
         positions = newPositions;
         file = newFile;
@@ -372,6 +455,20 @@ public final class PlanEditor {
         saved = doc.deepCopy();
         lastValid = null;
         recheckAllFields();
+    }
+
+    private void source(String text, ObjectNode readAs) {
+        sourceText = text;
+        sourceDocument = text == null ? null : readAs.deepCopy();
+    }
+
+    /** The file's text, or null when it cannot be read again (it was read a moment ago). */
+    private static String readText(Path f) {
+        try {
+            return java.nio.file.Files.readString(f);
+        } catch (IOException | RuntimeException e) {
+            return null;
+        }
     }
 
     private void restoreSnapshot(Snapshot snapshot) {

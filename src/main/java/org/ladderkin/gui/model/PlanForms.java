@@ -3,7 +3,9 @@ package org.ladderkin.gui.model;
 import com.fasterxml.jackson.databind.JsonNode;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import org.ladderkin.plan.Goal;
 import org.ladderkin.plan.Instrument;
 import org.ladderkin.kinetics.process.ParameterKind;
@@ -112,9 +114,9 @@ public final class PlanForms {
     /** Goals and limits. */
     public static final List<FieldSpec> GOALS_AND_LIMITS = List.of(
             FieldSpec.keySet("Measure", "goals.measure", Arrays.stream(Goal.values()).map(Goal::key).toList(),
-                    "what the campaign sets out to measure"),
+                    "what the campaign sets out to measure").withChoiceLabels(goalWords()),
             FieldSpec.quantityList("Multiplication photon energies", "goals.multiplicationPhotonEnergies", Dimension.ENERGY,
-                    "photon energies for the multiplication yield, e.g. 3.1 eV (only with multiplication-yield)")
+                    "photon energies for the multiplication yield, e.g. 3.1 eV (only when measuring the carrier-multiplication yield)")
                     .asOptional(),
             FieldSpec.quantity("Max temperature rise", "limits.maxTemperatureRise", Dimension.TEMPERATURE,
                     "highest tolerated steady-state rise, in K"),
@@ -150,6 +152,16 @@ public final class PlanForms {
             FieldSpec.optionalQuantity("Cooling time", "model.coolingTime", Dimension.TIME,
                     "intraband cooling time, used for delay windows; blank: the default")));
 
+    /** Each goal in words, as a sentence starts: "Biexciton Auger lifetime τ2" for "biexciton-auger". */
+    private static Map<String, String> goalWords() {
+        Map<String, String> words = new LinkedHashMap<>();
+        for (Goal g : Goal.values()) {
+            String d = g.description();
+            words.put(g.key(), Character.toUpperCase(d.charAt(0)) + d.substring(1));
+        }
+        return words;
+    }
+
     /** The plan's own model fields, then one per process parameter a plan may set through the registry. */
     private static List<FieldSpec> withRegistryFields(List<FieldSpec> own) {
         List<FieldSpec> all = new ArrayList<>(own);
@@ -176,8 +188,7 @@ public final class PlanForms {
     /** The fields of instrument {@code index} of the document, chosen by its {@code kind}. */
     public static List<FieldSpec> instrument(JsonNode document, int index) {
         String p = "instruments[" + index + "].";
-        JsonNode kindNode = JsonPath.of(p + "kind").get(document);
-        String kind = kindNode == null ? "" : kindNode.asText();
+        String kind = instrumentKind(document, index);
         List<FieldSpec> fields = new ArrayList<>();
         if (kind.equals(Instrument.Kind.TCSPC.key())) {
             fields.add(FieldSpec.quantity("Time bin", p + "timeBin", Dimension.TIME, "width of one TCSPC histogram bin"));
@@ -211,7 +222,7 @@ public final class PlanForms {
 
     /** The {@code kind} of instrument {@code index}, or "" when missing. */
     public static String instrumentKind(JsonNode document, int index) {
-        JsonNode n = JsonPath.of("instruments[" + index + "].kind").get(document);
-        return n == null ? "" : n.asText();
+        return document.at(com.fasterxml.jackson.core.JsonPointer.empty().appendProperty("instruments")
+                .appendIndex(index).appendProperty("kind")).asText("");
     }
 }

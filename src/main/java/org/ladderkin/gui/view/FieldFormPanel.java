@@ -100,7 +100,7 @@ final class FieldFormPanel extends JPanel {
     }
 
     private static String tooltip(FieldSpec f) {
-        return f.help() + " — " + f.path();
+        return f.help();
     }
 
     private static String escape(String s) {
@@ -339,14 +339,17 @@ final class FieldFormPanel extends JPanel {
         private final FieldSpec field;
         private final JPanel panel = new JPanel(new MigLayout("insets 0, wrap 1, gap 0 2"));
         private final List<JCheckBox> boxes = new ArrayList<>();
+        /** The choice as the file spells it; the box shows it in words. */
+        private static final String KEY = "ladderkin.choice";
 
         KeySetBinding(FieldSpec field) {
             this.field = field;
             panel.setName(field.path().toString());
             panel.setOpaque(false);
             for (String choice : field.choices()) {
-                JCheckBox box = new JCheckBox(choice);
+                JCheckBox box = new JCheckBox(field.choiceLabel(choice));
                 box.setName(field.path() + "=" + choice);
+                box.putClientProperty(KEY, choice);
                 box.addActionListener(e -> selectionChanged());
                 boxes.add(box);
                 panel.add(box);
@@ -357,7 +360,7 @@ final class FieldFormPanel extends JPanel {
             List<String> selected = new ArrayList<>();
             for (JCheckBox b : boxes) {
                 if (b.isSelected()) {
-                    selected.add(b.getText());
+                    selected.add((String) b.getClientProperty(KEY));
                 }
             }
             edited(field, String.join(", ", selected));
@@ -381,7 +384,7 @@ final class FieldFormPanel extends JPanel {
                 chosen.add(part.strip());
             }
             for (JCheckBox b : boxes) {
-                b.setSelected(chosen.contains(b.getText()));
+                b.setSelected(chosen.contains((String) b.getClientProperty(KEY)));
             }
         }
     }

@@ -363,7 +363,7 @@ public final class FitPanel extends JPanel {
     private static List<String> pushLines(PushBack p) {
         List<String> lines = new ArrayList<>();
         for (var e : p.edits()) {
-            lines.add("writes " + e.getKey().path() + " = " + e.getValue());
+            lines.add("sets " + e.getKey().label() + " to " + e.getValue());
         }
         lines.addAll(p.notes());
         return lines;

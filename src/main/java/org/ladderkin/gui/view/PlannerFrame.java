@@ -18,6 +18,7 @@ import java.time.ZoneId;
 import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Objects;
 import java.util.Optional;
 import javax.swing.AbstractAction;
 import javax.swing.Action;
@@ -47,6 +48,7 @@ import org.ladderkin.gui.chart.ChartExport;
 import org.ladderkin.gui.model.Autosaver;
 import org.ladderkin.gui.model.FitSession;
 import org.ladderkin.gui.model.PlanEditor;
+import org.ladderkin.gui.model.PlanFiles;
 import org.ladderkin.gui.model.PlanForms;
 import org.ladderkin.gui.model.Prediction;
 import org.ladderkin.gui.model.PredictionReport;
@@ -79,6 +81,8 @@ public final class PlannerFrame extends JFrame {
 
     private final GuiPrefs prefs;
     private final RecoveryStore recovery;
+    private final PredictionSource source;
+    private java.util.function.Consumer<RecoveryStore.Recovered> windowOpener;
     private final PlanEditor editor = new PlanEditor();
     private final Autosaver autosaver;
     private final RecomputeService recompute;
@@ -128,6 +132,8 @@ public final class PlannerFrame extends JFrame {
         super(TITLE);
         this.prefs = prefs;
         this.recovery = recovery;
+        this.source = source;
+        this.windowOpener = this::openInNewWindow;
         this.autosaver = new Autosaver(editor, recovery, Clock.systemUTC());
         this.recompute = new RecomputeService(source, DEBOUNCE_MS, SwingUtilities::invokeLater, this::predictionArrived);
         this.budget = new ErrorBudgetService(BUDGET_PAUSE_MS, SwingUtilities::invokeLater, this::budgetArrived);
@@ -237,27 +243,58 @@ public final class PlannerFrame extends JFrame {
         }
     }
 
-    /** Offers to restore a recovery copy left by an earlier session that did not end cleanly. */
+    /**
+     * Offers every recovery copy that earlier sessions left without closing their windows, one question each. The
+     * first copy accepted goes into this window when it holds nothing of its own yet (a clean untitled plan, or the
+     * same file); every other one opens in a window of its own through {@link #setWindowOpener}. A declined copy is
+     * removed; a restored one stays until its plan is saved or discarded.
+     */
     public void offerRecovery() {
-        Optional<RecoveryStore.Recovered> found = recovery.read();
-        if (found.isEmpty()) {
-            return;
-        }
-        RecoveryStore.Recovered r = found.get();
-        String what = r.originalFile() == null ? "an untitled plan" : r.originalFile().toString();
-        String when = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm").withZone(ZoneId.systemDefault()).format(r.savedAt());
-        int answer = JOptionPane.showConfirmDialog(this, "<html>Unsaved changes to " + what + " were kept from a session"
-                        + " that ended on " + when + ".<br>Restore them?</html>", "Restore unsaved changes",
-                JOptionPane.YES_NO_OPTION, JOptionPane.QUESTION_MESSAGE);
-        if (answer == JOptionPane.YES_OPTION) {
-            editor.restore(r.document(), r.originalFile());
-        } else {
+        boolean here = !editor.isDirty();
+        for (RecoveryStore.Recovered r : recovery.readAll()) {
+            String when = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm").withZone(ZoneId.systemDefault()).format(r.savedAt());
+            int answer = JOptionPane.showConfirmDialog(this, "<html>Unsaved changes to " + escapeHtml(r.planName())
+                            + " were kept from a session that ended on " + when + ".<br>Restore them?</html>",
+                    "Restore unsaved changes", JOptionPane.YES_NO_OPTION, JOptionPane.QUESTION_MESSAGE);
             try {
-                recovery.clear();
+                if (answer != JOptionPane.YES_OPTION) {
+                    recovery.discard(r);
+                } else if (here && (editor.file().isEmpty() || editor.file().get().equals(r.originalFile()))) {
+                    restore(r);
+                    here = false;
+                } else {
+                    windowOpener.accept(r);
+                }
             } catch (IOException e) {
-                error("Cannot remove the recovery copy", e.getMessage());
+                error("Cannot use the recovery copy", r.copy() + ": " + e.getMessage());
             }
         }
+    }
+
+    /** Puts a recovered plan into this window; its copy is kept up to date here and removed once saved. */
+    public void restore(RecoveryStore.Recovered r) throws IOException {
+        editor.restore(r.document(), r.originalFile());
+        autosaver.adopt(r);
+    }
+
+    /** How a recovered plan that does not go into this window is shown (default: a new window on the same settings). */
+    public void setWindowOpener(java.util.function.Consumer<RecoveryStore.Recovered> opener) {
+        windowOpener = Objects.requireNonNull(opener, "opener");
+    }
+
+    private void openInNewWindow(RecoveryStore.Recovered r) {
+        PlannerFrame other = new PlannerFrame(prefs, recovery, source);
+        other.windowOpener = windowOpener;
+        try {
+            other.restore(r);
+        } catch (IOException e) {
+            error("Cannot use the recovery copy", r.copy() + ": " + e.getMessage());
+        }
+        other.setVisible(true);
+    }
+
+    private static String escapeHtml(String s) {
+        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
     }
 
     // ---- editor and prediction events ---------------------------------------------------------------------------
@@ -343,12 +380,15 @@ public final class PlannerFrame extends JFrame {
             planStatus.setToolTipText(null);
         } else {
             String general = editor.generalProblem().orElse(null);
-            String msg = general != null ? general : "a marked field needs attention: " + editor.check().problem();
+            String msg = general != null ? general : "a marked field needs attention — "
+                    + editor.firstFieldProblem().orElse(editor.check().problem());
             planStatus.setText("⚠ " + msg + (editor.lastValid().isPresent() ? " — charts show the last valid plan" : ""));
             planStatus.setToolTipText(msg);
         }
         undoAction.setEnabled(editor.canUndo());
         redoAction.setEnabled(editor.canRedo());
+        undoAction.putValue(Action.NAME, editor.undoName().map(n -> "Undo: " + n).orElse("Undo"));
+        redoAction.putValue(Action.NAME, editor.redoName().map(n -> "Redo: " + n).orElse("Redo"));
     }
 
     // ---- user actions -------------------------------------------------------------------------------------------
@@ -488,6 +528,13 @@ public final class PlannerFrame extends JFrame {
     public void dispose() {
         recompute.close();
         budget.close();
+        autosaveTimer.stop();
+        try {
+            // after quit the copy is gone already; a window disposed without quit leaves its copy to be offered
+            autosaver.release();
+        } catch (IOException e) {
+            // the lock goes with the process at the latest
+        }
         super.dispose();
     }
 
@@ -527,6 +574,11 @@ public final class PlannerFrame extends JFrame {
             case 1 -> UnsavedChanges.Answer.DISCARD;
             default -> UnsavedChanges.Answer.CANCEL;
         };
+    }
+
+    /** Writes the recovery copy now instead of at the next timer tick (for tests). */
+    void autosaveNow() {
+        autosaveTick();
     }
 
     private void autosaveTick() {
@@ -624,7 +676,7 @@ public final class PlannerFrame extends JFrame {
     private void rebuildRecentMenu() {
         recentMenu.removeAll();
         for (Path p : prefs.recentFiles().files()) {
-            JMenuItem item = new JMenuItem(p.getFileName().toString());
+            JMenuItem item = new JMenuItem(PlanFiles.menuLabel(p));
             item.setToolTipText(p.toString());
             item.addActionListener(e -> openRecent(p));
             recentMenu.add(item);
@@ -689,7 +741,19 @@ public final class PlannerFrame extends JFrame {
 
     private JFileChooser chooser() {
         JFileChooser chooser = new JFileChooser(prefs.lastDirectory().map(Path::toFile).orElse(null));
-        chooser.setFileFilter(new FileNameExtensionFilter("Campaign plans (*.json)", "json"));
+        chooser.addChoosableFileFilter(new FileNameExtensionFilter("All JSON files (*.json)", "json"));
+        // not every .json is a plan: trace sidecars, samples and materials sit beside plans
+        chooser.setFileFilter(new javax.swing.filechooser.FileFilter() {
+            @Override
+            public boolean accept(java.io.File f) {
+                return PlanFiles.listed(f.toPath());
+            }
+
+            @Override
+            public String getDescription() {
+                return "Campaign plans (*.plan.json, or a plan's schema)";
+            }
+        });
         return chooser;
     }
 

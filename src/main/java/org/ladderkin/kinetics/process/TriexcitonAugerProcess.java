@@ -13,7 +13,7 @@ import org.ladderkin.kinetics.rate.AugerRecombination;
 public record TriexcitonAugerProcess(double tauAuger3S) implements ProcessSpec {
 
     public static final ProcessParameter LIFETIME = ProcessParameter.lifetime("lifetime", "Triexciton Auger lifetime τ₃",
-            "--tau-auger3", "triexciton Auger lifetime, replaces τ₂/g(3) of the scaling law (off when omitted)", "ps")
+            "--tau-auger3", "measured triexciton Auger lifetime; without it, the Auger scaling law gives it from τ₂", "ps")
             .fittedAs("tau-auger3", "tauAuger3", 4).inPlanAs("triexcitonLifetime");
 
     /** The registry entry. */

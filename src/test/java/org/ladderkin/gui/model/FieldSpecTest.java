@@ -16,7 +16,8 @@ class FieldSpecTest {
         assertThat(f.check("50 nJ")).isEmpty();
         assertThat(f.check("50 uJ")).isEmpty();
         assertThat(f.check("50 ns")).get().asString().contains("is a time");
-        assertThat(f.check("-1 nJ")).get().asString().contains("negative");
+        assertThat(f.check("-1 nJ")).get().asString().isEqualTo("must be > 0, was -1 nJ");
+        assertThat(f.check("0 nJ")).get().asString().as("the plan reader's words and limit").isEqualTo("must be > 0, was 0 nJ");
         assertThat(f.check("")).get().asString().startsWith("required");
         assertThat(f.asOptional().check("  ")).isEmpty();
     }
