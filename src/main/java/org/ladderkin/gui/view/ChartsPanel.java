@@ -56,8 +56,13 @@ final class ChartsPanel extends JTabbedPane {
         return views.stream().map(ChartView::spec).toList();
     }
 
-    private static String shortTitle(String title) {
+    /**
+     * The tab's title: the chart's title without its parenthesised detail and with the trade abbreviations, so the
+     * tabs fit one row of a narrow window (the full title is the tab's tooltip and the chart's own heading).
+     */
+    static String shortTitle(String title) {
         int paren = title.indexOf(" (");
-        return paren > 0 ? title.substring(0, paren) : title;
+        String s = paren > 0 ? title.substring(0, paren) : title;
+        return s.replace("Photoluminescence", "PL").replace("Excitons per dot", "P(N)");
     }
 }

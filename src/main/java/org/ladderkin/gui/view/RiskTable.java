@@ -93,6 +93,8 @@ final class RiskTable extends JTable {
         for (int column : new int[] {VERDICT, PREDICTED, LIMIT}) {
             int width = widestCell(column) + CELL_PADDING;
             TableColumn c = getColumnModel().getColumn(column);
+            // the order matters: a column clamps its minimum to its maximum, and its width to both
+            c.setMaxWidth(Integer.MAX_VALUE);
             c.setMinWidth(width);
             c.setPreferredWidth(width);
             c.setMaxWidth(column == VERDICT ? width : width * 2);

@@ -20,6 +20,8 @@ final class TabFit {
 
     /** FlatLaf's cap on a tab's width (px); longer titles are cut with an ellipsis. */
     static final String MAXIMUM_TAB_WIDTH = "JTabbedPane.maximumTabWidth";
+    /** FlatLaf's padding inside a tab, per pane. */
+    static final String TAB_INSETS = "JTabbedPane.tabInsets";
     /** Room kept free beside the last tab for rounding in the look and feel's own measuring. */
     private static final int SLACK = 10;
     /** Narrower than this a tab shows too little of its title to be told apart; the pane scrolls instead. */
@@ -31,6 +33,8 @@ final class TabFit {
     /** Fits {@code tabs} now and whenever it is resized or its tabs change. */
     static void install(JTabbedPane tabs) {
         tabs.setTabLayoutPolicy(JTabbedPane.SCROLL_TAB_LAYOUT);
+        // narrower padding than the theme's 12 px a side: room for one more title before any is cut
+        tabs.putClientProperty(TAB_INSETS, new Insets(4, 8, 4, 8));
         tabs.addComponentListener(new ComponentAdapter() {
             @Override
             public void componentResized(ComponentEvent e) {
@@ -109,7 +113,8 @@ final class TabFit {
         if (icon != null) {
             content += icon.getIconWidth() + UIManager.getInt("TabbedPane.textIconGap");
         }
-        Insets in = UIManager.getInsets("TabbedPane.tabInsets");
+        Insets in = tabs.getClientProperty(TAB_INSETS) instanceof Insets own ? own
+                : UIManager.getInsets("TabbedPane.tabInsets");
         return content + (in == null ? 24 : in.left + in.right) + 2;
     }
 }

@@ -48,7 +48,7 @@ class ChartExportWindowTest {
 
     @Test
     void rightClickOnAPredictionChartWritesItsPointsAsCsv() throws Exception {
-        window.tabbedPane("charts").selectTab("Photoluminescence per dot");
+        window.tabbedPane("charts").selectTab(ChartsPanel.shortTitle("Photoluminescence per dot"));
         ChartView view = (ChartView) GuiActionRunner.execute(() -> ((javax.swing.JTabbedPane) window.tabbedPane("charts")
                 .target()).getSelectedComponent());
         ChartSpec shown = GuiActionRunner.execute(view::spec);
