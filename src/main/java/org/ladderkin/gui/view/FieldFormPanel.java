@@ -1,3 +1,4 @@
+// Over 400 lines: the form and its four field bindings (text, data file, choice, key set) share the editor and the updating guard.
 package org.ladderkin.gui.view;
 
 import java.awt.event.FocusAdapter;
