@@ -15,6 +15,7 @@ import org.ladderkin.report.Cautions;
 final class CautionBar extends JPanel {
 
     private List<String> cautions = List.of(Cautions.LASER);
+    private boolean stale;
 
     CautionBar() {
         setName("cautions");
@@ -26,14 +27,29 @@ final class CautionBar extends JPanel {
         removeAll();
         setLayout(new MigLayout("insets 4 8 4 8, wrap 1, gap 0 2", "[grow, fill]"));
         for (String c : cautions) {
-            JLabel l = new JLabel("⚠ " + firstSentence(c));
-            l.setToolTipText("<html><p width=520>" + c + "</p></html>");
-            l.setForeground(UIManager.getColor("Ladderkin.caution.foreground"));
+            // the laser caution holds for every plan; the others were decided for the plan they came with
+            boolean old = stale && !Cautions.LASER.equals(c);
+            JLabel l = new JLabel((old ? "⚠ (stale) " : "⚠ ") + firstSentence(c));
+            l.setToolTipText("<html><p width=520>" + (old ? "From the previous results, not the plan on screen. " : "")
+                    + c + "</p></html>");
+            l.setForeground(UIManager.getColor(old ? "Label.disabledForeground" : "Ladderkin.caution.foreground"));
             add(l);
         }
         applyColours();
         revalidate();
         repaint();
+    }
+
+    /** Marks the cautions other than the laser one as belonging to results that are no longer the plan's. */
+    void stale(boolean next) {
+        if (next != stale) {
+            stale = next;
+            show(cautions);
+        }
+    }
+
+    boolean stale() {
+        return stale;
     }
 
     List<String> cautions() {

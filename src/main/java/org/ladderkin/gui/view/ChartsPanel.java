@@ -66,7 +66,8 @@ final class ChartsPanel extends JTabbedPane {
             }
         }
         int paren = title.indexOf(" (");
-        return paren > 0 ? title.substring(0, paren) : title;
+        String s = paren > 0 ? title.substring(0, paren) : title;
+        return s.replace("Photoluminescence", "PL").replace("Excitons per dot", "P(N)");
     }
 
     private static final String[][] SHORT = {

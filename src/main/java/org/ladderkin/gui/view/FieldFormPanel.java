@@ -1,3 +1,4 @@
+// Over 400 lines: the form and its four field bindings (text, data file, choice, key set) share the editor and the updating guard.
 package org.ladderkin.gui.view;
 
 import java.awt.event.FocusAdapter;
@@ -14,6 +15,7 @@ import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JTextField;
+import javax.swing.Scrollable;
 import javax.swing.TransferHandler;
 import javax.swing.event.DocumentEvent;
 import javax.swing.event.DocumentListener;
@@ -27,7 +29,7 @@ import org.ladderkin.gui.model.PlanEditor;
  * JSON path, forwards every change to the {@link PlanEditor} and shows the editor's verdict: an error outline and the
  * reason as tooltip. It holds no state of its own beyond the components.
  */
-final class FieldFormPanel extends JPanel {
+final class FieldFormPanel extends JPanel implements Scrollable {
 
     /** A titled group of fields. */
     record Section(String title, List<FieldSpec> fields) {
@@ -54,13 +56,15 @@ final class FieldFormPanel extends JPanel {
     private void build(List<Section> sections) {
         setLayout(new MigLayout(
                 "insets dialog, wrap 2, hidemode 3",   // layout
-                "[right][grow, fill, 140:220:]",        // label column, field column
+                "[right][grow, fill, 110:220:]",        // label column, field column
                 "[]unrel"));                            // rows
         for (Section section : sections) {
             if (!section.title().isEmpty()) {
                 JLabel title = new JLabel(section.title());
                 title.putClientProperty("FlatLaf.styleClass", "h4");
-                add(title, "span 2, gaptop para, wrap");
+                title.setToolTipText(section.title());
+                // a long title is cut (full text as tooltip) rather than widening the form past its column
+                add(title, "span 2, gaptop para, wmin 0, wrap");
             }
             for (FieldSpec f : section.fields()) {
                 Binding b = bind(f);
@@ -68,7 +72,8 @@ final class FieldFormPanel extends JPanel {
                 label.setLabelFor(b.component());
                 label.setToolTipText(f.help());
                 add(label);
-                add(b.container());
+                // combo boxes ask for their longest choice as minimum; the column decides instead
+                add(b.container(), "wmin 90");
                 bindings.add(b);
             }
         }
@@ -97,6 +102,69 @@ final class FieldFormPanel extends JPanel {
             c.setToolTipText(problem == null ? tooltip(b.field()) : "<html><b>" + escape(problem) + "</b><br>"
                     + escape(tooltip(b.field())) + "</html>");
         }
+    }
+
+    /** Whether any field of this form is marked invalid. */
+    boolean hasProblem() {
+        return firstInvalid().isPresent();
+    }
+
+    /** The first field (in form order) that is marked invalid, if any. */
+    java.util.Optional<JComponent> firstInvalid() {
+        for (Binding b : bindings) {
+            if (editor.problem(b.field()).isPresent()) {
+                return java.util.Optional.of(b.component());
+            }
+        }
+        return java.util.Optional.empty();
+    }
+
+    /**
+     * Shows in each empty text field the value the prediction used in its place (e.g. the diameter derived from the
+     * first-exciton peak), or nothing; FlatLaf draws a placeholder only while the field is empty.
+     *
+     * @param derived text to show, by field path; fields not named lose their placeholder
+     */
+    void placeholders(java.util.Map<String, String> derived) {
+        for (Binding b : bindings) {
+            if (b.component() instanceof JTextField t) {
+                String shown = derived.get(b.field().path().toString());
+                t.putClientProperty("JTextField.placeholderText", shown);
+            }
+        }
+    }
+
+    /** The placeholder a field shows, or null (for tests). */
+    static String placeholder(JComponent c) {
+        Object p = c.getClientProperty("JTextField.placeholderText");
+        return p == null ? null : p.toString();
+    }
+
+    // ---- Scrollable: the form takes its column's width, so it wraps into it rather than scrolling sideways ------
+
+    @Override
+    public java.awt.Dimension getPreferredScrollableViewportSize() {
+        return getPreferredSize();
+    }
+
+    @Override
+    public int getScrollableUnitIncrement(java.awt.Rectangle visible, int orientation, int direction) {
+        return 16;
+    }
+
+    @Override
+    public int getScrollableBlockIncrement(java.awt.Rectangle visible, int orientation, int direction) {
+        return orientation == javax.swing.SwingConstants.VERTICAL ? visible.height - 16 : visible.width - 16;
+    }
+
+    @Override
+    public boolean getScrollableTracksViewportWidth() {
+        return true;
+    }
+
+    @Override
+    public boolean getScrollableTracksViewportHeight() {
+        return getParent() instanceof javax.swing.JViewport v && v.getHeight() > getPreferredSize().height;
     }
 
     private static String tooltip(FieldSpec f) {

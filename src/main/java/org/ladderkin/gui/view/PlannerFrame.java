@@ -109,6 +109,11 @@ public final class PlannerFrame extends JFrame {
     private final JLabel planStatus = new JLabel(" ");
     private final JLabel predictionStatus = new JLabel(" ");
     private final JLabel fileStatus = new JLabel(" ");
+    private final JTabbedPane formTabs = new JTabbedPane();
+    private final StaleLayer staleLayer = new StaleLayer();
+    private javax.swing.JLayer<JComponent> resultsLayer;
+    /** Above the results: why they are washed out, or why there are none. */
+    private final JLabel staleNote = new JLabel(" ");
     private final JSplitPane mainSplit;
     /** Split panes whose divider positions are remembered between runs, by name. */
     private final java.util.Map<String, JSplitPane> splits = new java.util.LinkedHashMap<>();
@@ -122,6 +127,10 @@ public final class PlannerFrame extends JFrame {
     private PlanInputs requested;
     private long editNanos;
     private long deliveredCount;
+    /** Counts the plans this window has held (new, open, restore): results of an earlier one are stale. */
+    private int planGeneration;
+    private int requestedGeneration;
+    private int shownGeneration;
 
     /**
      * @param prefs    where theme, window bounds and recent files are remembered
@@ -144,18 +153,20 @@ public final class PlannerFrame extends JFrame {
         instrumentsForm = new FieldFormPanel(editor, instrumentSections());
         goalsForm = new FieldFormPanel(editor, List.of(new FieldFormPanel.Section("", PlanForms.GOALS_AND_LIMITS)));
         modelForm = new FieldFormPanel(editor, List.of(new FieldFormPanel.Section(
-                "Values that replace the ones derived from the material (blank: derived)", PlanForms.MODEL)));
+                "Replacing the material's values (blank: derived)", PlanForms.MODEL)));
         fitPanel = new FitPanel(fitSession, editor, prefs::lastDirectory, prefs::lastDirectory);
         fitPanel.offerChartExport(this::exportChart);
 
-        JTabbedPane forms = new JTabbedPane();
+        JTabbedPane forms = formTabs;
         forms.setName("forms");
-        forms.setTabLayoutPolicy(JTabbedPane.SCROLL_TAB_LAYOUT);
-        forms.addTab("Sample", scroll(sampleForm));
-        forms.addTab("Laser & geometry", scroll(laserForm));
-        forms.addTab("Instruments", scroll(instrumentsForm));
-        forms.addTab("Goals & limits", scroll(goalsForm));
-        forms.addTab("Model", scroll(modelForm));
+        // short titles, so the five tabs fit the form column; the long names are the tooltips
+        forms.addTab("Sample", null, scroll(sampleForm), "Sample");
+        forms.addTab("Laser", null, scroll(laserForm), "Laser & geometry");
+        forms.addTab("Instruments", null, scroll(instrumentsForm), "Instruments");
+        forms.addTab("Goals", null, scroll(goalsForm), "Goals & limits");
+        forms.addTab("Model", null, scroll(modelForm), "Model: values that replace the ones derived from the material");
+        TabFit.install(forms);
+        TabFit.install(charts);
 
         JTabbedPane lower = new JTabbedPane();
         lower.setName("lower");
@@ -173,7 +184,15 @@ public final class PlannerFrame extends JFrame {
         splits.put("charts", centre);
         centre.setResizeWeight(0.72);
         centreTabs.setName("centre");
-        centreTabs.addTab("Prediction", centre);
+        resultsLayer = new javax.swing.JLayer<>(centre, staleLayer);
+        resultsLayer.setName("results");
+        JPanel prediction = new JPanel(new BorderLayout());
+        staleNote.setName("prediction:stale");
+        staleNote.setBorder(BorderFactory.createEmptyBorder(3, 8, 3, 8));
+        staleNote.setVisible(false);
+        prediction.add(staleNote, BorderLayout.NORTH);
+        prediction.add(resultsLayer, BorderLayout.CENTER);
+        centreTabs.addTab("Prediction", prediction);
         centreTabs.addTab("Measured data & fit", fitPanel);
         mainSplit = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, forms, centreTabs);
         splits.put("forms", mainSplit);
@@ -231,16 +250,22 @@ public final class PlannerFrame extends JFrame {
 
     /** Opens {@code file} without asking about unsaved changes (the caller has); errors are shown in a dialog. */
     public boolean openFile(Path file) {
+        planGeneration++;
         try {
             editor.open(file);
-            prefs.recentFiles(prefs.recentFiles().add(file));
-            prefs.lastDirectory(file.toAbsolutePath().getParent());
-            rebuildRecentMenu();
-            return true;
         } catch (InputException e) {
+            planGeneration--;
             error("Cannot open the plan", e.getMessage());
             return false;
         }
+        prefs.recentFiles(prefs.recentFiles().add(file));
+        prefs.lastDirectory(file.toAbsolutePath().getParent());
+        rebuildRecentMenu();
+        if (!editor.check().valid()) {
+            // once the form is laid out: the field to focus may be on a tab never shown yet
+            SwingUtilities.invokeLater(this::goToFirstProblem);
+        }
+        return true;
     }
 
     /**
@@ -273,6 +298,7 @@ public final class PlannerFrame extends JFrame {
 
     /** Puts a recovered plan into this window; its copy is kept up to date here and removed once saved. */
     public void restore(RecoveryStore.Recovered r) throws IOException {
+        planGeneration++;
         editor.restore(r.document(), r.originalFile());
         autosaver.adopt(r);
     }
@@ -319,11 +345,13 @@ public final class PlannerFrame extends JFrame {
             editor.lastValid().ifPresent(inputs -> {
                 editNanos = System.nanoTime();
                 requested = inputs;
+                requestedGeneration = planGeneration;
                 recompute.request(inputs);
                 budgetRequested = budget.request(inputs);
                 budgetStatus.setText("computing the optimal design for the plan as edited (the table below is for an earlier version)…");
             });
         }
+        markFormTabs();
         updateStatus();
     }
 
@@ -353,6 +381,7 @@ public final class PlannerFrame extends JFrame {
         }
         prediction = result.prediction();
         predictedFor = requested;
+        shownGeneration = requestedGeneration;
         charts.show(prediction.charts());
         risks.show(prediction.risks());
         derived.show(prediction.derived());
@@ -369,22 +398,28 @@ public final class PlannerFrame extends JFrame {
         for (Action a : exportActions) {
             a.setEnabled(true);
         }
+        updateStatus();
     }
 
     private void updateStatus() {
         String name = editor.displayName() + (editor.isDirty() ? " •" : "");
         setTitle(name + " — " + TITLE);
         fileStatus.setText(editor.file().map(Path::toString).orElse("untitled") + (editor.isDirty() ? " (unsaved)" : ""));
+        boolean fresh = prediction != null && shownGeneration == planGeneration;
         if (editor.check().valid()) {
-            planStatus.setText("plan valid");
-            planStatus.setToolTipText(null);
+            boolean current = fresh && predictedFor != null && predictedFor.equals(editor.check().inputs());
+            planStatus.setText(PlanStatus.readable(current ? prediction.risks() : null));
+            planStatus.setForeground(current ? verdictColour(PlanStatus.worst(prediction.risks())) : null);
+            planStatus.setToolTipText(current ? "the plan reads; the risk table says how it fares against its limits" : null);
         } else {
             String general = editor.generalProblem().orElse(null);
             String msg = general != null ? general : "a marked field needs attention — "
                     + editor.firstFieldProblem().orElse(editor.check().problem());
             planStatus.setText("⚠ " + msg + (editor.lastValid().isPresent() ? " — charts show the last valid plan" : ""));
-            planStatus.setToolTipText(msg);
+            planStatus.setForeground(null);
+            planStatus.setToolTipText("<html>" + escapeHtml(msg) + "<br>click to go to the first problem (F8)</html>");
         }
+        updateStale(fresh);
         undoAction.setEnabled(editor.canUndo());
         redoAction.setEnabled(editor.canRedo());
         undoAction.putValue(Action.NAME, editor.undoName().map(n -> "Undo: " + n).orElse("Undo"));
@@ -395,8 +430,105 @@ public final class PlannerFrame extends JFrame {
 
     private void newPlan() {
         if (mayLeave()) {
+            planGeneration++;
+            clearResults();
             editor.newPlan();
         }
+    }
+
+    /** Empties charts, risks, derived numbers and the plan-specific cautions: they belonged to the plan left behind. */
+    private void clearResults() {
+        prediction = null;
+        predictedFor = null;
+        charts.show(List.of());
+        risks.show(List.of());
+        derived.show(List.of());
+        cautions.show(List.of(org.ladderkin.report.Cautions.LASER));
+        budgetTable.show(List.of());
+        budgetStatus.setText(" ");
+        for (Action a : exportActions) {
+            a.setEnabled(false);
+        }
+    }
+
+    /**
+     * Washes out results that are not the current plan's and says why above them; shows the prediction's derived
+     * values as placeholders only while the results are the plan's own.
+     */
+    private void updateStale(boolean fresh) {
+        String note;
+        boolean stale;
+        if (prediction == null) {
+            stale = false;
+            note = editor.check().valid() ? null : "no results yet — the plan has errors: fill in the marked fields";
+        } else if (!fresh) {
+            stale = true;
+            note = "stale — from the previous plan" + (editor.check().valid()
+                    ? "; this plan's prediction is on its way" : "; this plan has errors");
+        } else if (!editor.check().valid()) {
+            stale = true;
+            note = "stale — plan has errors; showing its last valid version";
+        } else {
+            stale = false;
+            note = null;
+        }
+        staleLayer.stale(stale, resultsLayer);
+        cautions.stale(stale && !fresh);
+        staleNote.setVisible(note != null);
+        staleNote.setText(note == null ? " " : "⚠ " + note);
+        staleNote.setForeground(javax.swing.UIManager.getColor(stale ? "Ladderkin.verdict.warn" : "Label.foreground"));
+        java.util.Map<String, String> shown = fresh ? DerivedPlaceholders.of(prediction.derived()) : java.util.Map.of();
+        for (FieldFormPanel f : forms()) {
+            f.placeholders(shown);
+        }
+    }
+
+    /** Whether the results on screen are washed out as stale (for tests). */
+    boolean resultsStale() {
+        return staleLayer.stale();
+    }
+
+    /** Marks each form tab holding an invalid field with an icon and the error colour. */
+    private void markFormTabs() {
+        List<FieldFormPanel> all = forms();
+        for (int i = 0; i < all.size() && i < formTabs.getTabCount(); i++) {
+            boolean bad = all.get(i).hasProblem();
+            formTabs.setIconAt(i, bad ? ProblemIcon.INSTANCE : null);
+            formTabs.setForegroundAt(i, bad ? javax.swing.UIManager.getColor("Ladderkin.verdict.fail") : null);
+            String name = formTabs.getTitleAt(i);
+            String tip = formTabs.getToolTipTextAt(i);
+            String base = tip == null ? name : tip.replace(" — holds a field with a problem", "");
+            formTabs.setToolTipTextAt(i, bad ? base + " — holds a field with a problem" : base);
+        }
+        TabFit.fit(formTabs);
+    }
+
+    /**
+     * Shows the form tab of the first field with a problem, scrolls to the field and puts the cursor in it.
+     *
+     * @return whether there was such a field
+     */
+    boolean goToFirstProblem() {
+        List<FieldFormPanel> all = forms();
+        for (int i = 0; i < all.size(); i++) {
+            Optional<JComponent> field = all.get(i).firstInvalid();
+            if (field.isPresent()) {
+                formTabs.setSelectedIndex(i);
+                JComponent c = field.get();
+                formTabs.validate();
+                c.scrollRectToVisible(new Rectangle(0, 0, c.getWidth(), c.getHeight()));
+                if (!c.requestFocusInWindow()) {
+                    // a focusable child (a check box of a set) takes the cursor instead
+                    for (java.awt.Component child : c.getComponents()) {
+                        if (child.isFocusable() && child.requestFocusInWindow()) {
+                            break;
+                        }
+                    }
+                }
+                return true;
+            }
+        }
+        return false;
     }
 
     private void open() {
@@ -635,6 +767,9 @@ public final class PlannerFrame extends JFrame {
         });
         edit.add(undoAction);
         edit.add(redoAction);
+        edit.addSeparator();
+        edit.add(action("Go to First Problem", KeyStroke.getKeyStroke(KeyEvent.VK_F8, 0), this::goToFirstProblem))
+                .setName("menu:first-problem");
         // Ctrl+Shift+Z also redoes, as many editors do.
         getRootPane().getInputMap(JComponent.WHEN_IN_FOCUSED_WINDOW)
                 .put(KeyStroke.getKeyStroke(KeyEvent.VK_Z, menuKey | InputEvent.SHIFT_DOWN_MASK), "redo");
@@ -666,6 +801,13 @@ public final class PlannerFrame extends JFrame {
             view.add(item);
         }
         bar.add(view);
+
+        JMenu help = new JMenu("Help");
+        help.setMnemonic(KeyEvent.VK_H);
+        help.add(action("Using the Planner", KeyStroke.getKeyStroke(KeyEvent.VK_F1, 0), () -> HelpDialogs.using(this)))
+                .setName("help:using");
+        help.add(action("About ladderkin", null, () -> HelpDialogs.about(this))).setName("help:about");
+        bar.add(help);
         return bar;
     }
 
@@ -701,6 +843,14 @@ public final class PlannerFrame extends JFrame {
         JPanel bar = new JPanel(new MigLayout("insets 3 8 3 8", "[grow 60, left]16[grow 40, left]16[right]"));
         bar.setBorder(BorderFactory.createMatteBorder(1, 0, 0, 0, javax.swing.UIManager.getColor("Component.borderColor")));
         planStatus.setName("status:plan");
+        planStatus.addMouseListener(new java.awt.event.MouseAdapter() {
+            @Override
+            public void mouseClicked(java.awt.event.MouseEvent e) {
+                if (!editor.check().valid()) {
+                    goToFirstProblem();
+                }
+            }
+        });
         predictionStatus.setName("status:prediction");
         fileStatus.setName("status:file");
         bar.add(planStatus, "wmin 0");
@@ -802,6 +952,15 @@ public final class PlannerFrame extends JFrame {
                 prefs.divider(name, split.getDividerLocation());
             }
         });
+    }
+
+    private static java.awt.Color verdictColour(org.ladderkin.observe.Verdict v) {
+        return v == org.ladderkin.observe.Verdict.PASS ? null
+                : javax.swing.UIManager.getColor("Ladderkin.verdict." + v.name().toLowerCase(java.util.Locale.ROOT));
+    }
+
+    private static String escapeHtml(String s) {
+        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
     }
 
     private void error(String title, String message) {

@@ -54,7 +54,7 @@ class PlannerScreenshots {
             for (int i = 0; i < 8; i++) {
                 warm.predict(GuiActionRunner.execute(() -> frame.editor().lastValid().orElseThrow()));
             }
-            window.tabbedPane("forms").selectTab("Laser & geometry");
+            window.tabbedPane("forms").selectTab("Laser");
             window.textBox("laser.pulseEnergyRange[1]").deleteText().enterText("1.5 uJ");
             PlannerWindowTest.waitFor("the edit's prediction", () -> frame.deliveredCount() >= 2);
             long delivered = GuiActionRunner.execute(() -> frame.deliveredCount());
@@ -62,7 +62,7 @@ class PlannerScreenshots {
             PlannerWindowTest.waitFor("the undo's prediction", () -> frame.deliveredCount() > delivered);
             String suffix = theme.name().toLowerCase(java.util.Locale.ROOT);
 
-            window.tabbedPane("forms").selectTab("Laser & geometry");
+            window.tabbedPane("forms").selectTab("Laser");
             save(PlannerWindowTest.screenshot(frame, "planner-laser-" + suffix + ".png"));
 
             window.tabbedPane("forms").selectTab("Instruments");
