@@ -42,9 +42,9 @@ class RobertsonTest {
     }
 
     @Test
-    @CheckedAgainst(source = "reference solution of the 'rober' problem at t = 1e11 of the Bari test set for IVP solvers "
-            + "(Mazzia & Magherini), y = (0.2083340149701255e-7, 0.8333360770334713e-13, 0.9999999791665050), as stored in "
-            + "the IVPTestSuite.jl test case rober.jl, read", kind = CheckedAgainst.Kind.REFERENCE_LIBRARY)
+    @CheckedAgainst(source = "Test Set for IVP Solvers (Mazzia & Magherini, Bari), problem file rober.f, subroutine solut "
+            + "(reference computed with RADAU at rtol = atol = 1.1e-18), read in a stored copy: y(1e11) = "
+            + "(0.2083340149701255e-7, 0.8333360770334713e-13, 0.9999999791665050)", kind = CheckedAgainst.Kind.REFERENCE_LIBRARY)
     void reachesTenToTheElevenSecondsAndMatchesRememberedValues() {
         double[] times = {1e5, 1e11};
         IntegrationResult r = INTEGRATOR.integrate(StiffFixtures.robertson(), 0, Y0, times);
