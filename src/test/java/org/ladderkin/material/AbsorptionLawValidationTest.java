@@ -43,34 +43,40 @@ class AbsorptionLawValidationTest {
 
     @Test
     @CheckedAgainst(source = "Yu, Qu, Guo, Peng, Chem. Mater. 15, 2854 (2003): CdSe ε(first exciton) = 5857·D^2.65 M⁻¹cm⁻¹ "
-            + "(quoted by secondary sources; from memory)", kind = CheckedAgainst.Kind.FROM_MEMORY)
+            + "(quoted by secondary sources; from memory: only the abstract is stored here, whose square-to-cubic trend "
+            + "PublishedSizeTrendsTest checks)", kind = CheckedAgainst.Kind.FROM_MEMORY)
     void cdseYuExtinctionAtFirstExciton() {
         AbsorptionLaw law = material("CdSe").firstExcitonAbsorption().orElseThrow();
+        double worst = 0;
         for (double d : new double[] {2.5, 3.5, 5.0}) {
-            Reference.checkRelative("CdSe ε(first exciton) of a " + d + " nm dot (M⁻¹cm⁻¹)",
-                    epsilonPerMPerCm(law.crossSectionM2At(d * 1e-9)), 5857 * Math.pow(d, 2.65), 1e-12);
+            worst = Math.max(worst, Math.abs(epsilonPerMPerCm(law.crossSectionM2At(d * 1e-9)) / (5857 * Math.pow(d, 2.65)) - 1));
         }
+        Reference.check("CdSe ε(first exciton): largest relative deviation from the recalled law at 2.5, 3.5, 5 nm", worst, 0, 1e-12);
     }
 
     @Test
-    @CheckedAgainst(source = "Moreels et al., ACS Nano 3, 3023 (2009): PbS ε(400 nm) = 0.0233·d³ µM⁻¹cm⁻¹ (d³ scaling in the "
-            + "abstract; coefficient quoted by secondary sources, from memory)", kind = CheckedAgainst.Kind.FROM_MEMORY)
+    @CheckedAgainst(source = "Moreels et al., ACS Nano 3, 3023 (2009): PbS ε(400 nm) = 0.0233·d³ µM⁻¹cm⁻¹ (coefficient "
+            + "quoted by secondary sources, from memory: the paper's table is not stored here; the d³ scaling of the "
+            + "abstract is checked in PublishedSizeTrendsTest)", kind = CheckedAgainst.Kind.FROM_MEMORY)
     void pbsMoreelsExtinctionAt400nm() {
         AbsorptionLaw law = material("PbS").highEnergyAbsorption().orElseThrow();
+        double worst = 0;
         for (double d : new double[] {3.0, 5.0, 8.0}) {
-            Reference.checkRelative("PbS ε(400 nm) of a " + d + " nm dot (M⁻¹cm⁻¹)", epsilonPerMPerCm(law.crossSectionM2At(d * 1e-9)),
-                    0.0233 * d * d * d * 1e6, 1e-12);
+            worst = Math.max(worst, Math.abs(epsilonPerMPerCm(law.crossSectionM2At(d * 1e-9)) / (0.0233 * d * d * d * 1e6) - 1));
         }
+        Reference.check("PbS ε(400 nm): largest relative deviation from the recalled law at 3, 5, 8 nm", worst, 0, 1e-12);
     }
 
     @Test
     @CheckedAgainst(source = "Moreels et al., Chem. Mater. 19, 6101 (2007): PbSe ε(400 nm) = 0.0277·d³ µM⁻¹cm⁻¹ "
-            + "(quoted by secondary sources; from memory)", kind = CheckedAgainst.Kind.FROM_MEMORY)
+            + "(quoted by secondary sources; from memory: the paper's table is not stored here; the volume scaling of the "
+            + "abstract is checked in PublishedSizeTrendsTest)", kind = CheckedAgainst.Kind.FROM_MEMORY)
     void pbseMoreelsExtinctionAt400nm() {
         AbsorptionLaw law = material("PbSe").highEnergyAbsorption().orElseThrow();
+        double worst = 0;
         for (double d : new double[] {3.0, 5.0, 8.0}) {
-            Reference.checkRelative("PbSe ε(400 nm) of a " + d + " nm dot (M⁻¹cm⁻¹)", epsilonPerMPerCm(law.crossSectionM2At(d * 1e-9)),
-                    0.0277 * d * d * d * 1e6, 1e-12);
+            worst = Math.max(worst, Math.abs(epsilonPerMPerCm(law.crossSectionM2At(d * 1e-9)) / (0.0277 * d * d * d * 1e6) - 1));
         }
+        Reference.check("PbSe ε(400 nm): largest relative deviation from the recalled law at 3, 5, 8 nm", worst, 0, 1e-12);
     }
 }

@@ -21,8 +21,8 @@ class HeatingTest {
     private static final ThermalMedium TOLUENE = new ThermalMedium(866.9, 157.1 / 92.14e-3, 0.13, 383.75);
 
     @Test
-    @CheckedAgainst(source = "hand calculation with the Ioffe NSM Archive CdSe thermal-properties table (ρ = 5.81 g/cm³, "
-            + "Cp = 49.41 J/(mol·K)): 4 nm sphere V = 3.3510e-26 m³, C = ρcV = 5.0268e-20 J/K; one 3.1 eV photon, no PL: "
+    @CheckedAgainst(source = "hand calculation with wurtzite CdSe ρ = 5.81 g/cm³, C°p = 49.41 J/(mol·K) of the Khimicheskaya "
+            + "entsiklopediya (Chemical Encyclopedia, Moscow, vol. 2, 1990), entry «кадмия селенид», read in a stored copy: 4 nm sphere V = 3.3510e-26 m³, C = ρcV = 5.0268e-20 J/K; one 3.1 eV photon, no PL: "
             + "ΔT = 4.9666e-19 J / 5.0268e-20 J/K = 9.880 K", kind = CheckedAgainst.Kind.PUBLISHED)
     void oneDotTemperatureJumpMatchesHandCalculation() {
         double photonJ = 3.1 * PhysicalConstants.ELECTRONVOLT_J;

@@ -180,9 +180,10 @@ class RadauIIATableauTest {
     }
 
     @Test
-    @CheckedAgainst(source = "from memory: constants DD1 = -(13+7*sqrt6)/3, DD2 = (-13+7*sqrt6)/3, DD3 = -1/3 and "
-            + "U1 = 1/((6 + 81^(1/3) - 9^(1/3))/30) of Hairer's radau5 code (Hairer & Wanner II, Sect. IV.8)",
-            kind = CheckedAgainst.Kind.FROM_MEMORY)
+    @CheckedAgainst(source = "SciPy scipy/integrate/_ivp/radau.py (Radau IIA order 5 after Hairer & Wanner II, Sect. IV.8), "
+            + "read in a stored copy: E = [-13 - 7·√6, -13 + 7·√6, -1]/3 (the error weights over γ₀, as Hairer's DD1..DD3); "
+            + "det(A − γ₀I) = 0 because γ₀ is the real eigenvalue of A, derived",
+            kind = CheckedAgainst.Kind.REFERENCE_LIBRARY)
     void embeddedErrorWeightsMatchHairersConstants() {
         double sq6 = Math.sqrt(6);
         double g0 = RadauIIATableau.GAMMA0;

@@ -10,9 +10,10 @@ import org.ladderkin.validation.Reference;
 class VanDerPolTest {
 
     @Test
-    @CheckedAgainst(source = "from memory: 'vdpol' problem of the Bari/CWI test set for IVP solvers (Mazzia & "
-            + "Magherini), eps = 1e-6, y(0) = (2, 0), reference y(2) = (1.706167732170483, -0.8928097010247975)",
-            kind = CheckedAgainst.Kind.FROM_MEMORY)
+    @CheckedAgainst(source = "Test Set for IVP Solvers (Mazzia & Magherini, Bari), problem file vdpol.f (revision 2006), "
+            + "read in a stored copy: y1' = y2, y2' = ((1 − y1²)y2 − y1)/1e-6, y(0) = (2, 0), subroutine solut y(2) = "
+            + "(0.1706167732170483e1, -0.8928097010247975) (RADAU at rtol = atol = 1.1e-18)",
+            kind = CheckedAgainst.Kind.REFERENCE_LIBRARY)
     void stiffVanDerPolMatchesRememberedReferenceAtT2() {
         IntegrationResult r = new ImplicitStiffIntegrator(new Tolerances(1e-8, 1e-8))
                 .integrate(StiffFixtures.vanDerPol(1e-6), 0, new double[] {2, 0}, new double[] {2});
