@@ -959,10 +959,6 @@ public final class PlannerFrame extends JFrame {
                 : javax.swing.UIManager.getColor("Ladderkin.verdict." + v.name().toLowerCase(java.util.Locale.ROOT));
     }
 
-    private static String escapeHtml(String s) {
-        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
-    }
-
     private void error(String title, String message) {
         JOptionPane.showMessageDialog(this, message, title, JOptionPane.ERROR_MESSAGE);
     }
