@@ -140,7 +140,7 @@ class FitCommandTest {
 
         MainTest.Run text = MainTest.run("fit", modCsv.toString(), "--tau-rad", "20ns", "--tau-auger2", "70ps",
                 "--fluences", "1e13,3e13,1e14,3e14", "--fluence-uncertainty", "0.08", "--pump-radius", "300um",
-                "--probe-radius", "100um", "--quiet");
+                "--probe-radius", "100um");
         assertThat(text.exit()).as(text.err()).isZero();
         assertThat(text.out()).contains("(stat), ±").contains("total").contains("8% fluence calibration")
                 .contains("reduced χ²").contains("photocharging: not tested (");

@@ -21,7 +21,7 @@ class MeasuredIrfCommandsTest {
         Path plan = dir.resolve("p.plan.json");
         Files.writeString(plan, demo.replace("\"irfFwhm\": \"200 fs\"", "\"irfFile\": \"fh-ta-irf.csv\""));
         Path out = dir.resolve("out");
-        MainTest.Run r = MainTest.run("plan", plan.toString(), "--out", out.toString(), "--quiet");
+        MainTest.Run r = MainTest.run("plan", plan.toString(), "--out", out.toString());
         assertThat(r.exit()).as(r.err()).isZero();
         assertThat(r.out()).contains("transient-absorption: 100 fs to 3 ns, IRF 109 fs (measured, fh-ta-irf.csv)");
         JsonNode resolved = new ObjectMapper().readTree(Files.readString(out.resolve("plan-resolved.json")));
@@ -52,7 +52,7 @@ class MeasuredIrfCommandsTest {
         assertThat(Files.readString(out.resolve("fit-report.html"))).contains("Instrument response: measured IRF from");
 
         MainTest.Run text = MainTest.run("fit", csv.toString(), "--tau-rad", "20ns", "--tau-auger2", "40ps",
-                "--fluences", "1e13,3e13,1e14,3e14", "--free", "scale", "--irf-file", DEMO_IRF.toString(), "--quiet");
+                "--fluences", "1e13,3e13,1e14,3e14", "--free", "scale", "--irf-file", DEMO_IRF.toString());
         assertThat(text.exit()).as(text.err()).isZero();
         assertThat(text.out()).containsPattern("measured IRF from .*fh-ta-irf\\.csv, FWHM 1[01][0-9](\\.[0-9])? fs \\(centroid at time zero\\)");
     }
