@@ -84,7 +84,8 @@ public final class FitPanel extends JPanel {
     private final JLabel progress = new JLabel(" ");
     /** Ticks the elapsed time while a fit runs. */
     private final Timer clock = new Timer(1000, e -> showProgress());
-    private final JLabel check = new JLabel(" ");
+    /** The check before a fit, wrapped over as many lines as it needs (a warning cut at the edge would hide its advice). */
+    private final JTextArea check = new JTextArea(1, 20);
     private final JButton push = new JButton("Use fitted values in the plan");
     private final JLabel status = new JLabel(" ");
     private final ExcitationModel excitationModel = new ExcitationModel();
@@ -143,6 +144,13 @@ public final class FitPanel extends JPanel {
         cancel.setName("fit:cancel");
         progress.setName("fit:progress");
         check.setName("fit:check");
+        check.setEditable(false);
+        check.setFocusable(false);
+        check.setOpaque(false);
+        check.setLineWrap(true);
+        check.setWrapStyleWord(true);
+        check.setBorder(null);
+        check.setFont(UIManager.getFont("Label.font"));
         push.setName("fit:push");
         status.setName("fit:status");
         load.addActionListener(e -> loadTracesWithChooser());
