@@ -33,6 +33,7 @@ public final class FitCheck implements AutoCloseable {
     private FitRequest last;
     private volatile boolean checking;
     private volatile FitIdentifiability result;
+    private volatile String failure = "";
 
     FitCheck(FitJobs jobs, Executor deliver) {
         this.jobs = Objects.requireNonNull(jobs, "jobs");
@@ -54,6 +55,7 @@ public final class FitCheck implements AutoCloseable {
             last = request;
             long mine = ++ticket;
             result = null;
+            failure = "";
             if (request == null || options.free().isEmpty()) {
                 runner.cancel();
                 checking = false;
@@ -66,13 +68,12 @@ public final class FitCheck implements AutoCloseable {
 
                     @Override
                     public void finished(FitIdentifiability value) {
-                        arrived(mine, value);
+                        arrived(mine, value, "");
                     }
 
                     @Override
                     public void failed(String why) {
-                        // the preview and the fit say what is wrong with the inputs; the check has nothing to add
-                        arrived(mine, null);
+                        arrived(mine, null, why);
                     }
                 });
             }
@@ -80,15 +81,21 @@ public final class FitCheck implements AutoCloseable {
         fire();
     }
 
-    private void arrived(long mine, FitIdentifiability value) {
+    private void arrived(long mine, FitIdentifiability value, String why) {
         synchronized (this) {
             if (mine != ticket) {
                 return;
             }
             checking = false;
             result = value;
+            failure = why;
         }
         fire();
+    }
+
+    /** Why the last check could not be made, or "" (the preview and the fit say the same about their inputs). */
+    public String failure() {
+        return failure;
     }
 
     /** Whether a check is pending or running. */

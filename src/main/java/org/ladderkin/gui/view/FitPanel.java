@@ -84,7 +84,11 @@ public final class FitPanel extends JPanel {
     private final JLabel progress = new JLabel(" ");
     /** Ticks the elapsed time while a fit runs. */
     private final Timer clock = new Timer(1000, e -> showProgress());
-    private final JLabel check = new JLabel(" ");
+    /**
+     * The check before a fit, wrapped (a warning cut at the edge would hide its advice). Two lines are always kept
+     * for it, so the form below does not jump while the user is about to click it.
+     */
+    private final JTextArea check = new JTextArea(2, 20);
     private final JButton push = new JButton("Use fitted values in the plan");
     private final JLabel status = new JLabel(" ");
     private final ExcitationModel excitationModel = new ExcitationModel();
@@ -143,6 +147,13 @@ public final class FitPanel extends JPanel {
         cancel.setName("fit:cancel");
         progress.setName("fit:progress");
         check.setName("fit:check");
+        check.setEditable(false);
+        check.setFocusable(false);
+        check.setOpaque(false);
+        check.setLineWrap(true);
+        check.setWrapStyleWord(true);
+        check.setBorder(null);
+        check.setFont(UIManager.getFont("Label.font"));
         push.setName("fit:push");
         status.setName("fit:status");
         load.addActionListener(e -> loadTracesWithChooser());
@@ -213,7 +224,7 @@ public final class FitPanel extends JPanel {
 
         add(toolbar, "growx, wrap");
         add(status, "wmin 0, growx, wrap");
-        add(check, "wmin 0, growx, hidemode 3, wrap");
+        add(check, "wmin 0, growx, wrap");
         add(body, "grow");
         setTransferHandler(new FileDropHandler(files -> {
             loadFiles(files);
@@ -309,7 +320,6 @@ public final class FitPanel extends JPanel {
         String checkLine = session.checkLine();
         check.setText(checkLine);
         check.setToolTipText(checkLine.isEmpty() ? null : checkLine);
-        check.setVisible(!checkLine.isEmpty());
         Color warn = UIManager.getColor("Ladderkin.verdict.fail");
         check.setForeground(checkLine.startsWith("⚠") && warn != null ? warn : UIManager.getColor("Label.foreground"));
         PushBack p = run.pushBack();
