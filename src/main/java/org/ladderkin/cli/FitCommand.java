@@ -14,6 +14,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 import org.ladderkin.excite.ExcitationGeometry;
 import org.ladderkin.excite.GaussianBeam;
 import org.ladderkin.fit.Dataset;
+import org.ladderkin.fit.FitIdentifiability;
 import org.ladderkin.fit.FitProgress;
 import org.ladderkin.fit.FitResult;
 import org.ladderkin.fit.LadderFit;
@@ -191,6 +192,12 @@ final class FitCommand implements Callable<Integer> {
                     + "for delays beyond a few ps fit without the cooling process");
             err.flush();
         }
+        // said before the work, as the fit tab does: a pair the data cannot tell apart makes a long fit end nowhere
+        FitIdentifiability check = LadderFit.identifiability(data, setup);
+        if (check.warns()) {
+            err.println("warning: " + check.warning());
+            err.flush();
+        }
         LadderFit.Outcome outcome = LadderFit.fit(data, setup, quiet.on() ? FitProgress.NONE : progress(err));
         FitResult r = outcome.result();
         PlanComparison comparison = planFile == null || !r.ok() ? null : PlanComparison.of(planFile, outcome);
@@ -296,22 +303,39 @@ final class FitCommand implements Callable<Integer> {
         return TraceArguments.apply(data, values, pump, "--fluences");
     }
 
-    /** Model evaluations fill the bar up to the fitter's limit; a start or profile step finished shows its stage. */
+    /**
+     * Model evaluations with the elapsed time and the best reduced χ² met so far (a fit's length is not known in
+     * advance, so the bar's fill only says how much of the fitter's limit is used); a start or profile step shows its
+     * stage.
+     */
     private static FitProgress progress(PrintWriter err) {
         ProgressBar bar = new ProgressBar(err);
         AtomicInteger starts = new AtomicInteger();
-        return (stage, step, total) -> {
-            if (stage.equals("evaluation")) {
-                bar.step(Math.min(step, total - 1), total, "fitting: " + step + " model evaluations");
-            } else {
-                bar.step(step, total, stage + " " + step + "/" + total + (stage.equals("start") ? "" : " (" + starts.incrementAndGet() + ")"));
+        long startNs = System.nanoTime();
+        java.util.concurrent.atomic.AtomicReference<String> best = new java.util.concurrent.atomic.AtomicReference<>("");
+        return new FitProgress() {
+            @Override
+            public void update(String stage, int step, int total) {
+                if (stage.equals("evaluation")) {
+                    long s = (System.nanoTime() - startNs) / 1_000_000_000L;
+                    bar.step(Math.min(step, total - 1), total, String.format(Locale.ROOT, "fitting: %d:%02d elapsed, %d model "
+                            + "evaluations%s", s / 60, s % 60, step, best.get()));
+                } else {
+                    bar.step(step, total, stage + " " + step + "/" + total + (stage.equals("start") ? "" : " ("
+                            + starts.incrementAndGet() + ")"));
+                }
+            }
+
+            @Override
+            public void improved(Best b) {
+                best.set(String.format(Locale.ROOT, ", best χ²/ν %.3g", b.reducedChiSquare()));
             }
         };
     }
 
     private static void summary(PrintWriter out, LadderFit.Outcome outcome) {
         FitResult r = outcome.result();
-        out.println("Fit: " + r.status().name().toLowerCase(Locale.ROOT) + (r.message().isEmpty() ? "" : " — " + r.message()));
+        out.println("Fit: " + r.statusText() + (r.message().isEmpty() ? "" : " — " + r.message()));
         if (!r.ok()) {
             return;
         }

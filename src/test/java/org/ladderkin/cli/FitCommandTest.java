@@ -62,7 +62,19 @@ class FitCommandTest {
         assertThat(root.get("diagnostics")).isEmpty();
         assertThat(new ObjectMapper().readTree(Files.readString(out.resolve("fit-result.json")))).isEqualTo(root);
         String html = Files.readString(out.resolve("fit-report.html"));
-        assertThat(html).contains("<svg").contains("tauAuger2Ps").contains("Residuals");
+        assertThat(html).contains("<svg").contains("τ₂ (ps)").doesNotContain("tauAuger2Ps").contains("Residuals");
+        assertThat(fit.err()).as("σ and τ₂ on a fluence series are told apart").doesNotContain("warning:");
+    }
+
+    @Test
+    void freedLifetimesTheDataCannotTellApartAreNamedBeforeTheFit(@TempDir Path dir) throws Exception {
+        Path csv = simulatedSeries(dir, 11);
+        // the data end at 3 ns: a 20 ns radiative and a 40 ns trapping lifetime have hardly begun to act
+        MainTest.Run fit = MainTest.run("fit", csv.toString(), "--tau-rad", "20ns", "--tau-trap", "40ns",
+                "--tau-auger2", "40ps", "--free", "tau-rad,tau-trap", "--fluences", "1e13,3e13,1e14,3e14",
+                "--cross-section", "1e-14cm2", "--format", "json", "--quiet");
+        String warning = fit.err().lines().filter(l -> l.startsWith("warning: ")).findFirst().orElse("");
+        assertThat(warning).as(fit.err()).contains("τ_rad").contains("τ_trap");
     }
 
     @Test

@@ -782,11 +782,26 @@ public final class PlannerFrame extends JFrame {
             showFitView();
             fitPanel.loadTracesWithChooser();
         })).setName("menu:fit-load");
-        fitMenu.add(action("Run Fit", KeyStroke.getKeyStroke(KeyEvent.VK_R, menuKey), () -> {
-            showFitView();
-            fitPanel.runFit();
+        // the menu items follow the panel's own actions, so they are enabled exactly when its buttons are
+        Action runFit = fitPanel.runAction();
+        fitMenu.add(new javax.swing.JMenuItem(new AbstractAction("Run Fit") {
+            {
+                putValue(Action.ACCELERATOR_KEY, KeyStroke.getKeyStroke(KeyEvent.VK_R, menuKey));
+                setEnabled(runFit.isEnabled());
+                runFit.addPropertyChangeListener(e -> {
+                    if ("enabled".equals(e.getPropertyName())) {
+                        setEnabled(runFit.isEnabled());
+                    }
+                });
+            }
+
+            @Override
+            public void actionPerformed(java.awt.event.ActionEvent e) {
+                showFitView();
+                runFit.actionPerformed(e);
+            }
         })).setName("menu:fit-run");
-        fitMenu.add(action("Cancel Fit", null, fitSession.fit()::cancel)).setName("menu:fit-cancel");
+        fitMenu.add(fitPanel.cancelAction()).setName("menu:fit-cancel");
         bar.add(fitMenu);
 
         JMenu view = new JMenu("View");
