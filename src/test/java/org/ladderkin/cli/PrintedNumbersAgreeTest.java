@@ -42,7 +42,7 @@ class PrintedNumbersAgreeTest {
     @ValueSource(strings = {"cdse-auger-1khz.plan.json", "pbse-multiplication-80mhz.plan.json"})
     void reportTextAndWindowPrintTheResolvedJsonsNumbers(String file, @TempDir Path out) throws Exception {
         Path plan = HOME.resolve("experiments-plan").resolve(file);
-        MainTest.Run run = MainTest.run("plan", plan.toString(), "--out", out.toString(), "--quiet");
+        MainTest.Run run = MainTest.run("plan", plan.toString(), "--out", out.toString());
         assertThat(run.exit()).as(run.err()).isZero();
         JsonNode json = new ObjectMapper().readTree(Files.readString(out.resolve("plan-resolved.json")));
         Html report = new Html(Files.readString(out.resolve("report.html")));
