@@ -114,23 +114,7 @@ public record FitIdentifiability(List<String> free, double conditionNumber, Stri
                                 + time(last) + "): hold it, or add data where it acts");
             }
         }
-        double[][] jtj = new double[k][k];
-        for (double[] row : j) {
-            for (int a = 0; a < k; a++) {
-                double ra = row[a] / norm[a];
-                if (ra == 0) {
-                    continue;
-                }
-                for (int b = a; b < k; b++) {
-                    jtj[a][b] += ra * row[b] / norm[b];
-                }
-            }
-        }
-        for (int a = 0; a < k; a++) {
-            for (int b = 0; b < a; b++) {
-                jtj[a][b] = jtj[b][a];
-            }
-        }
+        double[][] jtj = scaledNormalMatrix(j, norm, k);
         EigenDecompositionSymmetric eig = new EigenDecompositionSymmetric(new Array2DRowRealMatrix(jtj, false));
         double[] ev = eig.getEigenvalues();
         double max = 0;
@@ -259,5 +243,30 @@ public record FitIdentifiability(List<String> free, double conditionNumber, Stri
 
     private static String time(double s) {
         return Quantity.formatBest(s, Dimension.TIME, 2);
+    }
+
+    /**
+     * JᵀJ of the first {@code k} columns of {@code j}, each column divided by its norm: unit diagonal, so its
+     * eigenvalues and inverse compare parameters of any units. Shared with {@link GlobalFitter}'s covariance.
+     */
+    static double[][] scaledNormalMatrix(double[][] j, double[] norm, int k) {
+        double[][] jtj = new double[k][k];
+        for (double[] row : j) {
+            for (int a = 0; a < k; a++) {
+                double ra = row[a] / norm[a];
+                if (ra == 0) {
+                    continue;
+                }
+                for (int b = a; b < k; b++) {
+                    jtj[a][b] += ra * row[b] / norm[b];
+                }
+            }
+        }
+        for (int a = 0; a < k; a++) {
+            for (int b = 0; b < a; b++) {
+                jtj[a][b] = jtj[b][a];
+            }
+        }
+        return jtj;
     }
 }

@@ -301,23 +301,7 @@ public final class GlobalFitter {
         if (notConverged != null) {
             status = notConverged;
         } else if (status.isEmpty() && k > 0) {
-            double[][] jtj = new double[k][k];
-            for (double[] row : j) {
-                for (int a = 0; a < k; a++) {
-                    double ra = row[a] / norm[a];
-                    if (ra == 0) {
-                        continue;
-                    }
-                    for (int b = a; b < k; b++) {
-                        jtj[a][b] += ra * row[b] / norm[b];
-                    }
-                }
-            }
-            for (int a = 0; a < k; a++) {
-                for (int b = 0; b < a; b++) {
-                    jtj[a][b] = jtj[b][a];
-                }
-            }
+            double[][] jtj = FitIdentifiability.scaledNormalMatrix(j, norm, k);
             EigenDecompositionSymmetric eig = new EigenDecompositionSymmetric(new Array2DRowRealMatrix(jtj, false));
             double[] ev = eig.getEigenvalues();
             double max = 0;
