@@ -160,12 +160,14 @@ public final class FitPanel extends JPanel {
         push.addActionListener(e -> pushBack());
         fit.setToolTipText("Fit the loaded traces (Ctrl+R)");
 
-        JPanel toolbar = new JPanel(new MigLayout("insets 0", "[][]16[][][320:320:, grow]16[]"));
+        // the progress line gets a row of its own: beside the buttons it was cut at the default width
+        JPanel toolbar = new JPanel(new MigLayout("insets 0", "[][]16[][grow]16[]"));
         toolbar.add(load);
         toolbar.add(fit);
         toolbar.add(cancel);
-        toolbar.add(progress, "wmin 0, growx");
-        toolbar.add(push);
+        toolbar.add(new JLabel(), "growx");
+        toolbar.add(push, "wrap");
+        toolbar.add(progress, "span, wmin 0, growx");
 
         excitations.setName("fit:excitations");
         excitations.setFillsViewportHeight(true);
