@@ -44,6 +44,25 @@ public final class Main implements Callable<Integer> {
     public static void main(String[] args) {
         PrintWriter out = new PrintWriter(System.out, true);
         PrintWriter err = new PrintWriter(System.err, true);
-        System.exit(commandLine(out, err).execute(args));
+        System.exit(run(commandLine(out, err), args));
+    }
+
+    /**
+     * Runs a command line; an {@link Error} (out of memory, stack overflow) that escapes the command still ends in one
+     * line and an exit code, since picocli hands only exceptions to {@link ErrorReporter}.
+     */
+    static int run(CommandLine cmd, String... args) {
+        try {
+            return cmd.execute(args);
+        } catch (OutOfMemoryError e) {
+            cmd.getErr().println("ladderkin: out of memory: the input asks for more than the Java heap holds (" + e.getMessage()
+                    + "); lower the ladder size, the delay count or the fluence range, or raise the heap with LADDERKIN_JAVA_OPTS=-Xmx...");
+            cmd.getErr().flush();
+            return ExitCodes.INTERNAL;
+        } catch (StackOverflowError e) {
+            cmd.getErr().println("ladderkin: internal error (please report with the input that caused it): stack overflow");
+            cmd.getErr().flush();
+            return ExitCodes.INTERNAL;
+        }
     }
 }

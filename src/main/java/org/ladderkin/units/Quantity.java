@@ -3,8 +3,6 @@ package org.ladderkin.units;
 import java.math.BigDecimal;
 import java.util.Locale;
 import java.util.Objects;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 
 /**
  * A number with its unit, exactly as the user wrote it ("50 ps", "0.3 mJ/cm²"). Engines take {@link #si()};
@@ -15,8 +13,8 @@ import java.util.regex.Pattern;
  */
 public record Quantity(double value, Unit unit) {
 
-    private static final Pattern NUMBER_THEN_UNIT = Pattern.compile(
-            "^\\s*([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)\\s*(.*?)\\s*$");
+    /** Longest text read as a quantity; longer text is refused before any scanning (no value or unit is that long). */
+    public static final int MAX_TEXT_LENGTH = 200;
 
     public Quantity {
         Objects.requireNonNull(unit, "unit");
@@ -65,16 +63,21 @@ public record Quantity(double value, Unit unit) {
      */
     public static Quantity parse(String text, Dimension expected) {
         Objects.requireNonNull(text, "text");
-        Matcher m = NUMBER_THEN_UNIT.matcher(text);
         String wanted = expected == null ? "a quantity such as 50 ps" : article(expected.label()) + " such as " + expected.example();
-        if (!m.matches()) {
-            throw new QuantityFormatException(text, QuantityFormatException.Reason.BAD_NUMBER, "cannot read a number in '" + text + "': expected " + wanted);
+        String shown = Excerpt.of(text);
+        if (text.length() > MAX_TEXT_LENGTH) {
+            throw new QuantityFormatException(text, QuantityFormatException.Reason.BAD_NUMBER, "text too long to be a quantity ("
+                    + text.length() + " characters, at most " + MAX_TEXT_LENGTH + "): '" + shown + "'");
         }
-        double number = Double.parseDouble(m.group(1));
+        String[] numberAndUnit = splitNumber(text);
+        if (numberAndUnit == null) {
+            throw new QuantityFormatException(text, QuantityFormatException.Reason.BAD_NUMBER, "cannot read a number in '" + shown + "': expected " + wanted);
+        }
+        double number = Double.parseDouble(numberAndUnit[0]);
         if (!Double.isFinite(number)) {
-            throw new QuantityFormatException(text, QuantityFormatException.Reason.OUT_OF_RANGE, "number out of range in '" + text + "'");
+            throw new QuantityFormatException(text, QuantityFormatException.Reason.OUT_OF_RANGE, "number out of range in '" + shown + "'");
         }
-        String unitText = m.group(2);
+        String unitText = numberAndUnit[1];
         if (unitText.isEmpty()) {
             if (expected == null || expected == Dimension.DIMENSIONLESS) {
                 return new Quantity(number, Units.of(""));
@@ -82,25 +85,87 @@ public record Quantity(double value, Unit unit) {
             if (expected == Dimension.ABSORBANCE) {
                 return new Quantity(number, Units.of("OD"));
             }
-            throw new QuantityFormatException(text, QuantityFormatException.Reason.MISSING_UNIT, "missing unit in '" + text + "': expected " + wanted
+            throw new QuantityFormatException(text, QuantityFormatException.Reason.MISSING_UNIT, "missing unit in '" + shown + "': expected " + wanted
                     + " (units: " + Units.accepted(expected) + ")");
         }
         Unit unit = Units.find(unitText);
         if (unit == null && unitText.matches(",\\d.*")) {
             // "1,5 nJ": a decimal comma; unlike a table cell, a quantity's comma may separate list items
-            throw new QuantityFormatException(text, QuantityFormatException.Reason.BAD_NUMBER, "decimal comma in '" + text
-                    + "': write the decimal with a point (" + m.group(1) + "." + unitText.substring(1) + ")");
+            throw new QuantityFormatException(text, QuantityFormatException.Reason.BAD_NUMBER, "decimal comma in '" + shown
+                    + "': write the decimal with a point (" + numberAndUnit[0] + "." + Excerpt.of(unitText.substring(1)) + ")");
         }
         if (unit == null) {
             String list = expected == null ? "see 'ladderkin --help'" : Units.accepted(expected);
-            throw new QuantityFormatException(text, QuantityFormatException.Reason.UNKNOWN_UNIT, "unknown unit '" + unitText + "' in '" + text + "': expected "
+            throw new QuantityFormatException(text, QuantityFormatException.Reason.UNKNOWN_UNIT, "unknown unit '" + Excerpt.of(unitText) + "' in '" + shown + "': expected "
                     + (expected == null ? "a known unit" : article(expected.label()) + " in " + list));
         }
         if (expected != null && unit.dimension() != expected) {
-            throw new QuantityFormatException(text, QuantityFormatException.Reason.WRONG_DIMENSION, "'" + text + "' is " + article(unit.dimension().label()) + ", expected "
+            throw new QuantityFormatException(text, QuantityFormatException.Reason.WRONG_DIMENSION, "'" + shown + "' is " + article(unit.dimension().label()) + ", expected "
                     + wanted + " (units: " + Units.accepted(expected) + ")");
         }
         return new Quantity(number, unit);
+    }
+
+    /**
+     * The leading number and the rest with surrounding whitespace removed, or null when the text does not start with a
+     * number. A hand-written scan rather than a regular expression: it is linear in the length whatever the text holds.
+     */
+    private static String[] splitNumber(String text) {
+        int n = text.length();
+        int i = skipSpace(text, 0);
+        int start = i;
+        if (i < n && (text.charAt(i) == '+' || text.charAt(i) == '-')) {
+            i++;
+        }
+        int intDigits = digits(text, i);
+        i += intDigits;
+        int fracDigits = 0;
+        if (i < n && text.charAt(i) == '.') {
+            fracDigits = digits(text, i + 1);
+            if (intDigits == 0 && fracDigits == 0) {
+                return null;
+            }
+            i += 1 + fracDigits;
+        } else if (intDigits == 0) {
+            return null;
+        }
+        if (i < n && (text.charAt(i) == 'e' || text.charAt(i) == 'E')) {
+            int j = i + 1;
+            if (j < n && (text.charAt(j) == '+' || text.charAt(j) == '-')) {
+                j++;
+            }
+            int expDigits = digits(text, j);
+            if (expDigits > 0) {
+                i = j + expDigits;
+            }
+        }
+        String number = text.substring(start, i);
+        int end = n;
+        while (end > i && isSpace(text.charAt(end - 1))) {
+            end--;
+        }
+        return new String[] {number, text.substring(skipSpace(text, i), Math.max(end, skipSpace(text, i)))};
+    }
+
+    private static int digits(String text, int from) {
+        int i = from;
+        while (i < text.length() && text.charAt(i) >= '0' && text.charAt(i) <= '9') {
+            i++;
+        }
+        return i - from;
+    }
+
+    private static int skipSpace(String text, int from) {
+        int i = from;
+        while (i < text.length() && isSpace(text.charAt(i))) {
+            i++;
+        }
+        return i;
+    }
+
+    /** The whitespace a regular expression's \\s matches, so inputs read exactly as before. */
+    private static boolean isSpace(char c) {
+        return c == ' ' || c == '\t' || c == '\n' || c == '\u000B' || c == '\f' || c == '\r';
     }
 
     /** Reads {@code text} as {@code expected} and returns its SI value. */

@@ -68,4 +68,24 @@ class MainTest {
         Run r = run("plan", "--no-such-flag");
         assertThat(r.exit()).isEqualTo(ExitCodes.USAGE);
     }
+
+    @picocli.CommandLine.Command(name = "exhausts")
+    static final class Exhausts implements java.util.concurrent.Callable<Integer> {
+        @Override
+        public Integer call() {
+            throw new OutOfMemoryError("Requested array size exceeds VM limit");
+        }
+    }
+
+    /** An Error is not an Exception, so picocli does not hand it to the error reporter; main must still print one line. */
+    @Test
+    void anOutOfMemoryErrorEndsInOneLineAndAnExitCode() {
+        StringWriter err = new StringWriter();
+        picocli.CommandLine cmd = new picocli.CommandLine(new Exhausts());
+        cmd.setErr(new PrintWriter(err));
+        int exit = Main.run(cmd);
+        assertThat(exit).isEqualTo(ExitCodes.INTERNAL);
+        assertThat(err.toString().strip()).startsWith("ladderkin: out of memory: the input asks for more than the Java heap holds")
+                .contains("Requested array size exceeds VM limit").doesNotContain("\n").doesNotContain("at org.");
+    }
 }

@@ -169,4 +169,59 @@ class QuantityTest {
         assertThat(Quantity.of(1, "ns").in(Units.of("ps")).value()).isCloseTo(1000.0, org.assertj.core.data.Offset.offset(1e-9));
         assertThatThrownBy(() -> Quantity.of(1, "ns").in(Units.of("nm"))).isInstanceOf(IllegalArgumentException.class);
     }
+
+    /** A 60,000-character value used to hang every reader of quantities (a lazy regular expression backtracked). */
+    @Test
+    void longTextIsRefusedAtOnceWithAShortOneLineMessage() {
+        String longValue = "1" + " ".repeat(60_000) + "\nx";
+        org.junit.jupiter.api.Assertions.assertTimeoutPreemptively(java.time.Duration.ofSeconds(20), () ->
+                assertThatThrownBy(() -> Quantity.parse(longValue, Dimension.TIME))
+                        .isInstanceOf(QuantityFormatException.class)
+                        .hasMessageStartingWith("text too long to be a quantity (60003 characters, at most 200)")
+                        .satisfies(e -> assertThat(e.getMessage()).doesNotContain("\n").hasSizeLessThan(200)));
+    }
+
+    @Test
+    void echoedTextIsEscapedAndCut() {
+        assertThatThrownBy(() -> Quantity.parse("5 p\ns", Dimension.TIME))
+                .hasMessage("unknown unit 'p\\ns' in '5 p\\ns': expected a time in " + Units.accepted(Dimension.TIME));
+        assertThat(Excerpt.of("a".repeat(100))).isEqualTo("a".repeat(Excerpt.MAX_SHOWN) + "…");
+        assertThat(Excerpt.of("tab\there\u0000")).isEqualTo("tab\\there\\u0000");
+    }
+
+    /** The hand-written number scan reads what the regular expression it replaced read, on random short texts. */
+    @Test
+    void numberScanAgreesWithTheRegularExpressionItReplaced() {
+        java.util.regex.Pattern old = java.util.regex.Pattern.compile(
+                "^\\s*([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)\\s*(.*?)\\s*$");
+        String[] pieces = {" ", "1", "0", ".", "e", "E", "+", "-", "5", "ps", "ns", "nJ", "\t", "x", ","};
+        SplittableRandom random = new SplittableRandom(7);
+        for (int k = 0; k < 20_000; k++) {
+            StringBuilder b = new StringBuilder();
+            for (int i = 0, n = 1 + random.nextInt(8); i < n; i++) {
+                b.append(pieces[random.nextInt(pieces.length)]);
+            }
+            String text = b.toString();
+            java.util.regex.Matcher m = old.matcher(text);
+            String expected;
+            if (!m.matches()) {
+                expected = "BAD_NUMBER";
+            } else if (!Double.isFinite(Double.parseDouble(m.group(1)))) {
+                expected = "OUT_OF_RANGE";
+            } else if (m.group(2).isEmpty()) {
+                expected = "value " + Double.parseDouble(m.group(1));
+            } else {
+                expected = Units.find(m.group(2)) == null ? (m.group(2).matches(",\\d.*") ? "BAD_NUMBER" : "UNKNOWN_UNIT")
+                        : "value " + Double.parseDouble(m.group(1)) + " " + Units.find(m.group(2)).symbol();
+            }
+            String actual;
+            try {
+                Quantity q = Quantity.parse(text);
+                actual = "value " + q.value() + (q.unit().symbol().isEmpty() ? "" : " " + q.unit().symbol());
+            } catch (QuantityFormatException e) {
+                actual = e.reason().name();
+            }
+            assertThat(actual).as("'%s'", text).isEqualTo(expected);
+        }
+    }
 }
