@@ -103,6 +103,11 @@ public record Quantity(double value, Unit unit) {
             throw new QuantityFormatException(text, QuantityFormatException.Reason.WRONG_DIMENSION, "'" + shown + "' is " + article(unit.dimension().label()) + ", expected "
                     + wanted + " (units: " + Units.accepted(expected) + ")");
         }
+        if (!Double.isFinite(unit.toSi(number))) {
+            // "1e308 h" is a finite number but an infinite number of seconds: every later check would see Infinity
+            throw new QuantityFormatException(text, QuantityFormatException.Reason.OUT_OF_RANGE, "number out of range in '" + shown
+                    + "': it overflows in SI units");
+        }
         return new Quantity(number, unit);
     }
 

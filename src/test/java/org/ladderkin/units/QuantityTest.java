@@ -224,4 +224,14 @@ class QuantityTest {
             assertThat(actual).as("'%s'", text).isEqualTo(expected);
         }
     }
+
+    /** A plan's irfFwhm of "1e308 h" used to pass the > 0 check as Infinity seconds and give a delay of -9.2e14 ps. */
+    @Test
+    void aValueThatOverflowsInSiIsRefused() {
+        assertThatThrownBy(() -> Quantity.parse("1e308 h", Dimension.TIME))
+                .isInstanceOf(QuantityFormatException.class)
+                .hasMessage("number out of range in '1e308 h': it overflows in SI units")
+                .extracting(e -> ((QuantityFormatException) e).reason()).isEqualTo(QuantityFormatException.Reason.OUT_OF_RANGE);
+        assertThat(Quantity.parse("1e300 h", Dimension.TIME).si()).isEqualTo(3.6e303);
+    }
 }
