@@ -85,9 +85,30 @@ final class ModelOptions {
                 throw new IllegalArgumentException("give either a model file or " + RadiativeProcess.LIFETIME.flag() + "/"
                         + AugerProcess.BIEXCITON_LIFETIME.flag() + ", not both");
             }
+            List<String> ignored = flagsGiven();
+            if (!ignored.isEmpty()) {
+                // a flag beside a model file used to change nothing, silently: the file is the whole model
+                throw new IllegalArgumentException(String.join(", ", ignored) + (ignored.size() == 1 ? " does" : " do")
+                        + " not combine with a model file " + modelFile.getFileName() + ": put the value in the file's section instead");
+            }
             return ModelCodec.read(modelFile).model();
         }
         return ProcessRegistry.read(this::section, degeneracy, nMax == null ? 0 : nMax);
+    }
+
+    /** The model flags on the command line (registry flags and --degeneracy), in registry order. */
+    private List<String> flagsGiven() {
+        List<String> given = new java.util.ArrayList<>();
+        var parsed = spec.commandLine() == null ? null : spec.commandLine().getParseResult();
+        if (parsed != null && parsed.hasMatchedOption("--degeneracy")) {
+            given.add("--degeneracy");
+        }
+        for (ProcessParameter p : ProcessRegistry.parameters()) {
+            if (text(p) != null) {
+                given.add(p.flag());
+            }
+        }
+        return given;
     }
 
     private Optional<ParameterSource> section(ProcessType<?> type) {

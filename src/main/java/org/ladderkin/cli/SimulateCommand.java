@@ -44,7 +44,7 @@ final class SimulateCommand implements Callable<Integer> {
     @Mixin
     QuietOption quiet;
 
-    @Parameters(index = "0", arity = "0..1", paramLabel = "MODEL.json", description = "model file (omit to build the model from flags)")
+    @Parameters(index = "0", arity = "0..1", paramLabel = "MODEL.json", description = "model file (omit to build the model from flags; the model flags do not combine with it)")
     Path modelFile;
 
     @Option(names = "--n-avg", split = ",", paramLabel = "N", defaultValue = "1",

@@ -43,6 +43,18 @@ class SimulateCommandTest {
         }
     }
 
+    /** Beside a model file, --tau-trap, --charges, --degeneracy ... used to change nothing and exit 0. */
+    @Test
+    void modelFlagsBesideAModelFileAreRefusedNotIgnored() {
+        String preset = HOME.resolve("models/presets/cdse-4nm.model.json").toString();
+        MainTest.Run r = MainTest.run("simulate", preset, "--tau-trap", "1ns", "--degeneracy", "8", "--n-avg", "0.5", "--delays", "1ps,1ns");
+        assertThat(r.exit()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err().strip().lines()).hasSize(1);
+        assertThat(r.err()).contains("--degeneracy, --tau-trap do not combine with a model file cdse-4nm.model.json");
+        MainTest.Run plain = MainTest.run("simulate", preset, "--n-avg", "0.5", "--delays", "1ps,1ns", "--nmax", "8");
+        assertThat(plain.exit()).isZero();
+    }
+
     @Test
     void badInputGivesOneLineAndExitCode3(@TempDir Path dir) throws Exception {
         MainTest.Run r = MainTest.run("simulate", "--tau-rad", "20 kHz", "--tau-auger2", "50ps");
