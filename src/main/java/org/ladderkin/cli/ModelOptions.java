@@ -136,6 +136,10 @@ final class ModelOptions {
             if (!(x > 0) || !Double.isFinite(x)) {
                 throw error(p, "must be > 0, was " + t);
             }
+            String problem = p.problemWith(x);
+            if (problem != null) {
+                throw error(p, problem);
+            }
             return x;
         }
 
@@ -151,6 +155,10 @@ final class ModelOptions {
             if (!(x >= 0) || !Double.isFinite(x) || (p.kind() == ParameterKind.PROBABILITY && x > 1)) {
                 throw error(p, (p.kind() == ParameterKind.PROBABILITY ? "must be between 0 and 1" : "must be >= 0")
                         + ", was " + t);
+            }
+            String problem = p.problemWith(x);
+            if (problem != null) {
+                throw error(p, problem);
             }
             return x;
         }

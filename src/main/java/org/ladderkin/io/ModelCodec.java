@@ -103,7 +103,13 @@ public final class ModelCodec {
 
         @Override
         public double seconds(ProcessParameter p) {
-            return at(p).positive(Dimension.TIME, null);
+            Node n = at(p);
+            double x = n.positive(Dimension.TIME, null);
+            String problem = p.problemWith(x);
+            if (problem != null) {
+                throw n.error(InputProblem.OUT_OF_RANGE, problem);
+            }
+            return x;
         }
 
         @Override
@@ -113,8 +119,9 @@ public final class ModelCodec {
                 return n.probability();
             }
             double x = n.number();
-            if (x < 0) {
-                throw n.error(InputProblem.OUT_OF_RANGE, "must be >= 0, was " + x);
+            String problem = x < 0 ? "must be >= 0, was " + x : p.problemWith(x);
+            if (problem != null) {
+                throw n.error(InputProblem.OUT_OF_RANGE, problem);
             }
             return x;
         }

@@ -49,6 +49,30 @@ public record ProcessParameter(String key, ParameterKind kind, String label, Str
         }
     }
 
+    /**
+     * Shortest lifetime a model may hold: 1 fs, below any carrier process in these dots. With {@link #MAX_FACTOR} and
+     * the ladder's largest multiplicities it keeps every rate the engine builds finite.
+     */
+    public static final double MIN_LIFETIME_S = 1e-15;
+    /** Longest lifetime a model may hold: about 32 years; longer is "off", which is written by leaving it out. */
+    public static final double MAX_LIFETIME_S = 1e9;
+    /** Largest rate factor (e.g. a trion's radiative factor); a factor of 1e300 turned rates into Infinity. */
+    public static final double MAX_FACTOR = 1e6;
+
+    /**
+     * What is wrong with {@code valueSi} for this parameter (allowed range in the text), or null when it is allowed.
+     * Every reader asks this where it reads the value, so the engine's guards are never the first to see it.
+     */
+    public String problemWith(double valueSi) {
+        return switch (kind) {
+            case LIFETIME -> valueSi >= MIN_LIFETIME_S && valueSi <= MAX_LIFETIME_S ? null
+                    : "must be between 1 fs and 1e9 s, was " + valueSi + " s";
+            case PROBABILITY -> valueSi >= 0 && valueSi <= 1 ? null : "must be between 0 and 1, was " + valueSi;
+            case FACTOR -> valueSi >= 0 && valueSi <= MAX_FACTOR ? null : "must be between 0 and 1e6, was " + valueSi;
+            default -> null;
+        };
+    }
+
     /** A lifetime (seconds inside, {@code tradeUnit} at the edges). */
     public static ProcessParameter lifetime(String key, String label, String flag, String help, String tradeUnit) {
         return new ProcessParameter(key, ParameterKind.LIFETIME, label, flag, help, tradeUnit, List.of(), null, null, null,
