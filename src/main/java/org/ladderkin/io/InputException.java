@@ -52,11 +52,41 @@ public final class InputException extends RuntimeException {
         return detail;
     }
 
+    /** Longest field path shown; a field name comes from the user's file and may be anything. */
+    private static final int MAX_FIELD_SHOWN = 120;
+
     private static String compose(SourceLocation location, String field, String detail) {
         StringBuilder b = new StringBuilder(location.toString()).append(": ");
         if (field != null && !field.isEmpty()) {
-            b.append("field '").append(field).append("': ");
+            String shown = field.length() > MAX_FIELD_SHOWN ? field.substring(0, MAX_FIELD_SHOWN) + "…" : field;
+            b.append("field '").append(shown).append("': ");
         }
-        return b.append(detail).toString();
+        return oneLine(b.append(detail).toString());
+    }
+
+    /** The message on one line whatever the user's text held: control characters are written as escapes. */
+    private static String oneLine(String message) {
+        StringBuilder b = null;
+        for (int i = 0; i < message.length(); i++) {
+            char c = message.charAt(i);
+            boolean control = Character.isISOControl(c) || c == '\u2028' || c == '\u2029';
+            if (control && b == null) {
+                b = new StringBuilder(message.length() + 16).append(message, 0, i);
+            }
+            if (b != null) {
+                if (!control) {
+                    b.append(c);
+                } else if (c == '\n') {
+                    b.append("\\n");
+                } else if (c == '\r') {
+                    b.append("\\r");
+                } else if (c == '\t') {
+                    b.append("\\t");
+                } else {
+                    b.append(String.format("\\u%04x", (int) c));
+                }
+            }
+        }
+        return b == null ? message : b.toString();
     }
 }

@@ -17,6 +17,7 @@ import org.ladderkin.io.InputException;
 import org.ladderkin.io.InputProblem;
 import org.ladderkin.io.SourceLocation;
 import org.ladderkin.units.Dimension;
+import org.ladderkin.units.Excerpt;
 import org.ladderkin.units.Quantity;
 import org.ladderkin.units.QuantityFormatException;
 import org.ladderkin.units.Unit;
@@ -213,13 +214,13 @@ public final class Node {
         String v = s.string();
         String prefix = name + "/";
         if (!v.startsWith(prefix)) {
-            throw s.error(InputProblem.WRONG_SCHEMA, "expected schema '" + name + "/" + newestVersion + "', found '" + v + "'");
+            throw s.error(InputProblem.WRONG_SCHEMA, "expected schema '" + name + "/" + newestVersion + "', found '" + Excerpt.of(v) + "'");
         }
         int version;
         try {
             version = Integer.parseInt(v.substring(prefix.length()));
         } catch (NumberFormatException e) {
-            throw s.error(InputProblem.WRONG_SCHEMA, "schema version must be a whole number, found '" + v + "'");
+            throw s.error(InputProblem.WRONG_SCHEMA, "schema version must be a whole number, found '" + Excerpt.of(v) + "'");
         }
         if (version < 1 || version > newestVersion) {
             throw s.error(InputProblem.WRONG_SCHEMA, "unsupported schema version " + version + " (this build reads " + name + "/1 to /" + newestVersion + ")");
@@ -287,10 +288,10 @@ public final class Node {
         requireKind(Kind.NUMBER, "a whole number");
         double number = json.doubleValue();
         if (number != Math.rint(number) || text.contains(".") || text.contains("e") || text.contains("E")) {
-            throw error(InputProblem.OUT_OF_RANGE, "must be a whole number, was " + text);
+            throw error(InputProblem.OUT_OF_RANGE, "must be a whole number, was " + Excerpt.of(text));
         }
         if (number < min || number > max) {
-            throw error(InputProblem.OUT_OF_RANGE, "must be between " + min + " and " + max + ", was " + text);
+            throw error(InputProblem.OUT_OF_RANGE, "must be between " + min + " and " + max + ", was " + Excerpt.of(text));
         }
         return (int) number;
     }
@@ -303,7 +304,7 @@ public final class Node {
                 return s;
             }
         }
-        throw error(InputProblem.BAD_CHOICE, "'" + s + "' is not one of: " + String.join(", ", allowed));
+        throw error(InputProblem.BAD_CHOICE, "'" + Excerpt.of(s) + "' is not one of: " + String.join(", ", allowed));
     }
 
     /**
@@ -351,7 +352,7 @@ public final class Node {
     public double probability() {
         double p = quantity(Dimension.DIMENSIONLESS, org.ladderkin.units.Units.of("")).si();
         if (p < 0 || p > 1) {
-            throw error(InputProblem.OUT_OF_RANGE, "must be a probability between 0 and 1, was " + (kind == Kind.STRING ? text : p));
+            throw error(InputProblem.OUT_OF_RANGE, "must be a probability between 0 and 1, was " + (kind == Kind.STRING ? Excerpt.of(text) : p));
         }
         return p;
     }
