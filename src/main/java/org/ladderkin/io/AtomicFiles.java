@@ -44,7 +44,9 @@ public final class AtomicFiles {
         Path absolute = target.toAbsolutePath();
         Path dir = absolute.getParent();
         Files.createDirectories(dir);
-        Path tmp = Files.createTempFile(dir, "." + absolute.getFileName() + ".", ".tmp");
+        String prefix = "." + absolute.getFileName() + ".";
+        Path tmp = Files.createTempFile(dir, prefix + ProcessHandle.current().pid() + "-", ".tmp");
+        removeStaleTemporaries(dir, prefix);
         boolean moved = false;
         try {
             keepPermissions(absolute, tmp);
@@ -65,6 +67,52 @@ public final class AtomicFiles {
                 Files.deleteIfExists(tmp);
             }
         }
+    }
+
+    /** Age after which a temporary file named without its writer's process id (older versions) counts as left over. */
+    private static final java.time.Duration UNOWNED_TEMPORARY_AGE = java.time.Duration.ofMinutes(10);
+
+    /**
+     * Removes this file's temporary files left by writers that were killed: those naming a process id that is no longer
+     * running, and old unnamed ones. A killed run otherwise leaves one behind on every kill, and no later run removed them.
+     */
+    static void removeStaleTemporaries(Path dir, String prefix) {
+        long self = ProcessHandle.current().pid();
+        try (var entries = Files.newDirectoryStream(dir, p -> {
+            String n = p.getFileName().toString();
+            return n.startsWith(prefix) && n.endsWith(".tmp");
+        })) {
+            for (Path p : entries) {
+                String middle = p.getFileName().toString();
+                middle = middle.substring(prefix.length(), middle.length() - ".tmp".length());
+                int dash = middle.indexOf('-');
+                boolean stale;
+                if (dash > 0 && digits(middle.substring(0, dash)) && digits(middle.substring(dash + 1))) {
+                    long pid = Long.parseLong(middle.substring(0, dash));
+                    stale = pid != self && ProcessHandle.of(pid).map(h -> !h.isAlive()).orElse(true);
+                } else {
+                    stale = digits(middle) && Files.getLastModifiedTime(p).toInstant()
+                            .isBefore(java.time.Instant.now().minus(UNOWNED_TEMPORARY_AGE));
+                }
+                if (stale) {
+                    Files.deleteIfExists(p);
+                }
+            }
+        } catch (IOException | RuntimeException e) {
+            // tidying is a courtesy: it must never stop the write the user asked for
+        }
+    }
+
+    private static boolean digits(String s) {
+        if (s.isEmpty() || s.length() > 19) {
+            return false;
+        }
+        for (int i = 0; i < s.length(); i++) {
+            if (s.charAt(i) < '0' || s.charAt(i) > '9') {
+                return false;
+            }
+        }
+        return true;
     }
 
     /**

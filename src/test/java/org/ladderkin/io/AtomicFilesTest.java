@@ -66,4 +66,30 @@ class AtomicFilesTest {
             assertThat(files).containsExactly(target);
         }
     }
+
+    /** A run killed while writing left ".report.html.<random>.tmp" behind, and no later run removed it. */
+    @Test
+    void temporaryFilesOfKilledWritersAreRemovedByTheNextWrite(@TempDir Path dir) throws Exception {
+        Process finished = new ProcessBuilder("true").start();
+        finished.waitFor();
+        long deadPid = finished.pid();
+        long alivePid = ProcessHandle.current().pid();
+        Path dead = Files.writeString(dir.resolve(".report.html." + deadPid + "-123456.tmp"), "torn");
+        Path alive = Files.writeString(dir.resolve(".report.html." + alivePid + "-42.tmp"), "being written");
+        Path oldUnowned = Files.writeString(dir.resolve(".report.html.987654321.tmp"), "old");
+        Files.setLastModifiedTime(oldUnowned, java.nio.file.attribute.FileTime.from(java.time.Instant.now().minusSeconds(3600)));
+        Path recentUnowned = Files.writeString(dir.resolve(".report.html.123.tmp"), "recent");
+        Path otherFile = Files.writeString(dir.resolve(".traces.csv." + deadPid + "-1.tmp"), "another file's");
+        AtomicFiles.writeString(dir.resolve("report.html"), "new");
+        assertThat(Files.readString(dir.resolve("report.html"))).isEqualTo("new");
+        assertThat(dead).doesNotExist();
+        assertThat(oldUnowned).doesNotExist();
+        assertThat(alive).exists();
+        assertThat(recentUnowned).exists();
+        assertThat(otherFile).exists();
+        try (var left = Files.list(dir)) {
+            assertThat(left.map(p -> p.getFileName().toString())).containsExactlyInAnyOrder("report.html",
+                    alive.getFileName().toString(), recentUnowned.getFileName().toString(), otherFile.getFileName().toString());
+        }
+    }
 }
