@@ -10,6 +10,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.ladderkin.fit.ThresholdLawFit;
+import org.ladderkin.fit.YieldSummary;
 import org.ladderkin.io.AtomicFiles;
 import org.ladderkin.io.FitResultJson;
 import org.ladderkin.io.InputProblem;
@@ -156,6 +157,30 @@ final class FitYieldsCommand implements Callable<Integer> {
             o.put("stdError", p.stdError());
         }
         return root;
+    }
+
+    /**
+     * The yield's companions in a fit result: the photon energy it belongs to (read back by this command), the
+     * early/late estimate beside the full fit's, and the upper-bound flag with its reason (nothing without a yield).
+     */
+    static void addTo(ObjectNode json, YieldSummary y) {
+        if (y == null) {
+            return;
+        }
+        y.photonEnergyJ().ifPresent(e -> json.put("photonEnergyEv", e / PhysicalConstants.ELECTRONVOLT_J));
+        ObjectNode m = json.putObject("multiplicationYield");
+        m.put("upperBound", y.upperBound());
+        if (y.upperBound()) {
+            m.put("reason", y.reason());
+        }
+        y.earlyLate().ifPresentOrElse(e -> {
+            ObjectNode o = m.putObject("earlyLate");
+            estimate(o.putObject("lowFluenceLimit"), e.limit(), e.limitStdError());
+            o.put("eta", e.eta());
+            o.put("earlyPs", e.earlyS() * 1e12);
+            o.put("latePs", e.lateS() * 1e12);
+            o.put("traces", e.x().length);
+        }, () -> m.put("earlyLateNote", y.earlyLateNote()));
     }
 
     private static void estimate(ObjectNode o, double value, double stdError) {

@@ -16,7 +16,7 @@ import java.util.SplittableRandom;
  * excitons per absorbed photon, taken from Panjer's recursion P(0) = e^{−n}, P(k) = (n/k)·Σ_{j=1,2} j·f(j)·P(k−j)
  * with f(1) = 1 − η, f(2) = η (not the engine's binomial sum). The bleach is Σ_n min(n, 2)/2·p_n(t).
  */
-final class CompoundPoissonSeries {
+public final class CompoundPoissonSeries {
 
     static final double TAU_RAD_S = 20e-9;
     static final double TAU_AUGER2_S = 40e-12;
@@ -41,7 +41,7 @@ final class CompoundPoissonSeries {
     }
 
     /** Band-edge bleach (fraction of the filled level) at each delay after one pulse on fresh dots. */
-    static double[] bleach(double meanPhotons, double eta, double[] delaysS) {
+    public static double[] bleach(double meanPhotons, double eta, double[] delaysS) {
         double[] p0 = excitons(meanPhotons, eta);
         int top = p0.length - 1;
         double[][] c = new double[top + 1][top + 1];
@@ -73,7 +73,7 @@ final class CompoundPoissonSeries {
      * ΔA traces −amplitude·bleach + noise at photon fluences {@code fluencesPerM2} with absorbed photons σ·j, each
      * trace labelled with its fluence.
      */
-    static Dataset series(double crossSectionM2, double eta, double[] fluencesPerM2, double[] delaysS, double amplitude,
+    public static Dataset series(double crossSectionM2, double eta, double[] fluencesPerM2, double[] delaysS, double amplitude,
                           double noise, long seed) {
         SplittableRandom rng = new SplittableRandom(seed);
         List<Trace> traces = new ArrayList<>();
