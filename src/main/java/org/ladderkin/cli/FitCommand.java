@@ -8,6 +8,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicInteger;
@@ -22,6 +23,7 @@ import org.ladderkin.fit.LadderFitSetup;
 import org.ladderkin.fit.LadderFitSetup.LadderParameter;
 import org.ladderkin.fit.ParameterEstimate;
 import org.ladderkin.fit.ParameterNaming;
+import org.ladderkin.fit.YieldSummary;
 import org.ladderkin.io.AtomicFiles;
 import org.ladderkin.io.FitResultJson;
 import org.ladderkin.io.IrfFileReader;
@@ -38,6 +40,7 @@ import org.ladderkin.plan.PlanFitBasis;
 import org.ladderkin.observe.MeasuredIrf;
 import org.ladderkin.report.FitReport;
 import org.ladderkin.units.Dimension;
+import org.ladderkin.units.Photon;
 import org.ladderkin.units.Quantity;
 import org.ladderkin.units.Units;
 import picocli.CommandLine.Command;
@@ -84,7 +87,7 @@ final class FitCommand implements Callable<Integer> {
             description = "how bare numbers in --fluences are read (default ${DEFAULT-VALUE})")
     String bare;
 
-    @Option(names = "--pump", paramLabel = "PHOTON", description = "pump wavelength or photon energy (needed for energy fluences)")
+    @Option(names = "--pump", paramLabel = "PHOTON", description = "pump wavelength or photon energy (energy fluences, yields)")
     String pump;
 
     @Option(names = "--traces-json", paramLabel = "FILE", description = "per-trace metadata file (schema ladderkin.traces/1) instead of --fluences")
@@ -202,6 +205,10 @@ final class FitCommand implements Callable<Integer> {
         FitResult r = outcome.result();
         PlanComparison comparison = planFile == null || !r.ok() ? null : PlanComparison.of(planFile, outcome);
         ObjectNode json = FitResultJson.of(data, outcome, comparison == null ? null : comparison.json());
+        YieldSummary yields = freed.contains(LadderParameter.MULTIPLICATION_YIELD) && r.ok()
+                ? YieldSummary.of(data, setup, outcome, pump == null ? OptionalDouble.empty() : OptionalDouble.of(Photon.parseEnergyJ(pump)))
+                : null;
+        FitYieldsCommand.addTo(json, yields);
         PrintWriter out = format.equals("json") ? quiet.data() : quiet.summary();
         if (outDir != null) {
             Files.createDirectories(outDir);
@@ -213,6 +220,7 @@ final class FitCommand implements Callable<Integer> {
             out.print(ResolvedJson.toText(json));
         } else {
             summary(out, outcome);
+            (yields == null ? List.<String>of() : yields.lines()).forEach(out::println);
             if (outDir != null) {
                 out.println("wrote " + outDir.resolve("fit-report.html") + " and fit-result.json");
             }

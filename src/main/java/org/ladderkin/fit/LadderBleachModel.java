@@ -50,6 +50,12 @@ public final class LadderBleachModel implements TraceModel {
     public static final String TIME_ZERO = "timeZeroS";
     /** FWHM of the Gaussian instrument response (s). */
     public static final String IRF_FWHM = "irfFwhmS";
+    /**
+     * Carrier-multiplication probability η per absorbed photon (pure number in [0, 1]); with it, s·x_i is the mean
+     * number of absorbed photons and each pulse adds excitons by the compound-Poisson law of
+     * {@link org.ladderkin.excite.Occupancy#compoundPoisson}. Absent: Poisson excitation with mean s·x_i.
+     */
+    public static final String MULTIPLICATION_YIELD = "multiplicationYield";
     /** Biexciton Auger lifetime τ₂ (s), read by {@link #forModel}. */
     public static final String TAU_AUGER2 = kineticKey(AugerProcess.BIEXCITON_LIFETIME);
 
@@ -77,6 +83,7 @@ public final class LadderBleachModel implements TraceModel {
     private final double irfGridStepS;
     private double[] cachedKinetic;
     private double cachedTopN;
+    private boolean cachedForYield;
     private LadderKinetics cached;
     private double[] bleachObservable;
 
@@ -214,16 +221,16 @@ public final class LadderBleachModel implements TraceModel {
     }
 
     /** Populations just before and just after a pulse of on-axis ⟨N⟩ {@code nPeak}, averaged over the geometry. */
-    private Populations[] averagedPulse(LadderKinetics k, double nPeak) {
+    private Populations[] averagedPulse(LadderKinetics k, double nPeak, double eta) {
         if (spots.size() == 1 && spots.factor(0) == 1) {
-            return pulse(k, nPeak);
+            return pulse(k, nPeak, eta);
         }
         int size = k.space().size();
         double[] before = new double[size];
         double[] after = new double[size];
         double total = 0;
         for (int q = 0; q < spots.size(); q++) {
-            Populations[] ba = pulse(k, nPeak * spots.factor(q));
+            Populations[] ba = pulse(k, nPeak * spots.factor(q), eta);
             double w = spots.weight(q);
             total += w;
             double[] pb = ba[0].probabilities();
@@ -240,8 +247,8 @@ public final class LadderBleachModel implements TraceModel {
         return new Populations[] {new Populations(k.space(), before), new Populations(k.space(), after)};
     }
 
-    private Populations[] pulse(LadderKinetics k, double n) {
-        PulseExcitation pulse = new PulseExcitation.Poisson(n);
+    private Populations[] pulse(LadderKinetics k, double n, double eta) {
+        PulseExcitation pulse = Double.isNaN(eta) ? new PulseExcitation.Poisson(n) : new PulseExcitation.Multiplication(n, eta);
         if (Double.isNaN(periodS)) {
             Populations ground = Populations.ground(k.space());
             return new Populations[] {ground, k.applyPulse(ground, pulse)};
@@ -253,7 +260,7 @@ public final class LadderBleachModel implements TraceModel {
     @Override
     public synchronized double[] predict(int trace, double[] delaysS, ParameterValues p) {
         LadderKinetics k = kinetics(p);
-        Populations[] ba = averagedPulse(k, peakOccupancy(trace, p));
+        Populations[] ba = averagedPulse(k, peakOccupancy(trace, p), optional(p, MULTIPLICATION_YIELD, Double.NaN));
         Populations before = ba[0];
         Populations after = ba[1];
         double t0 = optional(p, TIME_ZERO, 0);
@@ -282,7 +289,7 @@ public final class LadderBleachModel implements TraceModel {
             return 0;
         }
         LadderKinetics k = kinetics(p);
-        return averagedPulse(k, peakOccupancy(trace, p))[0].chargedFraction();
+        return averagedPulse(k, peakOccupancy(trace, p), optional(p, MULTIPLICATION_YIELD, Double.NaN))[0].chargedFraction();
     }
 
     private LadderKinetics kinetics(ParameterValues p) {
@@ -296,11 +303,15 @@ public final class LadderBleachModel implements TraceModel {
             topN = Math.max(topN, x * p.get(scaleKey));
         }
         // the ladder's Nmax depends on the strongest pulse: build with headroom so small steps in s reuse it
-        if (cached == null || !Arrays.equals(kin, cachedKinetic) || topN > cachedTopN) {
+        boolean yield = p.indexOf(MULTIPLICATION_YIELD) >= 0;
+        if (cached == null || !Arrays.equals(kin, cachedKinetic) || topN > cachedTopN || yield && !cachedForYield) {
             double headroom = topN * 1.5;
-            cached = LadderKinetics.forPulses(ladder.apply(p), new PulseExcitation.Poisson(headroom));
+            // with multiplication the ladder is sized for η = 1, the widest law, so trying another η never rebuilds it
+            cached = LadderKinetics.forPulses(ladder.apply(p), yield
+                    ? new PulseExcitation.Multiplication(headroom, 1) : new PulseExcitation.Poisson(headroom));
             cachedKinetic = kin;
             cachedTopN = headroom;
+            cachedForYield = yield;
             bleachObservable = cached.bleachObservable();
         }
         return cached;

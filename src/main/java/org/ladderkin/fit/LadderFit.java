@@ -20,6 +20,9 @@ public final class LadderFit {
     /** ⟨N⟩ of the strongest trace that the automatic scale starts aim at. */
     private static final double[] AUTO_TOP_N = {2, 0.5, 8};
 
+    /** Start of a freed multiplication yield η. */
+    static final double YIELD_START = 0.3;
+
     private LadderFit() {
     }
 
@@ -159,6 +162,9 @@ public final class LadderFit {
         List<ParameterSpec> specs = specs(setup, scaleKey, scaleStart);
         LadderBleachModel model = LadderBleachModel.forModel(setup.base(), scaleKey, x, setup.periodS(), setup.measuredIrf(),
                 setup.geometry());
+        if (setup.sharedAmplitude() && setup.free().contains(LadderParameter.MULTIPLICATION_YIELD)) {
+            specs = withAmplitudeFromData(data, model, specs);
+        }
         FitProblem problem = new FitProblem(data, counted(model, progress, FitOptions.defaults().maxEvaluations()), specs,
                 setup.sharedAmplitude() ? LinearTerms.NONE : LinearTerms.AMPLITUDE_AND_BASELINE);
         FitOptions options = FitOptions.defaults().withProgress(progress);
@@ -273,6 +279,10 @@ public final class LadderFit {
                 specs.add(spec(setup, which, ParameterSpec.positive(p.fitKey(), "S", start)));
             }
         }
+        if (setup.free().contains(LadderParameter.MULTIPLICATION_YIELD)) {
+            // bounded to [0, 1] as the compound-Poisson law is; started well inside so the logistic scale is not flat
+            specs.add(ParameterSpec.shared("multiplicationYield", "", YIELD_START, 0, 1));
+        }
         if (setup.timeZeroStartS() != 0 || setup.free().contains(LadderParameter.TIME_ZERO)) {
             specs.add(spec(setup, LadderParameter.TIME_ZERO, ParameterSpec.unbounded("timeZero", "S", setup.timeZeroStartS(), 1e-12)));
         }
@@ -280,6 +290,39 @@ public final class LadderFit {
             specs.add(spec(setup, LadderParameter.IRF, ParameterSpec.positive("irfFwhm", "S", setup.irfFwhmS())));
         }
         return specs;
+    }
+
+    /**
+     * The shared amplitude started at its least-squares value for the other starts: a start a decade off lets η run
+     * into its upper bound, where the logistic scale goes flat and the optimiser stays.
+     */
+    static List<ParameterSpec> withAmplitudeFromData(Dataset data, TraceModel model, List<ParameterSpec> specs) {
+        List<String> keys = new ArrayList<>();
+        double[] values = new double[specs.size()];
+        for (int s = 0; s < specs.size(); s++) {
+            keys.add(specs.get(s).key());
+            values[s] = specs.get(s).key().equals(LadderBleachModel.AMPLITUDE) ? 1 : specs.get(s).start();
+        }
+        ParameterValues at = ParameterValues.shared(keys, values);
+        double fy = 0;
+        double ff = 0;
+        for (int i = 0; i < data.size(); i++) {
+            Trace t = data.traces().get(i);
+            double[] f = model.predict(i, t.delaysS(), at);
+            for (int m = 0; m < f.length; m++) {
+                fy += f[m] * t.signal()[m];
+                ff += f[m] * f[m];
+            }
+        }
+        double a = fy / ff;
+        if (!(a > 0) || !Double.isFinite(a)) {
+            return specs;
+        }
+        List<ParameterSpec> out = new ArrayList<>();
+        for (ParameterSpec spec : specs) {
+            out.add(spec.key().equals(LadderBleachModel.AMPLITUDE) && !spec.fixed() ? spec.startingAt(a) : spec);
+        }
+        return out;
     }
 
     private static ParameterSpec spec(LadderFitSetup setup, LadderParameter which, ParameterSpec free) {

@@ -137,6 +137,11 @@ public record LadderFitSetup(LadderModel base, double periodS, Set<LadderParamet
         public static final LadderParameter TIME_ZERO = new LadderParameter("time-zero", null);
         /** Gaussian IRF FWHM (never with a measured IRF). */
         public static final LadderParameter IRF = new LadderParameter("irf", null);
+        /**
+         * Carrier-multiplication probability η per absorbed photon, shared across the series (one photon energy); the
+         * excitation scale then gives absorbed photons and each pulse follows the compound-Poisson law.
+         */
+        public static final LadderParameter MULTIPLICATION_YIELD = new LadderParameter("multiplication-yield", null);
         /** Biexciton Auger lifetime; higher Auger rates follow the model's scaling law. */
         public static final LadderParameter TAU_AUGER2 = of(AugerProcess.BIEXCITON_LIFETIME);
         /** Single-exciton radiative lifetime. */
@@ -161,6 +166,7 @@ public record LadderFitSetup(LadderModel base, double periodS, Set<LadderParamet
             List<LadderParameter> all = new ArrayList<>();
             all.add(SCALE);
             ProcessRegistry.fittable().forEach(p -> all.add(of(p)));
+            all.add(MULTIPLICATION_YIELD);
             all.add(TIME_ZERO);
             all.add(IRF);
             return List.copyOf(all);
@@ -185,6 +191,7 @@ public record LadderFitSetup(LadderModel base, double periodS, Set<LadderParamet
             return switch (key) {
                 case "scale" -> "scale (σ, ⟨N⟩ per J or factor)";
                 case "time-zero" -> "time zero";
+                case "multiplication-yield" -> "multiplication yield η (second exciton per absorbed photon)";
                 default -> "IRF FWHM";
             };
         }

@@ -42,6 +42,7 @@ public final class ParameterNaming {
                 "occupancyPerJ", new Label("⟨N⟩ per pulse energy", "per nJ"),
                 "occupancyScale", new Label("factor on the given ⟨N⟩", ""),
                 "timeZeroS", new Label("time zero", "ps"),
+                "multiplicationYield", new Label("η", ""),
                 "irfFwhmS", new Label("IRF FWHM", "ps"),
                 "amplitudeOd", new Label("shared amplitude", ""),
                 "amplitude", new Label("amplitude", ""),

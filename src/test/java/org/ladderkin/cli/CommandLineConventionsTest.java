@@ -32,7 +32,7 @@ class CommandLineConventionsTest {
         List<String> lines = r.out().lines().toList();
         List<String> rows = lines.subList(lines.indexOf("Commands:") + 1, lines.indexOf("Commands:") + 1 + root().getSubcommands().size());
         for (String row : rows) {
-            assertThat(row).as("one line per command, ending its sentence").matches("  [a-z]+ +[A-Z].*\\.").hasSizeLessThanOrEqualTo(80);
+            assertThat(row).as("one line per command, ending its sentence").matches("  [a-z]+(-[a-z]+)* +[A-Z].*\\.").hasSizeLessThanOrEqualTo(80);
         }
         assertThat(lines.get(lines.indexOf("Commands:") + 1 + rows.size())).as("nothing wraps below the list").isEmpty();
     }

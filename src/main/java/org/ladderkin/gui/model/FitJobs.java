@@ -39,7 +39,7 @@ final class FitJobs {
 
     /** Offered as checkboxes; the IRF width is left out because it needs a start value the view does not ask for. */
     static final List<FitOptions.FreeParameter> OFFERED = LadderParameter.values().stream()
-            .filter(p -> !p.equals(LadderParameter.IRF))
+            .filter(p -> !p.equals(LadderParameter.IRF) && !p.equals(LadderParameter.MULTIPLICATION_YIELD))
             .map(p -> new FitOptions.FreeParameter(p.key(), p.label())).toList();
 
     private record CachedBasis(PlanInputs inputs, PlanFitBasis basis) {
@@ -87,6 +87,25 @@ final class FitJobs {
     Optional<Double> planRepetitionRateHz() {
         CachedBasis c = basisCache;
         return c == null ? Optional.empty() : Optional.of(c.basis().repetitionRateHz());
+    }
+
+    /** The multiplication yield's check box, shown only when {@link #multiplicationYieldOffered} says so. */
+    static final FitOptions.FreeParameter YIELD = new FitOptions.FreeParameter(LadderParameter.MULTIPLICATION_YIELD.key(),
+            LadderParameter.MULTIPLICATION_YIELD.label());
+
+    /**
+     * Whether the plan's chosen pump is above twice the first-exciton energy, the least a second exciton costs (known
+     * once a job has computed the plan's ladder); below it a freed yield could only fit noise.
+     */
+    boolean multiplicationYieldOffered() {
+        CachedBasis c = basisCache;
+        return c != null && pumpAboveTwiceGap(c.inputs(), c.basis());
+    }
+
+    /** Whether {@code basis}'s pump photon is above twice the first-exciton energy of {@code inputs}'s sample. */
+    static boolean pumpAboveTwiceGap(PlanInputs inputs, PlanFitBasis basis) {
+        double gapJ = inputs.sample().firstExcitonEnergyJ();
+        return gapJ > 0 && org.ladderkin.units.Photon.energyJ(basis.pumpWavelengthM()) > 2 * gapJ;
     }
 
     /** What the plan's TA instrument response is, for the option's label ("Gaussian, FWHM 200 fs"), if it has one. */

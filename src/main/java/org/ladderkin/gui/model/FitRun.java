@@ -80,6 +80,11 @@ public final class FitRun implements AutoCloseable {
         return FitJobs.OFFERED;
     }
 
+    /** The multiplication yield, offered beside {@link #offered} when the pump is above twice the gap. */
+    public static FitOptions.FreeParameter multiplicationYield() {
+        return FitJobs.YIELD;
+    }
+
     public FitOptions options() {
         return options;
     }

@@ -185,6 +185,11 @@ public final class FitSession implements AutoCloseable {
         return jobs.planRepetitionRateHz();
     }
 
+    /** Whether the fit tab offers the multiplication yield: the plan's pump is above twice the gap. */
+    public boolean multiplicationYieldOffered() {
+        return jobs.multiplicationYieldOffered();
+    }
+
     /** The measured traces (points) over the fitted curves after a fit, else over the plan's model. */
     public ChartSpec overlayChart() {
         Shown s = shown();

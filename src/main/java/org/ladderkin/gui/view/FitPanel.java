@@ -176,7 +176,9 @@ public final class FitPanel extends JPanel {
         excitations.putClientProperty("terminateEditOnFocusLost", Boolean.TRUE);
 
         JPanel freePanel = new JPanel(new MigLayout("insets 0, wrap 2", "[][]"));
-        for (FitOptions.FreeParameter p : FitRun.offered()) {
+        List<FitOptions.FreeParameter> offered = new ArrayList<>(FitRun.offered());
+        offered.add(FitRun.multiplicationYield());
+        for (FitOptions.FreeParameter p : offered) {
             JCheckBox box = new JCheckBox(p.label());
             box.setName("fit:free:" + p.key());
             box.addActionListener(e -> session.setFree(p.key(), box.isSelected()));
@@ -340,6 +342,8 @@ public final class FitPanel extends JPanel {
         for (var e : freeBoxes.entrySet()) {
             e.getValue().setSelected(run.free().contains(e.getKey()));
         }
+        String yieldKey = FitRun.multiplicationYield().key();
+        freeBoxes.get(yieldKey).setVisible(session.multiplicationYieldOffered() || run.free().contains(yieldKey));
         FitOptions options = run.options();
         pulseTrain.setSelected(options.pulseTrain());
         response.setSelected(options.instrumentResponse());
