@@ -25,6 +25,7 @@ import org.ladderkin.observe.Verdict;
 import org.ladderkin.sample.Advisory;
 import org.ladderkin.sample.Sample;
 import org.ladderkin.units.Dimension;
+import org.ladderkin.units.PhysicalConstants;
 import org.ladderkin.units.Quantity;
 
 /**
@@ -57,8 +58,7 @@ public final class Planner {
         Progress NONE = (d, t, w) -> { };
     }
 
-    private Planner() {
-    }
+    private Planner() { }
 
     /** Plans the campaign the inputs describe. */
     public static CampaignPlan plan(PlanInputs in, Progress progress) {
@@ -66,8 +66,8 @@ public final class Planner {
     }
 
     /**
-     * Plans the campaign; without the design search the series is the naive log-spaced one, which is what an
-     * interactive view wants (the search dominates the cost).
+     * Plans the campaign; without the design search the series is the naive log-spaced one (for interactive views:
+     * the search dominates the cost) and the rate is chosen as the design would choose it.
      */
     public static CampaignPlan plan(PlanInputs in, Progress progress, boolean searchDesign) {
         int totalSteps = 6;
@@ -100,24 +100,30 @@ public final class Planner {
         List<RateOption> rates;
         RateOption chosenRate;
         String rateChoice;
-        if (searchDesign && ta != null && !goalParams.isEmpty() && !Double.isNaN(bandEdgeOd) && nReach > 0.2) {
-            // The rate sets the period the design is scored at, and the design sets the ⟨N⟩ the rate must survive:
-            // a first choice at a provisional ⟨N⟩, then the rates judged again at the designed series' top.
-            double provisionalN = Math.min(PROVISIONAL_N, nReach);
+        boolean designable = ta != null && !goalParams.isEmpty() && !Double.isNaN(bandEdgeOd) && nReach > 0.2;
+        if (designable) {
+            // the rate sets the design's period and the design the ⟨N⟩ the rate must survive: judged at the highest
+            // ⟨N⟩ the design can reach, the rate survives any series it picks, so one search suffices
             progress.step(1, totalSteps, "judging repetition rates");
-            RateOption first = RateJudge.fastestPassing(RateJudge.rates(in, km, atMax, provisionalN));
-            progress.step(2, totalSteps, "searching the fluence and delay design");
-            design = DesignSearch.search(designContext(in, model, g, first, bandEdgeOd, ta, firstDelay, lastDelay, nReach,
-                    goalParams, atMax, cal));
-            nSeries = design.best().nValues();
-            rates = RateJudge.rates(in, km, atMax, top(nSeries));
-            chosenRate = RateJudge.fastestPassing(rates);
-            if (chosenRate.division() == first.division()) {
-                rateChoice = String.format(Locale.ROOT, "Rates first judged at ⟨N⟩ = %.3g to set the period for the design "
-                        + "search, then again at the designed series' highest ⟨N⟩ = %.3g; the choice stands.", provisionalN,
-                        top(nSeries));
+            RateOption designRate = RateJudge.fastestPassing(RateJudge.rates(in, km, atMax, nReach));
+            if (searchDesign) {
+                progress.step(2, totalSteps, "searching the fluence and delay design");
+                design = DesignSearch.search(designContext(in, model, g, designRate, bandEdgeOd, ta, firstDelay, lastDelay,
+                        nReach, goalParams, atMax, cal));
+                nSeries = design.best().nValues();
             } else {
-                // one more search at the new rate; the design is not searched a third time
+                nSeries = previewSeries(nReach);
+            }
+            rates = RateJudge.rates(in, km, atMax, top(nSeries));
+            chosenRate = notFasterThan(RateJudge.fastestPassing(rates), designRate, rates);
+            String rule = String.format(Locale.ROOT, "Rates first judged at the highest ⟨N⟩ the design can reach, %.3g, to "
+                    + "set the period the design is scored at (%s); then again at the %s highest ⟨N⟩ = %.3g, where the "
+                    + "fastest that passes, never faster than the design's, is used", nReach, RateJudge.hz(designRate),
+                    searchDesign ? "designed series'" : "series'", top(nSeries));
+            if (chosenRate.repetitionRateHz() >= designRate.repetitionRateHz() || !searchDesign) {
+                rateChoice = rule + ": " + RateJudge.hz(chosenRate) + ".";
+            } else {
+                // slower at the designed top than at nReach (every rate failed there, or a limit is not monotonic in ⟨N⟩)
                 RateOption second = chosenRate;
                 double firstTop = top(nSeries);
                 progress.step(2, totalSteps, "searching the design again at " + RateJudge.hz(second));
@@ -125,20 +131,14 @@ public final class Planner {
                         nReach, goalParams, atMax, cal));
                 nSeries = design.best().nValues();
                 rates = RateJudge.rates(in, km, atMax, top(nSeries));
-                RateOption third = RateJudge.fastestPassing(rates);
-                RateOption designedAt = rates.stream().filter(r -> r.division() == second.division()).findFirst().orElseThrow();
-                // never faster than the rate the design was scored at; slower when safety asks for it
-                chosenRate = third.repetitionRateHz() > designedAt.repetitionRateHz() ? designedAt : third;
-                rateChoice = String.format(Locale.ROOT, "Rates first judged at ⟨N⟩ = %.3g (choice %s); the designed series "
-                                + "went to ⟨N⟩ = %.3g, where the choice became %s, so the design was searched again at that "
-                                + "rate; its series goes to ⟨N⟩ = %.3g, where the rates are judged%s.", provisionalN,
-                        RateJudge.hz(first), firstTop, RateJudge.hz(second), top(nSeries), chosenRate.division() == second.division() ? ""
-                                : "; " + RateJudge.hz(chosenRate) + " is the fastest that passes there (the design's expected errors "
-                                + "were scored at " + RateJudge.hz(second) + ")");
+                chosenRate = notFasterThan(RateJudge.fastestPassing(rates), second, rates);
+                rateChoice = String.format(Locale.ROOT, "%s: %s at ⟨N⟩ = %.3g, slower than the design's, so the design "
+                        + "was searched again at that rate; its series goes to ⟨N⟩ = %.3g, where the rates are judged "
+                        + "again: %s.", rule, RateJudge.hz(second), firstTop, top(nSeries), RateJudge.hz(chosenRate));
             }
         } else {
             // without a design the series does not depend on the rate: judge the rates at its own top
-            nSeries = TimeWindows.logSpaced(0.05, Math.max(0.1, Math.min(3, nReach)), 8);
+            nSeries = previewSeries(nReach);
             progress.step(1, totalSteps, "judging repetition rates");
             rates = RateJudge.rates(in, km, atMax, top(nSeries));
             chosenRate = RateJudge.fastestPassing(rates);
@@ -213,14 +213,12 @@ public final class Planner {
                             p.energyOverGap()), Verdict.WARN, inflation, 0.02, "relative", String.format(Locale.ROOT,
                             "at the full %s rate residual excitation and trions inflate A/B by %.0f %% (charged fraction "
                                     + "%.2g): use the pulse picker (%s) and refresh the sample",
-                            org.ladderkin.units.Quantity.formatBest(laser.repetitionRateHz(), org.ladderkin.units.Dimension.FREQUENCY, 3),
-                            100 * inflation, p.chargedFullRate(),
-                            org.ladderkin.units.Quantity.formatBest(chosenRate.repetitionRateHz(), org.ladderkin.units.Dimension.FREQUENCY, 3))));
+                            Quantity.formatBest(laser.repetitionRateHz(), Dimension.FREQUENCY, 3), 100 * inflation,
+                            p.chargedFullRate(), Quantity.formatBest(chosenRate.repetitionRateHz(), Dimension.FREQUENCY, 3))));
                 }
                 if (!p.offered()) {
                     risks.add(new Risk("multiplication photon energy available", Verdict.FAIL, p.photonEnergyJ(), 0, "J",
-                            String.format(Locale.ROOT, "the laser offers no pump at %.3f eV", p.photonEnergyJ()
-                                    / org.ladderkin.units.PhysicalConstants.ELECTRONVOLT_J)));
+                            String.format(Locale.ROOT, "the laser offers no pump at %.3f eV", p.photonEnergyJ() / PhysicalConstants.ELECTRONVOLT_J)));
                 }
             }
         }
@@ -237,13 +235,16 @@ public final class Planner {
                 risks, advisories, cautions);
     }
 
-    /**
-     * ⟨N⟩ the rate choice first assumes when a design search will pick the series: the middle of the design's
-     * candidate tops (1 to 8); the rates are judged again at the series' actual top afterwards.
-     */
-    static final double PROVISIONAL_N = 5;
+    private static double[] previewSeries(double nReach) {
+        return TimeWindows.logSpaced(0.05, Math.max(0.1, Math.min(3, nReach)), 8);
+    }
 
-    /** Longest pulse-train build-up kept for the chart (each pulse is one point). */
+    /** {@code passing} unless it is faster than {@code cap}, else the option of {@code rates} at {@code cap}'s division. */
+    private static RateOption notFasterThan(RateOption passing, RateOption cap, List<RateOption> rates) {
+        return passing.repetitionRateHz() <= cap.repetitionRateHz() ? passing : rates.stream().filter(r -> r.division() == cap.division()).findFirst().orElseThrow();
+    }
+
+    /** Longest pulse-train build-up kept for the chart (one point a pulse). */
     public static final int MAX_BUILD_UP_PULSES = 20_000;
 
     /** The risk with the fluence and rate it was evaluated at added to its explanation. */

@@ -136,10 +136,10 @@ public final class PlanReport {
                         String.join("; ", w.reasons()))).toList());
         page.heading(2, "Repetition rates compared (at " + top + ")");
         page.paragraph(plan.rateChoice() + " The rule: every rate is judged at the series' highest ⟨N⟩. With a design "
-                + "search the rates are first judged at a provisional ⟨N⟩ = min(5, reachable) to set the period the design is "
-                + "scored at, then again at the designed series' top; if that changes the choice the design is searched once "
-                + "more at the new rate, and the rate used is the fastest that passes at its top, never faster than the rate "
-                + "that design was scored at.");
+                + "search the rates are first judged at the highest ⟨N⟩ the design can reach, which sets the period the "
+                + "design is scored at, then again at the designed series' top; the rate used is the fastest that passes "
+                + "there, never faster than the rate the design was scored at, and only if that is slower is the design "
+                + "searched once more at it.");
         page.table(List.of("division", "rate", "residual at next pulse", "charged", "steady rise (K)", "verdict"),
                 plan.rates().stream().map(r -> List.of("÷" + r.division(), q(r.repetitionRateHz(), Dimension.FREQUENCY),
                         num(r.residual()), num(r.charged()), num(r.steadyRiseK()), r.verdict().name())).toList());
