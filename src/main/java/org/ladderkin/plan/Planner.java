@@ -1,3 +1,4 @@
+// Over 400 lines: the one pass from inputs to plan (choices that depend on each other); mode rows live in their own classes
 package org.ladderkin.plan;
 
 import java.util.ArrayList;
@@ -72,6 +73,12 @@ public final class Planner {
     public static CampaignPlan plan(PlanInputs in, Progress progress, boolean searchDesign) {
         int totalSteps = 6;
         Sample sample = in.sample();
+        if (Double.isNaN(sample.firstExcitonEnergyJ())) {
+            // the bleach, the wavelength ranking and the carrier-multiplication threshold all need E₁S
+            throw new IllegalArgumentException("sample: the first-exciton peak of " + sample.spec().name() + " is unknown ("
+                    + sample.material().key() + " has no sizing curve in the library): give 'firstExcitonPeak' beside "
+                    + "'diameter' (the peak sets E₁S, the size the volume)");
+        }
         LaserSetup laser = in.laser();
         int g = (int) Math.round(sample.material().electronDegeneracy().value());
         ModelAssumptions model = ModelAssumptions.forSample(sample, in.modelOverrides());

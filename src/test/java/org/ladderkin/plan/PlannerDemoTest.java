@@ -141,4 +141,15 @@ class PlannerDemoTest {
         assertThat(plan.chosenRate().repetitionRateHz()).isLessThan(plan.inputs().laser().repetitionRateHz());
         assertThat(plan.risks()).anyMatch(r -> r.name().startsWith("false multiplication"));
     }
+
+    @org.junit.jupiter.api.Test
+    void aSampleWithoutAKnownFirstExcitonIsRefusedNotPlannedAsNaN() throws java.io.IOException {
+        String text = java.nio.file.Files.readString(HOME.resolve("experiments-plan").resolve("inp-zns-tcspc-5mhz.plan.json"))
+                .replaceAll("\\s*\"firstExcitonPeak\": \"[^\"]*\",", "");
+        PlanInputs in = PlanCodec.read(org.ladderkin.io.json.JsonTree.parse(text, HOME.resolve("experiments-plan").resolve("inp-without-peak.plan.json").toString()));
+        org.assertj.core.api.Assertions.assertThatThrownBy(() -> Planner.plan(in, Planner.Progress.NONE, false))
+                .isInstanceOf(IllegalArgumentException.class)
+                .hasMessageContaining("first-exciton peak").hasMessageContaining("InP has no sizing curve")
+                .hasMessageContaining("give 'firstExcitonPeak' beside 'diameter'");
+    }
 }
