@@ -18,7 +18,6 @@ import org.ladderkin.kinetics.train.PulseExcitation;
 import org.ladderkin.kinetics.train.SteadyState;
 import org.ladderkin.observe.EarlyLate;
 import org.ladderkin.observe.Heating;
-import org.ladderkin.observe.Photoluminescence;
 import org.ladderkin.observe.PulseTrainRisks;
 import org.ladderkin.observe.Risk;
 import org.ladderkin.observe.TimeWindows;
@@ -99,6 +98,9 @@ public final class Planner {
         double bandEdgeOd = Double.isNaN(sample.firstExcitonEnergyJ()) ? Double.NaN
                 : sample.absorbanceAt(sample.firstExcitonWavelengthM());
         var goalParams = DesignSearch.parametersFor(in.goals());
+        Instrument tcspc = in.instruments().stream().filter(i -> i.kind() == Instrument.Kind.TCSPC).findFirst().orElse(null);
+        double countingN = PhotonCounting.lifetimeN(atMax.nAvgProbeWeighted() * laser.minPulseEnergyJ()
+                / laser.maxPulseEnergyJ(), nReach);
         double firstDelay = ta == null ? 1e-12 : Math.max(ta.minDelayS(), 5 * model.coolingS());
         double lastDelay = ta == null ? 3e-9 : ta.maxDelayS();
         Calibration cal = laser.calibration().orDefaults();
@@ -143,6 +145,18 @@ public final class Planner {
                         + "was searched again at that rate; its series goes to ⟨N⟩ = %.3g, where the rates are judged "
                         + "again: %s.", rule, RateJudge.hz(second), firstTop, top(nSeries), RateJudge.hz(chosenRate));
             }
+        } else if (ta == null && tcspc != null) {
+            // photon counting alone: one decay at a low ⟨N⟩, and the rates judged where it is recorded
+            nSeries = new double[] {countingN};
+            progress.step(1, totalSteps, "judging repetition rates");
+            rates = RateJudge.rates(in, km, atMax, countingN);
+            // a decay needs its period: the fastest passing rate whose period holds 5 τ₁, if one does
+            double minPeriod = 5 * model.tauSingleExcitonS();
+            List<RateOption> long5 = rates.stream().filter(r -> 1 / r.repetitionRateHz() >= minPeriod).toList();
+            chosenRate = RateJudge.fastestPassing(long5.isEmpty() ? rates : long5);
+            rateChoice = String.format(Locale.ROOT, "Rates judged at the photon-counting decay's ⟨N⟩ = %.3g; the fastest "
+                    + "that passes with a period of at least 5 τ₁ (%s)%s.", countingN, Quantity.formatBest(minPeriod,
+                    Dimension.TIME, 3), long5.isEmpty() ? ": none is that slow, so the fastest that passes" : "");
         } else {
             // without a design the series does not depend on the rate: judge the rates at its own top
             nSeries = previewSeries(nReach);
@@ -174,7 +188,7 @@ public final class Planner {
         HeatBudget heat = chosenRate.heat();
         List<DelayPlan> delayPlans = new ArrayList<>();
         for (Instrument inst : in.instruments()) {
-            delayPlans.add(delayPlan(inst, model, design, nSeries.length, km, top(nSeries), period, top, in));
+            delayPlans.add(delayPlan(inst, model, design, nSeries.length, km, countingN, period, atChosenRate, in));
         }
         // the predicted traces are drawn on log axes: the printed TA grid's positive delays, so they start where it does
         double[] taDelays = delayPlans.stream().filter(d -> d.instrument().kind() == Instrument.Kind.TRANSIENT_ABSORPTION)
@@ -189,7 +203,13 @@ public final class Planner {
         List<Risk> risks = new ArrayList<>();
         risks.add(evaluatedAt(Heating.risk("steady-state heating", heat.steadyRiseK(), SAMPLE_TEMPERATURE_K,
                 in.limits().maxTemperatureRiseK(), heat.boilingPointK()), at));
-        risks.add(evaluatedAt(PulseTrainRisks.chargingRisk(chosenRate.charged(), in.limits().maxChargedFraction()), at));
+        Risk charging = evaluatedAt(PulseTrainRisks.chargingRisk(chosenRate.charged(), in.limits().maxChargedFraction()), at);
+        if (sample.spec().matrix().map(m -> m.kind() == org.ladderkin.sample.Matrix.Kind.FILM).orElse(false)) {
+            // a film cannot be stirred: it is refreshed by moving it under the beam
+            charging = new Risk(charging.name(), charging.verdict(), charging.value(), charging.limit(), charging.unit(),
+                    charging.why().replace("stir or flow the sample", "translate the film so each pulse meets a fresh spot"));
+        }
+        risks.add(charging);
         risks.add(evaluatedAt(PulseTrainRisks.residualRisk(chosenRate.residual(), in.limits().maxResidualExcitation()), at));
         for (DelayPlan d : delayPlans) {
             risks.addAll(d.risks());
@@ -199,9 +219,12 @@ public final class Planner {
                 : Verdict.PASS, nSeries[nSeries.length - 1], MODEL_VALIDITY_N, "⟨N⟩", String.format(Locale.ROOT,
                 "highest ⟨N⟩ %.3g; above %.0f the ladder, Poisson statistics and the Auger scaling laws are extrapolated",
                 nSeries[nSeries.length - 1], MODEL_VALIDITY_N)));
-        if (!in.goals().contains(Goal.MULTIPLICATION_YIELD) && chosen.energyOverGap() >= 2) {
+        if (chosen.energyOverGap() >= 2) {
             risks.add(new Risk("carrier-multiplication confound", Verdict.WARN, chosen.energyOverGap(), 2, "E₁S",
-                    "the chosen pump can create two excitons per photon; no lower-energy pump was acceptable"));
+                    in.goals().contains(Goal.MULTIPLICATION_YIELD) ? "the main series' pump can create two excitons per "
+                            + "photon: fit its Auger and σ analysis with the multiplication yield, or pump it at the "
+                            + "multiplication plan's reference" : "the chosen pump can create two excitons per photon; no "
+                            + "lower-energy pump was acceptable"));
         }
         long unreachable = fluences.stream().filter(f -> !f.reachable()).count();
         if (unreachable > 0) {
@@ -229,6 +252,21 @@ public final class Planner {
                 }
             }
         }
+        MultiplicationPlan multiplication = null;
+        if (in.goals().contains(Goal.MULTIPLICATION_YIELD) && ta != null) {
+            // the multiplication measurement shares the beam time with the other goals' series
+            double share = in.goals().size() > 1 ? 0.5 : 1;
+            multiplication = MultiplicationPlan.of(km, model, sample.firstExcitonEnergyJ(), laser.pumpWavelengthsM(),
+                    bandEdgeOd, ta.noiseFloor(), share * in.limits().beamTimeS() * DATA_SHARE_OF_BEAM_TIME,
+                    chosenRate.repetitionRateHz(), in.limits());
+            risks.addAll(multiplication.risks());
+        }
+        boolean film = sample.spec().matrix().map(m -> m.kind() == org.ladderkin.sample.Matrix.Kind.FILM).orElse(false);
+        GainPlan gain = !in.goals().contains(Goal.GAIN_THRESHOLD) ? null
+                : GainPlan.of(g, km, model, atChosenRate, laser, top(nSeries), heat, in.limits(), film);
+        if (gain != null) {
+            risks.addAll(gain.risks());
+        }
         List<String> advisories = atChosenRate.advisories().stream().map(Advisory::message).distinct().toList();
         String matrixKey = sample.spec().matrix().map(m -> m.key()).orElse("unknown matrix");
         double peakFluence = 0;
@@ -239,7 +277,7 @@ public final class Planner {
                 SAMPLE_TEMPERATURE_K, heat.boilingPointK(), peakFluence);
         progress.step(6, totalSteps, "done");
         return new CampaignPlan(in, model, wavelengths, rates, chosenRate, rateChoice, fluences, heat, design, delayPlans, cm, predictions,
-                risks, advisories, cautions);
+                risks, advisories, cautions, gain, multiplication);
     }
 
     private static double[] previewSeries(double nReach) {
@@ -345,7 +383,8 @@ public final class Planner {
     }
 
     private static DelayPlan delayPlan(Instrument inst, ModelAssumptions model, DesignSearch.Result design, int fluenceCount,
-                                       KineticModel km, double nTop, double period, Excitation top, PlanInputs in) {
+                                       KineticModel km, double countingN, double period, Excitation atChosenRate,
+                                       PlanInputs in) {
         TimeWindows.EarlyLate windows = TimeWindows.earlyLate(model.coolingS(), model.tauBiexcitonS(), model.tauSingleExcitonS());
         List<Risk> risks = new ArrayList<>();
         double budget = in.limits().beamTimeS() * DATA_SHARE_OF_BEAM_TIME;
@@ -370,31 +409,14 @@ public final class Planner {
                         "the delay stage does not reach 5 τ₂: the Auger decay will not be complete"));
             }
             return new DelayPlan(inst, grid, TimeWindows.stageTravelM(inst.maxDelayS()), windows, perPoint,
-                    perPoint * grid.length, risks);
+                    perPoint * grid.length, risks, null);
         }
-        // TCSPC: bins over the range; decay coverage, period coverage and pile-up
-        int bins = (int) Math.ceil(inst.maxDelayS() / inst.minDelayS());
-        double[] grid = new double[Math.min(bins, 100_000)];
-        for (int i = 0; i < grid.length; i++) {
-            grid[i] = (i + 0.5) * inst.minDelayS();
-        }
-        risks.add(TimeWindows.decayCovered("TCSPC range vs τ₁", inst.maxDelayS(), model.tauSingleExcitonS()));
-        risks.add(TimeWindows.decayCovered("pulse period vs τ₁", period, model.tauSingleExcitonS()));
-        PulseExcitation pulse = new PulseExcitation.Poisson(nTop);
-        LadderKinetics kin = LadderKinetics.forPulses(km, pulse);
-        SteadyState ss = kin.steadyState(pulse, period, false);
-        double emittedPerDot = Photoluminescence.emittedPerPulse(kin, ss.afterPulse(), period);
-        double detectedPerPulse = emittedPerDot * top.dotsInExcitedVolume() * TCSPC_COLLECTION_EFFICIENCY;
-        double fraction = detectedPerPulse;
-        double attenuation = fraction / inst.maxCountFraction();
-        risks.add(new Risk("TCSPC pile-up", attenuation > 1 ? Verdict.WARN : Verdict.PASS, fraction, inst.maxCountFraction(),
-                "photons per pulse", String.format(Locale.ROOT, "at the highest fluence about %.3g photons per pulse would be "
-                        + "detected (assuming %.0e collection × detection efficiency); keep below %.3g per pulse (common "
-                        + "practice, no source)%s", fraction, TCSPC_COLLECTION_EFFICIENCY, inst.maxCountFraction(),
-                        attenuation > 1 ? String.format(Locale.ROOT, ": attenuate the detected emission by %.2g× (ND %.1f)",
-                                attenuation, Math.log10(attenuation)) : "")));
-        double perPoint = budget / fluenceCount;
-        return new DelayPlan(inst, grid, 0, windows, perPoint, perPoint, risks);
+        // TCSPC: one decay at a low ⟨N⟩, planned from its count rate (with TA beside it, a fluence's share of the time)
+        boolean alone = in.instruments().stream().noneMatch(i -> i.kind() == Instrument.Kind.TRANSIENT_ABSORPTION);
+        PhotonCounting counting = PhotonCounting.plan(inst, model, km, atChosenRate, in.laser(), countingN, period,
+                alone ? budget : budget / fluenceCount);
+        return new DelayPlan(inst, new double[0], 0, windows, counting.acquisitionS(), counting.acquisitionS(),
+                counting.risks(), counting);
     }
 
     private static Risk thickness(WavelengthOption chosen) {
