@@ -11,6 +11,7 @@ import org.ladderkin.io.PlanOutputs;
 import org.ladderkin.plan.CampaignPlan;
 import org.ladderkin.plan.Planner;
 import org.ladderkin.report.Cautions;
+import org.ladderkin.report.ModeSections;
 import org.ladderkin.report.PlanReport;
 import org.ladderkin.plan.Goal;
 import org.ladderkin.plan.Instrument;
@@ -108,6 +109,18 @@ final class PlanCommand implements Callable<Integer> {
             out.println(String.format(java.util.Locale.ROOT, "  delays      %d points (%s), %s to %s, %s per point; scored by the design",
                     b.delaysS().length, b.grid(), fmt(b.delaysS()[0], Dimension.TIME), fmt(b.delaysS()[b.delaysS().length - 1],
                             Dimension.TIME), fmt(b.timePerPointS(), Dimension.TIME)));
+        }
+        for (var d : plan.delayPlans()) {
+            if (d.counting() != null) {
+                out.println("  tcspc       " + ModeSections.countingLine(d));
+                d.counting().notPlanned().forEach(n -> out.println("              not planned: " + n));
+            }
+        }
+        if (plan.multiplicationPlan() != null) {
+            ModeSections.multiplicationLines(plan).forEach(l -> out.println("  multiply    " + l));
+        }
+        if (plan.gain() != null) {
+            ModeSections.gainLines(plan).forEach(l -> out.println("  gain        " + l));
         }
         out.println("Risks");
         for (var risk : plan.risks()) {

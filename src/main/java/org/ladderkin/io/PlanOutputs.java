@@ -200,10 +200,79 @@ public final class PlanOutputs {
                 }
                 o.put("stageTravelMm", dp.stageTravelM() * 1e3);
             }
-            o.put("earlyDelayPs", dp.windows().earlyS() * 1e12);
-            o.put("lateDelayPs", dp.windows().lateS() * 1e12);
+            if (dp.counting() == null) {
+                // early/late windows are a transient-absorption analysis
+                o.put("earlyDelayPs", dp.windows().earlyS() * 1e12);
+                o.put("lateDelayPs", dp.windows().lateS() * 1e12);
+            } else {
+                var c = dp.counting();
+                ObjectNode pc = o.putObject("photonCounting");
+                pc.put("nAvgProbeWeighted", c.nAvg());
+                pc.put("pulseEnergyNj", c.pulseEnergyJ() * 1e9);
+                pc.put("reachable", c.reachable());
+                pc.put("emittedPerPulse", c.emittedPerPulse());
+                pc.put("detectionAttenuation", c.detectionAttenuation());
+                pc.put("detectedPerPulse", c.detectedPerPulse());
+                pc.put("countRatePerS", c.countRateHz());
+                pc.put("decayWindowNs", c.windowS() * 1e9);
+                pc.put("targetTau1Rel", c.targetRel());
+                pc.put("precisionFactor", c.precisionFactor());
+                pc.put("counts", c.counts());
+                pc.put("acquisitionS", c.acquisitionS());
+                pc.put("availableS", c.availableS());
+            }
             o.put("timePerPointS", dp.timePerPointS());
             o.put("timePerFluenceS", dp.timePerFluenceS());
+        }
+        if (plan.multiplicationPlan() != null) {
+            var mp0 = plan.multiplicationPlan();
+            ObjectNode mp = root.putObject("multiplicationPlan");
+            ArrayNode ns = mp.putArray("nAvgSeries");
+            for (double x : mp0.nSeries()) {
+                ns.add(x);
+            }
+            mp.put("timePerPointS", mp0.timePerPointS());
+            ArrayNode pumps = mp.putArray("pumps");
+            List<org.ladderkin.plan.MultiplicationPlan.Pump> all = new java.util.ArrayList<>();
+            if (mp0.reference() != null) {
+                all.add(mp0.reference());
+            }
+            all.addAll(mp0.pumps());
+            for (var p : all) {
+                ObjectNode o = pumps.addObject();
+                o.put("role", p == mp0.reference() ? "reference" : "pump");
+                o.put("wavelengthNm", p.wavelengthM() * 1e9);
+                o.put("energyOverFirstExciton", p.overGap());
+                o.put("etaAssumed", p.eta());
+                o.put("etaLow", p.etaLow());
+                o.put("etaHigh", p.etaHigh());
+                o.put("interceptRatio", p.interceptRatio());
+                o.put("expectedError", p.totalError());
+                o.put("statisticalError", p.statisticalError());
+                o.put("bias", p.bias());
+            }
+            if (mp0.twoRate() != null) {
+                ObjectNode t = mp.putObject("photochargingCheck");
+                t.put("slowRateHz", mp0.twoRate().slowRateHz());
+                t.put("ratioChosenRate", mp0.twoRate().ratioChosen());
+                t.put("ratioSlowRate", mp0.twoRate().ratioSlow());
+                t.put("chargedChosenRate", mp0.twoRate().chargedChosen());
+            }
+        }
+        if (plan.gain() != null) {
+            var g = plan.gain();
+            ObjectNode gain = root.putObject("gain");
+            gain.put("degeneracy", g.degeneracy());
+            gain.put("thresholdNAvg", g.thresholdN());
+            gain.put("thresholdNAvgFarBiexcitonShift", g.thresholdShiftedN());
+            gain.put("thresholdPulseEnergyNj", g.thresholdEnergyJ() * 1e9);
+            gain.put("thresholdPeakFluenceUjPerCm2", g.thresholdFluenceJPerM2() * 100);
+            gain.put("thresholdReachable", g.thresholdReachable());
+            gain.put("gainLifetimeAtNAvg", g.gainAtN());
+            gain.put("gainLifetimePs", g.gainLifetimeS() * 1e12);
+            gain.put("tauBiexcitonPs", g.augerLifetimeS() * 1e12);
+            gain.put("perPulseRiseK", g.perPulseRiseK());
+            gain.put("steadyRiseK", g.steadyRiseK());
         }
         ArrayNode risks = root.putArray("risks");
         for (Risk r : plan.risks()) {

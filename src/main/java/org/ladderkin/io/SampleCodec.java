@@ -63,11 +63,20 @@ public final class SampleCodec {
         } catch (IllegalArgumentException e) {
             throw materialNode.error(InputProblem.BAD_CHOICE, e.getMessage());
         }
-        String sizeBy = n.oneOf("diameter", "firstExcitonPeak");
-        Node sizeNode = n.field(sizeBy);
-        SampleSpec.Size size = sizeBy.equals("diameter")
-                ? new SampleSpec.ByDiameter(sizeNode.positive(Dimension.LENGTH, null))
-                : new SampleSpec.ByFirstPeak(sizeNode.positive(Dimension.LENGTH, null));
+        Node sizeNode;
+        SampleSpec.Size size;
+        if (n.has("diameter") && n.has("firstExcitonPeak")) {
+            // both measured: the peak sets E₁S, the size the volume (materials without a sizing curve need both)
+            sizeNode = n.field("diameter");
+            size = new SampleSpec.ByDiameterAndPeak(sizeNode.positive(Dimension.LENGTH, null),
+                    n.field("firstExcitonPeak").positive(Dimension.LENGTH, null));
+        } else {
+            String sizeBy = n.oneOf("diameter", "firstExcitonPeak");
+            sizeNode = n.field(sizeBy);
+            size = sizeBy.equals("diameter")
+                    ? new SampleSpec.ByDiameter(sizeNode.positive(Dimension.LENGTH, null))
+                    : new SampleSpec.ByFirstPeak(sizeNode.positive(Dimension.LENGTH, null));
+        }
         Node dispersionNode = n.optional("sizeDispersion").orElse(null);
         double dispersion = dispersionNode == null ? 0 : dispersionNode.probability();
         if (dispersion >= 1) {

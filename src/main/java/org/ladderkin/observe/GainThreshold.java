@@ -63,4 +63,61 @@ public final class GainThreshold {
         }
         return Math.sqrt(lo * hi);
     }
+    /**
+     * The ⟨N⟩ of Poisson excitation at which some probe energy near the band edge first shows net gain when the
+     * multiexciton transitions are shifted by a biexciton interaction. A dot with N excitons (m = min(N, g) of them at
+     * the edge) emits on m channels at E₁ + (m − 1)Δ and absorbs on g − m channels at E₁ + mΔ (pairwise interaction:
+     * E(N) = N·E₁ + N(N − 1)Δ/2); every transition has the same Gaussian line of standard deviation w. Δ > 0 is a
+     * repulsive biexciton (blue-shifted). With Δ = 0 this is {@link #poissonThreshold(int)}.
+     *
+     * @param degeneracy     g, the band-edge degeneracy
+     * @param shiftOverWidth Δ/w
+     */
+    public static double poissonThreshold(int degeneracy, double shiftOverWidth) {
+        if (degeneracy < 1 || !Double.isFinite(shiftOverWidth)) {
+            throw new IllegalArgumentException("degeneracy must be >= 1 and the shift finite, were " + degeneracy + " and "
+                    + shiftOverWidth);
+        }
+        if (shiftOverWidth == 0) {
+            return poissonThreshold(degeneracy);
+        }
+        double lo = 1e-6;
+        double hi = 10.0 * degeneracy + 10;
+        for (int i = 0; i < 200 && hi - lo > 1e-13 * hi; i++) {
+            double mid = 0.5 * (lo + hi);
+            if (bestGain(mid, degeneracy, shiftOverWidth) > 0) {
+                hi = mid;
+            } else {
+                lo = mid;
+            }
+        }
+        return 0.5 * (lo + hi);
+    }
+
+    /** The largest net gain (emission minus absorption, in channels) over probe energies near the band edge. */
+    static double bestGain(double meanExcitons, int degeneracy, double shiftOverWidth) {
+        int count = Occupancy.poissonCutoff(meanExcitons, 1e-16) + 2;
+        double[] p = Occupancy.poisson(meanExcitons, count);
+        double[] pm = new double[degeneracy + 1];
+        for (int n = 0; n < p.length; n++) {
+            pm[Math.min(n, degeneracy)] += p[n];
+        }
+        double from = Math.min(0, (degeneracy - 1) * shiftOverWidth) - 5;
+        double to = Math.max(0, degeneracy * shiftOverWidth) + 5;
+        int steps = (int) Math.ceil((to - from) / 0.01);
+        double best = Double.NEGATIVE_INFINITY;
+        for (int k = 0; k <= steps; k++) {
+            double e = from + (to - from) * k / steps;
+            double g = 0;
+            for (int m = 0; m <= degeneracy; m++) {
+                g += pm[m] * (m * line(e - (m - 1) * shiftOverWidth) - (degeneracy - m) * line(e - m * shiftOverWidth));
+            }
+            best = Math.max(best, g);
+        }
+        return best;
+    }
+
+    private static double line(double x) {
+        return Math.exp(-0.5 * x * x);
+    }
 }

@@ -120,9 +120,9 @@ public final class Heating {
         }
         double peakK = ambientK + riseK;
         Verdict v = Verdict.against(riseK, limitRiseK, 0.5);
-        String why = String.format(java.util.Locale.ROOT,
-                "predicted rise %.3g K (limit %.3g K); sample at %.1f K, boiling point %.1f K", riseK, limitRiseK, peakK,
-                boilingPointK);
+        String why = String.format(java.util.Locale.ROOT, "predicted rise %.3g K (limit %.3g K); sample at %.1f K, %s", riseK,
+                limitRiseK, peakK, Double.isFinite(boilingPointK)
+                        ? String.format(java.util.Locale.ROOT, "boiling point %.1f K", boilingPointK) : "a film (no boiling point)");
         if (peakK > boilingPointK - 10) {
             v = Verdict.FAIL;
             why += "; within 10 K of boiling: flammable solvent vapour and bubbles — lower the power or flow the sample";

@@ -21,12 +21,16 @@ import org.ladderkin.observe.Risk;
  * @param risks         risk table
  * @param advisories    concerns about the inputs (probe larger than pump, approximate cross-section ...)
  * @param cautions      safety cautions that apply (worded by the report)
+ * @param gain          the optical-gain goal's threshold, gain lifetime and heating; null when gain is not a goal
+ * @param multiplicationPlan the carrier-multiplication measurement (reference, pumps, A/B series and its errors); null
+ *                      when multiplication is not a goal or there is no transient absorption
  */
 public record CampaignPlan(PlanInputs inputs, ModelAssumptions model, List<WavelengthOption> wavelengths,
                            List<RateOption> rates, RateOption chosenRate, String rateChoice, List<FluencePoint> fluences, HeatBudget heat,
                            DesignSearch.Result design, List<DelayPlan> delayPlans,
                            List<MultiplicationPrediction> multiplication, Predictions predictions,
-                           List<Risk> risks, List<String> advisories, List<Caution> cautions) {
+                           List<Risk> risks, List<String> advisories, List<Caution> cautions, GainPlan gain,
+                           MultiplicationPlan multiplicationPlan) {
 
     public CampaignPlan {
         java.util.Objects.requireNonNull(rateChoice, "rateChoice");

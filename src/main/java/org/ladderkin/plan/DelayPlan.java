@@ -14,13 +14,17 @@ import org.ladderkin.observe.TimeWindows;
  * @param timePerPointS       averaging time per delay point (s)
  * @param timePerFluenceS     acquisition time of one trace (s)
  * @param risks               instrument-specific risks (coverage, pile-up)
+ * @param counting            the photon-counting decay's plan (TCSPC), null for transient absorption
  */
 public record DelayPlan(Instrument instrument, double[] delaysS, double stageTravelM, TimeWindows.EarlyLate windows,
-                        double timePerPointS, double timePerFluenceS, List<Risk> risks) {
+                        double timePerPointS, double timePerFluenceS, List<Risk> risks, PhotonCounting counting) {
 
     public DelayPlan {
         delaysS = delaysS.clone();
         risks = List.copyOf(risks);
+        if ((counting != null) != (instrument.kind() == Instrument.Kind.TCSPC)) {
+            throw new IllegalArgumentException("a TCSPC delay plan, and only one, carries its photon-counting plan");
+        }
     }
 
     @Override

@@ -1,3 +1,4 @@
+// Over 400 lines: the one pass from inputs to plan (choices that depend on each other); mode rows live in their own classes
 package org.ladderkin.plan;
 
 import java.util.ArrayList;
@@ -17,7 +18,6 @@ import org.ladderkin.kinetics.train.PulseExcitation;
 import org.ladderkin.kinetics.train.SteadyState;
 import org.ladderkin.observe.EarlyLate;
 import org.ladderkin.observe.Heating;
-import org.ladderkin.observe.Photoluminescence;
 import org.ladderkin.observe.PulseTrainRisks;
 import org.ladderkin.observe.Risk;
 import org.ladderkin.observe.TimeWindows;
@@ -25,6 +25,7 @@ import org.ladderkin.observe.Verdict;
 import org.ladderkin.sample.Advisory;
 import org.ladderkin.sample.Sample;
 import org.ladderkin.units.Dimension;
+import org.ladderkin.units.PhysicalConstants;
 import org.ladderkin.units.Quantity;
 
 /**
@@ -57,8 +58,7 @@ public final class Planner {
         Progress NONE = (d, t, w) -> { };
     }
 
-    private Planner() {
-    }
+    private Planner() { }
 
     /** Plans the campaign the inputs describe. */
     public static CampaignPlan plan(PlanInputs in, Progress progress) {
@@ -66,12 +66,18 @@ public final class Planner {
     }
 
     /**
-     * Plans the campaign; without the design search the series is the naive log-spaced one, which is what an
-     * interactive view wants (the search dominates the cost).
+     * Plans the campaign; without the design search the series is the naive log-spaced one (for interactive views:
+     * the search dominates the cost) and the rate is chosen as the design would choose it.
      */
     public static CampaignPlan plan(PlanInputs in, Progress progress, boolean searchDesign) {
         int totalSteps = 6;
         Sample sample = in.sample();
+        if (Double.isNaN(sample.firstExcitonEnergyJ())) {
+            // the bleach, the wavelength ranking and the carrier-multiplication threshold all need E₁S
+            throw new IllegalArgumentException("sample: the first-exciton peak of " + sample.spec().name() + " is unknown ("
+                    + sample.material().key() + " has no sizing curve in the library): give 'firstExcitonPeak' beside "
+                    + "'diameter' (the peak sets E₁S, the size the volume)");
+        }
         LaserSetup laser = in.laser();
         int g = (int) Math.round(sample.material().electronDegeneracy().value());
         ModelAssumptions model = ModelAssumptions.forSample(sample, in.modelOverrides());
@@ -92,6 +98,9 @@ public final class Planner {
         double bandEdgeOd = Double.isNaN(sample.firstExcitonEnergyJ()) ? Double.NaN
                 : sample.absorbanceAt(sample.firstExcitonWavelengthM());
         var goalParams = DesignSearch.parametersFor(in.goals());
+        Instrument tcspc = in.instruments().stream().filter(i -> i.kind() == Instrument.Kind.TCSPC).findFirst().orElse(null);
+        double countingN = PhotonCounting.lifetimeN(atMax.nAvgProbeWeighted() * laser.minPulseEnergyJ()
+                / laser.maxPulseEnergyJ(), nReach);
         double firstDelay = ta == null ? 1e-12 : Math.max(ta.minDelayS(), 5 * model.coolingS());
         double lastDelay = ta == null ? 3e-9 : ta.maxDelayS();
         Calibration cal = laser.calibration().orDefaults();
@@ -100,24 +109,30 @@ public final class Planner {
         List<RateOption> rates;
         RateOption chosenRate;
         String rateChoice;
-        if (searchDesign && ta != null && !goalParams.isEmpty() && !Double.isNaN(bandEdgeOd) && nReach > 0.2) {
-            // The rate sets the period the design is scored at, and the design sets the ⟨N⟩ the rate must survive:
-            // a first choice at a provisional ⟨N⟩, then the rates judged again at the designed series' top.
-            double provisionalN = Math.min(PROVISIONAL_N, nReach);
+        boolean designable = ta != null && !goalParams.isEmpty() && !Double.isNaN(bandEdgeOd) && nReach > 0.2;
+        if (designable) {
+            // the rate sets the design's period and the design the ⟨N⟩ the rate must survive: judged at the highest
+            // ⟨N⟩ the design can reach, the rate survives any series it picks, so one search suffices
             progress.step(1, totalSteps, "judging repetition rates");
-            RateOption first = RateJudge.fastestPassing(RateJudge.rates(in, km, atMax, provisionalN));
-            progress.step(2, totalSteps, "searching the fluence and delay design");
-            design = DesignSearch.search(designContext(in, model, g, first, bandEdgeOd, ta, firstDelay, lastDelay, nReach,
-                    goalParams, atMax, cal));
-            nSeries = design.best().nValues();
-            rates = RateJudge.rates(in, km, atMax, top(nSeries));
-            chosenRate = RateJudge.fastestPassing(rates);
-            if (chosenRate.division() == first.division()) {
-                rateChoice = String.format(Locale.ROOT, "Rates first judged at ⟨N⟩ = %.3g to set the period for the design "
-                        + "search, then again at the designed series' highest ⟨N⟩ = %.3g; the choice stands.", provisionalN,
-                        top(nSeries));
+            RateOption designRate = RateJudge.fastestPassing(RateJudge.rates(in, km, atMax, nReach));
+            if (searchDesign) {
+                progress.step(2, totalSteps, "searching the fluence and delay design");
+                design = DesignSearch.search(designContext(in, model, g, designRate, bandEdgeOd, ta, firstDelay, lastDelay,
+                        nReach, goalParams, atMax, cal));
+                nSeries = design.best().nValues();
             } else {
-                // one more search at the new rate; the design is not searched a third time
+                nSeries = previewSeries(nReach);
+            }
+            rates = RateJudge.rates(in, km, atMax, top(nSeries));
+            chosenRate = notFasterThan(RateJudge.fastestPassing(rates), designRate, rates);
+            String rule = String.format(Locale.ROOT, "Rates first judged at the highest ⟨N⟩ the design can reach, %.3g, to "
+                    + "set the period the design is scored at (%s); then again at the %s highest ⟨N⟩ = %.3g, where the "
+                    + "fastest that passes, never faster than the design's, is used", nReach, RateJudge.hz(designRate),
+                    searchDesign ? "designed series'" : "series'", top(nSeries));
+            if (chosenRate.repetitionRateHz() >= designRate.repetitionRateHz() || !searchDesign) {
+                rateChoice = rule + ": " + RateJudge.hz(chosenRate) + ".";
+            } else {
+                // slower at the designed top than at nReach (every rate failed there, or a limit is not monotonic in ⟨N⟩)
                 RateOption second = chosenRate;
                 double firstTop = top(nSeries);
                 progress.step(2, totalSteps, "searching the design again at " + RateJudge.hz(second));
@@ -125,20 +140,26 @@ public final class Planner {
                         nReach, goalParams, atMax, cal));
                 nSeries = design.best().nValues();
                 rates = RateJudge.rates(in, km, atMax, top(nSeries));
-                RateOption third = RateJudge.fastestPassing(rates);
-                RateOption designedAt = rates.stream().filter(r -> r.division() == second.division()).findFirst().orElseThrow();
-                // never faster than the rate the design was scored at; slower when safety asks for it
-                chosenRate = third.repetitionRateHz() > designedAt.repetitionRateHz() ? designedAt : third;
-                rateChoice = String.format(Locale.ROOT, "Rates first judged at ⟨N⟩ = %.3g (choice %s); the designed series "
-                                + "went to ⟨N⟩ = %.3g, where the choice became %s, so the design was searched again at that "
-                                + "rate; its series goes to ⟨N⟩ = %.3g, where the rates are judged%s.", provisionalN,
-                        RateJudge.hz(first), firstTop, RateJudge.hz(second), top(nSeries), chosenRate.division() == second.division() ? ""
-                                : "; " + RateJudge.hz(chosenRate) + " is the fastest that passes there (the design's expected errors "
-                                + "were scored at " + RateJudge.hz(second) + ")");
+                chosenRate = notFasterThan(RateJudge.fastestPassing(rates), second, rates);
+                rateChoice = String.format(Locale.ROOT, "%s: %s at ⟨N⟩ = %.3g, slower than the design's, so the design "
+                        + "was searched again at that rate; its series goes to ⟨N⟩ = %.3g, where the rates are judged "
+                        + "again: %s.", rule, RateJudge.hz(second), firstTop, top(nSeries), RateJudge.hz(chosenRate));
             }
+        } else if (ta == null && tcspc != null) {
+            // photon counting alone: one decay at a low ⟨N⟩, and the rates judged where it is recorded
+            nSeries = new double[] {countingN};
+            progress.step(1, totalSteps, "judging repetition rates");
+            rates = RateJudge.rates(in, km, atMax, countingN);
+            // a decay needs its period: the fastest passing rate whose period holds 5 τ₁, if one does
+            double minPeriod = 5 * model.tauSingleExcitonS();
+            List<RateOption> long5 = rates.stream().filter(r -> 1 / r.repetitionRateHz() >= minPeriod).toList();
+            chosenRate = RateJudge.fastestPassing(long5.isEmpty() ? rates : long5);
+            rateChoice = String.format(Locale.ROOT, "Rates judged at the photon-counting decay's ⟨N⟩ = %.3g; the fastest "
+                    + "that passes with a period of at least 5 τ₁ (%s)%s.", countingN, Quantity.formatBest(minPeriod,
+                    Dimension.TIME, 3), long5.isEmpty() ? ": none is that slow, so the fastest that passes" : "");
         } else {
             // without a design the series does not depend on the rate: judge the rates at its own top
-            nSeries = TimeWindows.logSpaced(0.05, Math.max(0.1, Math.min(3, nReach)), 8);
+            nSeries = previewSeries(nReach);
             progress.step(1, totalSteps, "judging repetition rates");
             rates = RateJudge.rates(in, km, atMax, top(nSeries));
             chosenRate = RateJudge.fastestPassing(rates);
@@ -167,7 +188,7 @@ public final class Planner {
         HeatBudget heat = chosenRate.heat();
         List<DelayPlan> delayPlans = new ArrayList<>();
         for (Instrument inst : in.instruments()) {
-            delayPlans.add(delayPlan(inst, model, design, nSeries.length, km, top(nSeries), period, top, in));
+            delayPlans.add(delayPlan(inst, model, design, nSeries.length, km, countingN, period, atChosenRate, in));
         }
         // the predicted traces are drawn on log axes: the printed TA grid's positive delays, so they start where it does
         double[] taDelays = delayPlans.stream().filter(d -> d.instrument().kind() == Instrument.Kind.TRANSIENT_ABSORPTION)
@@ -182,7 +203,13 @@ public final class Planner {
         List<Risk> risks = new ArrayList<>();
         risks.add(evaluatedAt(Heating.risk("steady-state heating", heat.steadyRiseK(), SAMPLE_TEMPERATURE_K,
                 in.limits().maxTemperatureRiseK(), heat.boilingPointK()), at));
-        risks.add(evaluatedAt(PulseTrainRisks.chargingRisk(chosenRate.charged(), in.limits().maxChargedFraction()), at));
+        Risk charging = evaluatedAt(PulseTrainRisks.chargingRisk(chosenRate.charged(), in.limits().maxChargedFraction()), at);
+        if (sample.spec().matrix().map(m -> m.kind() == org.ladderkin.sample.Matrix.Kind.FILM).orElse(false)) {
+            // a film cannot be stirred: it is refreshed by moving it under the beam
+            charging = new Risk(charging.name(), charging.verdict(), charging.value(), charging.limit(), charging.unit(),
+                    charging.why().replace("stir or flow the sample", "translate the film so each pulse meets a fresh spot"));
+        }
+        risks.add(charging);
         risks.add(evaluatedAt(PulseTrainRisks.residualRisk(chosenRate.residual(), in.limits().maxResidualExcitation()), at));
         for (DelayPlan d : delayPlans) {
             risks.addAll(d.risks());
@@ -192,9 +219,12 @@ public final class Planner {
                 : Verdict.PASS, nSeries[nSeries.length - 1], MODEL_VALIDITY_N, "⟨N⟩", String.format(Locale.ROOT,
                 "highest ⟨N⟩ %.3g; above %.0f the ladder, Poisson statistics and the Auger scaling laws are extrapolated",
                 nSeries[nSeries.length - 1], MODEL_VALIDITY_N)));
-        if (!in.goals().contains(Goal.MULTIPLICATION_YIELD) && chosen.energyOverGap() >= 2) {
+        if (chosen.energyOverGap() >= 2) {
             risks.add(new Risk("carrier-multiplication confound", Verdict.WARN, chosen.energyOverGap(), 2, "E₁S",
-                    "the chosen pump can create two excitons per photon; no lower-energy pump was acceptable"));
+                    in.goals().contains(Goal.MULTIPLICATION_YIELD) ? "the main series' pump can create two excitons per "
+                            + "photon: fit its Auger and σ analysis with the multiplication yield, or pump it at the "
+                            + "multiplication plan's reference" : "the chosen pump can create two excitons per photon; no "
+                            + "lower-energy pump was acceptable"));
         }
         long unreachable = fluences.stream().filter(f -> !f.reachable()).count();
         if (unreachable > 0) {
@@ -213,16 +243,29 @@ public final class Planner {
                             p.energyOverGap()), Verdict.WARN, inflation, 0.02, "relative", String.format(Locale.ROOT,
                             "at the full %s rate residual excitation and trions inflate A/B by %.0f %% (charged fraction "
                                     + "%.2g): use the pulse picker (%s) and refresh the sample",
-                            org.ladderkin.units.Quantity.formatBest(laser.repetitionRateHz(), org.ladderkin.units.Dimension.FREQUENCY, 3),
-                            100 * inflation, p.chargedFullRate(),
-                            org.ladderkin.units.Quantity.formatBest(chosenRate.repetitionRateHz(), org.ladderkin.units.Dimension.FREQUENCY, 3))));
+                            Quantity.formatBest(laser.repetitionRateHz(), Dimension.FREQUENCY, 3), 100 * inflation,
+                            p.chargedFullRate(), Quantity.formatBest(chosenRate.repetitionRateHz(), Dimension.FREQUENCY, 3))));
                 }
                 if (!p.offered()) {
                     risks.add(new Risk("multiplication photon energy available", Verdict.FAIL, p.photonEnergyJ(), 0, "J",
-                            String.format(Locale.ROOT, "the laser offers no pump at %.3f eV", p.photonEnergyJ()
-                                    / org.ladderkin.units.PhysicalConstants.ELECTRONVOLT_J)));
+                            String.format(Locale.ROOT, "the laser offers no pump at %.3f eV", p.photonEnergyJ() / PhysicalConstants.ELECTRONVOLT_J)));
                 }
             }
+        }
+        MultiplicationPlan multiplication = null;
+        if (in.goals().contains(Goal.MULTIPLICATION_YIELD) && ta != null) {
+            // the multiplication measurement shares the beam time with the other goals' series
+            double share = in.goals().size() > 1 ? 0.5 : 1;
+            multiplication = MultiplicationPlan.of(km, model, sample.firstExcitonEnergyJ(), laser.pumpWavelengthsM(),
+                    bandEdgeOd, ta.noiseFloor(), share * in.limits().beamTimeS() * DATA_SHARE_OF_BEAM_TIME,
+                    chosenRate.repetitionRateHz(), in.limits());
+            risks.addAll(multiplication.risks());
+        }
+        boolean film = sample.spec().matrix().map(m -> m.kind() == org.ladderkin.sample.Matrix.Kind.FILM).orElse(false);
+        GainPlan gain = !in.goals().contains(Goal.GAIN_THRESHOLD) ? null
+                : GainPlan.of(g, km, model, atChosenRate, laser, top(nSeries), heat, in.limits(), film);
+        if (gain != null) {
+            risks.addAll(gain.risks());
         }
         List<String> advisories = atChosenRate.advisories().stream().map(Advisory::message).distinct().toList();
         String matrixKey = sample.spec().matrix().map(m -> m.key()).orElse("unknown matrix");
@@ -234,16 +277,19 @@ public final class Planner {
                 SAMPLE_TEMPERATURE_K, heat.boilingPointK(), peakFluence);
         progress.step(6, totalSteps, "done");
         return new CampaignPlan(in, model, wavelengths, rates, chosenRate, rateChoice, fluences, heat, design, delayPlans, cm, predictions,
-                risks, advisories, cautions);
+                risks, advisories, cautions, gain, multiplication);
     }
 
-    /**
-     * ⟨N⟩ the rate choice first assumes when a design search will pick the series: the middle of the design's
-     * candidate tops (1 to 8); the rates are judged again at the series' actual top afterwards.
-     */
-    static final double PROVISIONAL_N = 5;
+    private static double[] previewSeries(double nReach) {
+        return TimeWindows.logSpaced(0.05, Math.max(0.1, Math.min(3, nReach)), 8);
+    }
 
-    /** Longest pulse-train build-up kept for the chart (each pulse is one point). */
+    /** {@code passing} unless it is faster than {@code cap}, else the option of {@code rates} at {@code cap}'s division. */
+    private static RateOption notFasterThan(RateOption passing, RateOption cap, List<RateOption> rates) {
+        return passing.repetitionRateHz() <= cap.repetitionRateHz() ? passing : rates.stream().filter(r -> r.division() == cap.division()).findFirst().orElseThrow();
+    }
+
+    /** Longest pulse-train build-up kept for the chart (one point a pulse). */
     public static final int MAX_BUILD_UP_PULSES = 20_000;
 
     /** The risk with the fluence and rate it was evaluated at added to its explanation. */
@@ -337,7 +383,8 @@ public final class Planner {
     }
 
     private static DelayPlan delayPlan(Instrument inst, ModelAssumptions model, DesignSearch.Result design, int fluenceCount,
-                                       KineticModel km, double nTop, double period, Excitation top, PlanInputs in) {
+                                       KineticModel km, double countingN, double period, Excitation atChosenRate,
+                                       PlanInputs in) {
         TimeWindows.EarlyLate windows = TimeWindows.earlyLate(model.coolingS(), model.tauBiexcitonS(), model.tauSingleExcitonS());
         List<Risk> risks = new ArrayList<>();
         double budget = in.limits().beamTimeS() * DATA_SHARE_OF_BEAM_TIME;
@@ -362,31 +409,14 @@ public final class Planner {
                         "the delay stage does not reach 5 τ₂: the Auger decay will not be complete"));
             }
             return new DelayPlan(inst, grid, TimeWindows.stageTravelM(inst.maxDelayS()), windows, perPoint,
-                    perPoint * grid.length, risks);
+                    perPoint * grid.length, risks, null);
         }
-        // TCSPC: bins over the range; decay coverage, period coverage and pile-up
-        int bins = (int) Math.ceil(inst.maxDelayS() / inst.minDelayS());
-        double[] grid = new double[Math.min(bins, 100_000)];
-        for (int i = 0; i < grid.length; i++) {
-            grid[i] = (i + 0.5) * inst.minDelayS();
-        }
-        risks.add(TimeWindows.decayCovered("TCSPC range vs τ₁", inst.maxDelayS(), model.tauSingleExcitonS()));
-        risks.add(TimeWindows.decayCovered("pulse period vs τ₁", period, model.tauSingleExcitonS()));
-        PulseExcitation pulse = new PulseExcitation.Poisson(nTop);
-        LadderKinetics kin = LadderKinetics.forPulses(km, pulse);
-        SteadyState ss = kin.steadyState(pulse, period, false);
-        double emittedPerDot = Photoluminescence.emittedPerPulse(kin, ss.afterPulse(), period);
-        double detectedPerPulse = emittedPerDot * top.dotsInExcitedVolume() * TCSPC_COLLECTION_EFFICIENCY;
-        double fraction = detectedPerPulse;
-        double attenuation = fraction / inst.maxCountFraction();
-        risks.add(new Risk("TCSPC pile-up", attenuation > 1 ? Verdict.WARN : Verdict.PASS, fraction, inst.maxCountFraction(),
-                "photons per pulse", String.format(Locale.ROOT, "at the highest fluence about %.3g photons per pulse would be "
-                        + "detected (assuming %.0e collection × detection efficiency); keep below %.3g per pulse (common "
-                        + "practice, no source)%s", fraction, TCSPC_COLLECTION_EFFICIENCY, inst.maxCountFraction(),
-                        attenuation > 1 ? String.format(Locale.ROOT, ": attenuate the detected emission by %.2g× (ND %.1f)",
-                                attenuation, Math.log10(attenuation)) : "")));
-        double perPoint = budget / fluenceCount;
-        return new DelayPlan(inst, grid, 0, windows, perPoint, perPoint, risks);
+        // TCSPC: one decay at a low ⟨N⟩, planned from its count rate (with TA beside it, a fluence's share of the time)
+        boolean alone = in.instruments().stream().noneMatch(i -> i.kind() == Instrument.Kind.TRANSIENT_ABSORPTION);
+        PhotonCounting counting = PhotonCounting.plan(inst, model, km, atChosenRate, in.laser(), countingN, period,
+                alone ? budget : budget / fluenceCount);
+        return new DelayPlan(inst, new double[0], 0, windows, counting.acquisitionS(), counting.acquisitionS(),
+                counting.risks(), counting);
     }
 
     private static Risk thickness(WavelengthOption chosen) {

@@ -49,15 +49,15 @@ public final class WavelengthRanking {
                 if (ratio >= 2) {
                     if (cm) {
                         score += 2;
-                        reasons.add(String.format(Locale.ROOT, "ħω = %.2f·E₁S is above the multiplication threshold: "
-                                + "wanted for the multiplication goal", ratio));
+                        reasons.add(String.format(Locale.ROOT, "ħω = %.2f·E₁S ≥ 2·E₁S, where multiplication is "
+                                + "energetically allowed: wanted for the multiplication goal", ratio));
                     } else {
                         score -= 3;
                         reasons.add(String.format(Locale.ROOT, "ħω = %.2f·E₁S ≥ 2·E₁S: carrier multiplication may add "
                                 + "excitons and confound the Auger and cross-section analysis", ratio));
                     }
                 } else {
-                    reasons.add(String.format(Locale.ROOT, "ħω = %.2f·E₁S, below the multiplication threshold", ratio));
+                    reasons.add(String.format(Locale.ROOT, "ħω = %.2f·E₁S, below 2·E₁S: no multiplication", ratio));
                     if (cm) {
                         score += 0.5;
                         reasons.add("serves as the no-multiplication reference");

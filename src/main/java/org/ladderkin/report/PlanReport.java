@@ -126,6 +126,8 @@ public final class PlanReport {
         page.charts(charts(plan), 520, 340);
         designSection(page, plan);
         multiplicationSection(page, plan);
+        gainSection(page, plan);
+        multiplicationPlanSection(page, plan);
         whatIfSection(page, plan, whatIfs);
         page.heading(2, "Pump wavelengths compared");
         page.table(List.of("wavelength", "photon energy", "σ (cm²)", "absorbance (OD)", "ħω/E₁S", "max ⟨N⟩", "score", "reasons"),
@@ -136,10 +138,10 @@ public final class PlanReport {
                         String.join("; ", w.reasons()))).toList());
         page.heading(2, "Repetition rates compared (at " + top + ")");
         page.paragraph(plan.rateChoice() + " The rule: every rate is judged at the series' highest ⟨N⟩. With a design "
-                + "search the rates are first judged at a provisional ⟨N⟩ = min(5, reachable) to set the period the design is "
-                + "scored at, then again at the designed series' top; if that changes the choice the design is searched once "
-                + "more at the new rate, and the rate used is the fastest that passes at its top, never faster than the rate "
-                + "that design was scored at.");
+                + "search the rates are first judged at the highest ⟨N⟩ the design can reach, which sets the period the "
+                + "design is scored at, then again at the designed series' top; the rate used is the fastest that passes "
+                + "there, never faster than the rate the design was scored at, and only if that is slower is the design "
+                + "searched once more at it.");
         page.table(List.of("division", "rate", "residual at next pulse", "charged", "steady rise (K)", "verdict"),
                 plan.rates().stream().map(r -> List.of("÷" + r.division(), q(r.repetitionRateHz(), Dimension.FREQUENCY),
                         num(r.residual()), num(r.charged()), num(r.steadyRiseK()), r.verdict().name())).toList());
@@ -201,8 +203,8 @@ public final class PlanReport {
                 lines.add(String.format(Locale.ROOT, "Early/late windows: early %s, late %s%s.", q(d.windows().earlyS(), Dimension.TIME),
                         q(d.windows().lateS(), Dimension.TIME), d.windows().separated() ? "" : " (time scales overlap)"));
             } else {
-                lines.add(String.format(Locale.ROOT, "TCSPC: %s bins over %s; %s per fluence.", q(d.instrument().minDelayS(),
-                        Dimension.TIME), q(d.instrument().maxDelayS(), Dimension.TIME), q(d.timePerFluenceS(), Dimension.TIME)));
+                lines.add(ModeSections.countingLine(d));
+                d.counting().notPlanned().forEach(n -> lines.add("Not planned by photon counting: " + n + "."));
             }
         }
         lines.add("Overall risk verdict: " + worst.name() + " (see the risk table).");
@@ -279,6 +281,22 @@ public final class PlanReport {
                         num(m.energyOverGap()), num(m.eta()), num(m.idealRatio()), num(m.apparentRatioChosen()),
                         num(m.chargedChosen()), num(m.apparentRatioFullRate()), num(m.chargedFullRate()),
                         m.offered() ? "yes" : "NO")).toList());
+    }
+
+    private static void multiplicationPlanSection(HtmlPage page, CampaignPlan plan) {
+        if (plan.multiplicationPlan() == null) {
+            return;
+        }
+        page.heading(2, "Carrier multiplication plan");
+        page.bullets(ModeSections.multiplicationLines(plan));
+    }
+
+    private static void gainSection(HtmlPage page, CampaignPlan plan) {
+        if (plan.gain() == null) {
+            return;
+        }
+        page.heading(2, "Optical gain");
+        page.bullets(ModeSections.gainLines(plan));
     }
 
     private static void whatIfSection(HtmlPage page, CampaignPlan plan, List<WhatIf> whatIfs) {

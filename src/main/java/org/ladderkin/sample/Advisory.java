@@ -23,7 +23,9 @@ public record Advisory(Kind kind, String message) {
         /** The pump is at or below the first exciton: resonant pumping saturates and is not Poissonian. */
         RESONANT_OR_BELOW_GAP_PUMP,
         /** A library value used here is recalled or unsourced. */
-        UNCONFIRMED_VALUE
+        UNCONFIRMED_VALUE,
+        /** The size and the first-exciton peak given disagree with the material's sizing curve. */
+        SIZE_PEAK_DISAGREE
     }
 
     public Advisory {

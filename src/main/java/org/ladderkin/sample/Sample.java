@@ -63,6 +63,10 @@ public record Sample(SampleSpec spec, double sizeM, double firstExcitonEnergyJ, 
             } else {
                 firstJ = Double.NaN;
             }
+        } else if (spec.size() instanceof SampleSpec.ByDiameterAndPeak both) {
+            sizeM = both.sizeM();
+            firstJ = Photon.energyJ(both.wavelengthM());
+            curve.ifPresent(c -> disagreement(c, sizeM, firstJ).ifPresent(advisories::add));
         } else {
             SampleSpec.ByFirstPeak p = (SampleSpec.ByFirstPeak) spec.size();
             firstJ = Photon.energyJ(p.wavelengthM());
@@ -113,6 +117,27 @@ public record Sample(SampleSpec spec, double sizeM, double firstExcitonEnergyJ, 
             }
         }
         return new Sample(spec, sizeM, firstJ, concentration, advisories);
+    }
+
+    /** Relative size difference from the sizing curve above which a measured size and peak are worth a look. */
+    static final double SIZE_PEAK_DISAGREEMENT = 0.15;
+
+    private static Optional<Advisory> disagreement(SizingCurve curve, double sizeM, double firstJ) {
+        double fromCurve;
+        try {
+            fromCurve = curve.diameterM(firstJ);
+        } catch (IllegalArgumentException e) {
+            return Optional.of(new Advisory(Advisory.Kind.SIZE_PEAK_DISAGREE, "the first-exciton peak is outside the sizing "
+                    + "curve's range, so the size and the peak given cannot be compared: " + e.getMessage()));
+        }
+        double rel = sizeM / fromCurve - 1;
+        if (Math.abs(rel) <= SIZE_PEAK_DISAGREEMENT) {
+            return Optional.empty();
+        }
+        return Optional.of(new Advisory(Advisory.Kind.SIZE_PEAK_DISAGREE, String.format(Locale.ROOT, "the size given, %.2f nm, "
+                + "differs by %+.0f %% from the %.2f nm the sizing curve gives for the peak given; both are used as given "
+                + "(the peak sets E₁S, the size the volume): check the size measurement", sizeM * 1e9, 100 * rel,
+                fromCurve * 1e9)));
     }
 
     public Material material() {

@@ -25,7 +25,7 @@ public record SampleSpec(String name, Material material, Size size, double sizeD
                          Optional<AbsorptionSpectrum> spectrum, Optional<GivenCrossSection> givenCrossSection) {
 
     /** How the size is given. */
-    public sealed interface Size permits ByDiameter, ByFirstPeak { }
+    public sealed interface Size permits ByDiameter, ByFirstPeak, ByDiameterAndPeak { }
 
     /** Size given directly (diameter of a sphere, edge of a cube), m. */
     public record ByDiameter(double sizeM) implements Size {
@@ -42,6 +42,18 @@ public record SampleSpec(String name, Material material, Size size, double sizeD
             if (!(wavelengthM > 0) || !Double.isFinite(wavelengthM)) {
                 throw new IllegalArgumentException("first-exciton peak must be > 0, was " + wavelengthM * 1e9 + " nm");
             }
+        }
+    }
+
+    /**
+     * Size and first-exciton peak both measured: the peak sets E₁S and the size the volume. The only way to plan a
+     * material without a sizing curve in the library, and the better description when both are known (a sizing
+     * curve is an average over many batches).
+     */
+    public record ByDiameterAndPeak(double sizeM, double wavelengthM) implements Size {
+        public ByDiameterAndPeak {
+            new ByDiameter(sizeM);
+            new ByFirstPeak(wavelengthM);
         }
     }
 

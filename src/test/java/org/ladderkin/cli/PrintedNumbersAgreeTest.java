@@ -77,6 +77,8 @@ class PrintedNumbersAgreeTest {
 
         checkReport(report, json, topN, topEnergyJ, chosenRate);
         checkText(run.out(), json, topN, topEnergyJ, chosenRate);
+        checkModes(run.out(), json);
+        checkModes(report.text, json);
         checkWindow(PlanCodec.read(plan), json, topN, chosenRate);
     }
 
@@ -254,6 +256,39 @@ class PrintedNumbersAgreeTest {
             quantity(rows.get(8).get(1), Dimension.TIME, model.get("refreshTimeS").asDouble(), "refresh");
         }
         quantity(rows.get(9).get(1), Dimension.TIME, model.get("coolingPs").asDouble() * 1e-12, "cooling");
+    }
+
+    // ---- the mode rows (photon counting, multiplication), worded once for the report and the text ----------------
+
+    private static void checkModes(String text, JsonNode json) {
+        for (JsonNode dp : json.get("delayPlans")) {
+            if (!dp.has("photonCounting")) {
+                continue;
+            }
+            JsonNode c = dp.get("photonCounting");
+            Matcher m = find(text, "one decay at ⟨N⟩ = " + NUM + " \\(" + NUM + " ([a-zµ]?J) per pulse\\), " + NUM
+                    + " detected photons per pulse[^,]*, " + NUM + " counts/s; " + NUM + " counts for τ₁ to ± " + NUM
+                    + " % \\(F = " + NUM + "\\) take " + NUM + " (\\S+) ");
+            printed(m.group(1), c.get("nAvgProbeWeighted").asDouble(), "TCSPC ⟨N⟩");
+            quantity(m.group(2) + " " + m.group(3), Dimension.ENERGY, c.get("pulseEnergyNj").asDouble() * 1e-9, "TCSPC energy");
+            printed(m.group(4), c.get("detectedPerPulse").asDouble(), "TCSPC detected per pulse");
+            printed(m.group(5), c.get("countRatePerS").asDouble(), "TCSPC count rate");
+            printed(m.group(6), c.get("counts").asDouble(), "TCSPC counts");
+            printed(m.group(7), 100 * c.get("targetTau1Rel").asDouble(), "TCSPC target");
+            printed(m.group(8), c.get("precisionFactor").asDouble(), "TCSPC F");
+            quantity(m.group(9) + " " + m.group(10), Dimension.TIME, c.get("acquisitionS").asDouble(), "TCSPC time");
+        }
+        if (json.has("multiplicationPlan")) {
+            for (JsonNode p : json.at("/multiplicationPlan/pumps")) {
+                Matcher m = find(text, "\\(ħω = " + NUM + "·E₁S\\): assumed η = " + NUM + " \\(range " + NUM + "–" + NUM
+                        + "\\); A/B at ⟨N⟩ → 0 = " + Pattern.quote(String.format(java.util.Locale.ROOT, "%.4g",
+                        p.get("interceptRatio").asDouble())) + ", expected error ± " + NUM + " \\(statistical " + NUM);
+                printed(m.group(1), p.get("energyOverFirstExciton").asDouble(), "multiplication ħω/E₁S");
+                printed(m.group(2), p.get("etaAssumed").asDouble(), "multiplication η");
+                printed(m.group(5), p.get("expectedError").asDouble(), "multiplication A/B error");
+                printed(m.group(6), p.get("statisticalError").asDouble(), "multiplication statistical error");
+            }
+        }
     }
 
     // ---- the plan command's text --------------------------------------------------------------------------------

@@ -85,11 +85,22 @@ class PlannerDemoTest {
                 .satisfies(r -> assertThat(r.value()).isEqualTo(plan.chosenRate().charged()));
         List<RateOption> passing = plan.rates().stream().filter(r -> r.verdict() != Verdict.FAIL).toList();
         if (!passing.isEmpty()) {
-            assertThat(plan.chosenRate()).isEqualTo(passing.stream().max(Comparator.comparingDouble(RateOption::repetitionRateHz)).get());
+            RateOption fastest = passing.stream().max(Comparator.comparingDouble(RateOption::repetitionRateHz)).get();
+            // never faster than the rate the design's expected errors were scored at
+            double designHz = plan.design() == null ? Double.POSITIVE_INFINITY : 1 / plan.design().context().periodS();
+            assertThat(plan.chosenRate().repetitionRateHz())
+                    .isCloseTo(Math.min(fastest.repetitionRateHz(), designHz), org.assertj.core.data.Percentage.withPercentage(1e-9));
+            if (plan.design() != null) {
+                assertThat(1 / plan.design().context().periodS())
+                        .isCloseTo(plan.chosenRate().repetitionRateHz(), org.assertj.core.data.Percentage.withPercentage(1e-9));
+            }
         } else {
             assertThat(plan.chosenRate().repetitionRateHz())
                     .isEqualTo(plan.rates().stream().mapToDouble(RateOption::repetitionRateHz).min().getAsDouble());
         }
+
+        // the fit tab's pulse train runs at the rate this plan chose (the basis plans without the design search)
+        assertThat(PlanFitBasis.of(in).repetitionRateHz()).isEqualTo(plan.chosenRate().repetitionRateHz());
 
         // heating: the liquid conduction formula on the absorbed power at the highest setting
         HeatBudget h = plan.heat();
@@ -129,5 +140,16 @@ class PlannerDemoTest {
         }
         assertThat(plan.chosenRate().repetitionRateHz()).isLessThan(plan.inputs().laser().repetitionRateHz());
         assertThat(plan.risks()).anyMatch(r -> r.name().startsWith("false multiplication"));
+    }
+
+    @org.junit.jupiter.api.Test
+    void aSampleWithoutAKnownFirstExcitonIsRefusedNotPlannedAsNaN() throws java.io.IOException {
+        String text = java.nio.file.Files.readString(HOME.resolve("experiments-plan").resolve("inp-zns-tcspc-5mhz.plan.json"))
+                .replaceAll("\\s*\"firstExcitonPeak\": \"[^\"]*\",", "");
+        PlanInputs in = PlanCodec.read(org.ladderkin.io.json.JsonTree.parse(text, HOME.resolve("experiments-plan").resolve("inp-without-peak.plan.json").toString()));
+        org.assertj.core.api.Assertions.assertThatThrownBy(() -> Planner.plan(in, Planner.Progress.NONE, false))
+                .isInstanceOf(IllegalArgumentException.class)
+                .hasMessageContaining("first-exciton peak").hasMessageContaining("InP has no sizing curve")
+                .hasMessageContaining("give 'firstExcitonPeak' beside 'diameter'");
     }
 }

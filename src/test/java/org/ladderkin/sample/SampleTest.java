@@ -22,6 +22,25 @@ class SampleTest {
     }
 
     @Test
+    void sizeAndPeakTogether() {
+        // a material without a sizing curve: the peak sets E₁S, the size the volume, nothing is NaN
+        Sample inp = Sample.resolve(spec("InP", new SampleSpec.ByDiameterAndPeak(3.2e-9, 560e-9), new SampleSpec.Concentration(1e-3)));
+        assertThat(inp.sizeM()).isEqualTo(3.2e-9);
+        assertThat(inp.firstExcitonWavelengthM()).isCloseTo(560e-9, org.assertj.core.data.Offset.offset(1e-18));
+        assertThat(inp.dotVolumeM3()).isCloseTo(Math.PI / 6 * Math.pow(3.2e-9, 3), org.assertj.core.data.Percentage.withPercentage(1e-9));
+        assertThat(inp.advisories()).noneMatch(a -> a.kind() == Advisory.Kind.SIZE_PEAK_DISAGREE);
+        // with a sizing curve a size far from the curve's is used as given, with a word about it
+        double curveM = Sample.resolve(spec("CdSe", new SampleSpec.ByFirstPeak(580e-9), new SampleSpec.Concentration(1e-3))).sizeM();
+        Sample close = Sample.resolve(spec("CdSe", new SampleSpec.ByDiameterAndPeak(curveM * 1.1, 580e-9), new SampleSpec.Concentration(1e-3)));
+        assertThat(close.advisories()).noneMatch(a -> a.kind() == Advisory.Kind.SIZE_PEAK_DISAGREE);
+        Sample far = Sample.resolve(spec("CdSe", new SampleSpec.ByDiameterAndPeak(curveM * 1.3, 580e-9), new SampleSpec.Concentration(1e-3)));
+        assertThat(far.sizeM()).isEqualTo(curveM * 1.3);
+        assertThat(far.firstExcitonWavelengthM()).isCloseTo(580e-9, org.assertj.core.data.Offset.offset(1e-18));
+        assertThat(far.advisories()).filteredOn(a -> a.kind() == Advisory.Kind.SIZE_PEAK_DISAGREE).singleElement()
+                .satisfies(a -> assertThat(a.message()).contains("+30 %"));
+    }
+
+    @Test
     void diameterOutsideTheSizingCurveRange() {
         assertThatThrownBy(() -> Sample.resolve(spec("CdSe", new SampleSpec.ByDiameter(9e-9), new SampleSpec.Concentration(1e-3))))
                 .isInstanceOf(SampleException.class)
