@@ -12,8 +12,8 @@ import org.ladderkin.observe.MeasuredIrf;
  */
 public final class InstrumentResponse {
 
-    /** The key of the Gaussian width parameter. */
-    public static final String FWHM = "irfFwhmS";
+    /** The key of the Gaussian width parameter (its own name, so a joint fit can give TA traces another response). */
+    public static final String FWHM = "countIrfFwhmS";
     /** Half-width of the sampled Gaussian in standard deviations. */
     private static final double GAUSS_REACH = 5;
 

@@ -13,7 +13,7 @@ import org.ladderkin.validation.Reference;
 class CountModelTest {
 
     private static ParameterValues at(double tauS, double shiftS) {
-        return ParameterValues.shared(List.of("tau1S", "irfFwhmS", "shiftS", "amplitude", "background"),
+        return ParameterValues.shared(List.of("tau1S", InstrumentResponse.FWHM, "shiftS", "amplitude", "background"),
                 new double[] {tauS, 80e-12, shiftS, 50, 1.5});
     }
 

@@ -42,7 +42,7 @@ class LikelihoodOptimumTest {
     }
 
     private static ParameterValues at(double tauS, double amplitude, double background, double shiftS) {
-        return ParameterValues.shared(List.of("tau1S", "irfFwhmS", "shiftS", "amplitude", "background"),
+        return ParameterValues.shared(List.of("tau1S", InstrumentResponse.FWHM, "shiftS", "amplitude", "background"),
                 new double[] {tauS, FWHM_S, shiftS, amplitude, background});
     }
 
@@ -86,7 +86,7 @@ class LikelihoodOptimumTest {
             hi = best + 2 * step;
         }
         List<ParameterSpec> shared = List.of(ParameterSpec.positive("tau1", "S", 1e-9),
-                ParameterSpec.positive("irfFwhm", "S", FWHM_S).fixedAt(FWHM_S), ParameterSpec.unbounded("shift", "S", 0, BIN_S).fixedAt(0));
+                ParameterSpec.positive("countIrfFwhm", "S", FWHM_S).fixedAt(FWHM_S), ParameterSpec.unbounded("shift", "S", 0, BIN_S).fixedAt(0));
         LikelihoodResult r = LikelihoodFitter.fit(shared, List.of(new HistogramPart(h, model, 0, HistogramPart.amplitudeFor(h, 1))),
                 List.of());
         assertThat(r.status()).isEqualTo(LikelihoodResult.Status.CONVERGED);
@@ -103,7 +103,7 @@ class LikelihoodOptimumTest {
         CountModel model = model(h);
         double[] n = h.counts();
         List<ParameterSpec> shared = List.of(ParameterSpec.positive("tau1", "S", 1e-9),
-                ParameterSpec.positive("irfFwhm", "S", FWHM_S).fixedAt(FWHM_S), ParameterSpec.unbounded("shift", "S", 0.01e-9, BIN_S));
+                ParameterSpec.positive("countIrfFwhm", "S", FWHM_S).fixedAt(FWHM_S), ParameterSpec.unbounded("shift", "S", 0.01e-9, BIN_S));
         LikelihoodResult r = LikelihoodFitter.fit(shared, List.of(new HistogramPart(h, model, Double.NaN,
                 HistogramPart.amplitudeFor(h, 1))), List.of());
         assertThat(r.status()).isEqualTo(LikelihoodResult.Status.CONVERGED);

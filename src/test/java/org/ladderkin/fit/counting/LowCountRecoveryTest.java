@@ -125,7 +125,7 @@ class LowCountRecoveryTest {
         DecayLaw law = tausS.length == 1 ? ExponentialDecay.single(tausS[0] * 1.2)
                 : ExponentialDecay.biexponential(tausS[0] * 1.2, tausS[1] * 0.8, 0.4);
         List<ParameterSpec> shared = new ArrayList<>(law.parameters());
-        shared.add(ParameterSpec.positive("irfFwhm", "S", FWHM_S).fixedAt(FWHM_S));
+        shared.add(ParameterSpec.positive("countIrfFwhm", "S", FWHM_S).fixedAt(FWHM_S));
         shared.add(ParameterSpec.unbounded("shift", "S", HistogramPart.risingEdgeS(h), BIN_S));
         CountModel model = new CountModel(0, h, 4, law, InstrumentResponse.gaussian(), periodS, null);
         HistogramPart part = new HistogramPart(h, model, heldBackground, HistogramPart.amplitudeFor(h, 1));
