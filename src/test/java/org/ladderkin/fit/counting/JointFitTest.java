@@ -24,7 +24,7 @@ import org.ladderkin.kinetics.rate.RadiativeScaling;
  * 0.3, 1 and 3): both data sets alone and together recover the truth, and together with smaller errors than either
  * alone, because the information of independent data sets adds.
  */
-class JointFitTest {
+public class JointFitTest {
 
     static final double SIGMA_M2 = 5e-19;
     static final double TAU_RAD_S = 20e-9;
@@ -35,7 +35,7 @@ class JointFitTest {
     static final double BIN_S = 100e-12;
     static final double FWHM_S = 80e-12;
 
-    static List<CountHistogram> histograms(long seed) {
+    public static List<CountHistogram> histograms(long seed) {
         SplittableRandom rng = new SplittableRandom(seed);
         LadderEmission law = new LadderEmission(TRUTH, CountingFit.SCALE, FLUENCES, List.of());
         ParameterValues p = ParameterValues.shared(List.of(CountingFit.SCALE, "tauRadS", "tauAuger2S", InstrumentResponse.FWHM,
