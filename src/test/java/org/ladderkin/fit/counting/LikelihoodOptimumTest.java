@@ -123,6 +123,28 @@ class LikelihoodOptimumTest {
                 Math.exp(x[1]), Math.exp(x[2]), x[3] * BIN_S))), 1e-9);
     }
 
+    @Test
+    void profileIntervalRisesByOneInMinusTwoLnLAndMatchesTheErrorOnAWellDeterminedLifetime() {
+        CountHistogram h = histogram(128, 2e-9, 2, 13);
+        CountModel model = model(h);
+        List<ParameterSpec> shared = List.of(ParameterSpec.positive("tau1", "S", 1e-9),
+                ParameterSpec.positive("countIrfFwhm", "S", FWHM_S).fixedAt(FWHM_S), ParameterSpec.unbounded("shift", "S", 0.01e-9, BIN_S));
+        LikelihoodResult r = LikelihoodFitter.fit(shared, List.of(new HistogramPart(h, model, Double.NaN,
+                HistogramPart.amplitudeFor(h, 1))), List.of("tau1S"));
+        var tau = r.estimate("tau1S");
+        var interval = r.profile("tau1S").orElseThrow();
+        assertThat(interval.lowerOpen() || interval.upperOpen()).isFalse();
+        // near-quadratic in τ at these counts: each side within 15 % of the standard error
+        assertThat(tau.value() - interval.lower()).isCloseTo(tau.stdError(), org.assertj.core.data.Percentage.withPercentage(15));
+        assertThat(interval.upper() - tau.value()).isCloseTo(tau.stdError(), org.assertj.core.data.Percentage.withPercentage(15));
+        // at the ends −2 ln L, minimised over the rest, is one above the optimum
+        List<ParameterSpec> held = List.of(ParameterSpec.positive("tau1", "S", 1e-9).fixedAt(interval.upper()),
+                shared.get(1), shared.get(2));
+        LikelihoodResult atEnd = LikelihoodFitter.fit(held, List.of(new HistogramPart(h, model, Double.NaN,
+                HistogramPart.amplitudeFor(h, 1))), List.of());
+        assertThat(atEnd.minus2LnL() - r.minus2LnL()).isCloseTo(1, org.assertj.core.data.Offset.offset(1e-4));
+    }
+
     private static double sum(double[] v) {
         double s = 0;
         for (double x : v) {
