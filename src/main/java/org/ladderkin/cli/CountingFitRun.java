@@ -19,11 +19,13 @@ import org.ladderkin.fit.Trace;
 import org.ladderkin.fit.counting.CountHistogram;
 import org.ladderkin.fit.counting.CountingFit;
 import org.ladderkin.fit.counting.InstrumentResponse;
+import org.ladderkin.fit.counting.IntegratedPlFit;
 import org.ladderkin.fit.counting.LikelihoodResult;
 import org.ladderkin.fit.counting.PileUp;
 import org.ladderkin.io.HistogramReader;
 import org.ladderkin.io.InputException;
 import org.ladderkin.io.InputProblem;
+import org.ladderkin.io.IntegratedPlReader;
 import org.ladderkin.io.IrfFileReader;
 import org.ladderkin.io.MissingValuePolicy;
 import org.ladderkin.io.ResolvedJson;
@@ -47,6 +49,12 @@ final class CountingFitRun {
     }
 
     static int run(FitCommand c, CountingOptions o) throws Exception {
+        if (o.integrated) {
+            if (o.on) {
+                throw new IllegalArgumentException("give either --counts (histograms) or --pl-integrated (integrated PL), not both");
+            }
+            return integrated(c);
+        }
         if (c.planFile != null || c.sidecar != null) {
             throw new IllegalArgumentException("--counts takes its excitations from --fluences (no --plan or --traces-json yet)");
         }
@@ -146,6 +154,57 @@ final class CountingFitRun {
             return ExitCodes.BAD_INPUT;
         }
         return ExitCodes.OK;
+    }
+
+    /** {@code fit --pl-integrated}: σ, and τ₂ with the biexciton emission yield when freed, from integrated PL. */
+    private static int integrated(FitCommand c) throws Exception {
+        if (c.dataFiles.size() != 1) {
+            throw new IllegalArgumentException("--pl-integrated takes one table, was given " + c.dataFiles.size());
+        }
+        IntegratedPlReader.Table t = IntegratedPlReader.read(c.dataFiles.get(0), c.dataFiles.get(0).toString());
+        Set<String> lifetimes = new LinkedHashSet<>();
+        for (String f : c.free == null ? List.of("scale", "tau-auger2") : c.free) {
+            if (!f.isBlank() && !f.trim().equals("scale")) {
+                lifetimes.add(org.ladderkin.fit.LadderFitSetup.LadderParameter.of(f).key());
+            }
+        }
+        double top = t.fluencesPerM2()[t.fluencesPerM2().length - 1];
+        double sigmaStart = c.crossSection == null ? AUTO_TOP_N / top : positive(c.crossSection, Dimension.AREA, "--cross-section");
+        IntegratedPlFit.Outcome o = IntegratedPlFit.fit(t.fluencesPerM2(), t.pl(), c.modelOptions.ladder(c.modelFile), sigmaStart,
+                lifetimes);
+        LikelihoodResult r = o.result();
+        ObjectNode root = ResolvedJson.object();
+        root.put("schema", "ladderkin.fit-pl-integrated/1");
+        root.put("status", r.status().name().toLowerCase(Locale.ROOT));
+        root.put("message", r.message());
+        ObjectNode shared = root.putObject("parameters");
+        for (ParameterEstimate e : r.estimates()) {
+            ParameterNaming.TradeKey k = ParameterNaming.trade(e.key());
+            shared.putObject(k.key()).put("value", e.value() * k.factor()).put("stdError", e.stdError() * k.factor())
+                    .put("fixed", e.fixed());
+        }
+        root.put("biexcitonEmissionYield", o.biexcitonYield());
+        root.put("chiSquare", r.chiSquare());
+        root.put("degreesOfFreedom", r.degreesOfFreedom());
+        PrintWriter out = c.format.equals("json") ? c.quiet.data() : c.quiet.summary();
+        if (c.outDir != null) {
+            Files.createDirectories(c.outDir);
+            ResolvedJson.write(c.outDir.resolve("fit-result.json"), root);
+        }
+        if (c.format.equals("json")) {
+            out.print(ResolvedJson.toText(root));
+        } else {
+            out.println("Integrated-PL fit: " + r.status().name().toLowerCase(Locale.ROOT).replace('_', ' ')
+                    + (r.message().isEmpty() ? "" : " — " + r.message()));
+            for (ParameterEstimate e : r.estimates()) {
+                ParameterNaming.TradeKey k = ParameterNaming.trade(e.key());
+                out.println(String.format(Locale.ROOT, "  %-16s %-12.5g %s", k.key(), e.value() * k.factor(),
+                        e.fixed() ? "(fixed)" : "± " + String.format(Locale.ROOT, "%.3g", e.stdError() * k.factor())));
+            }
+            out.println(String.format(Locale.ROOT, "  biexciton emission yield %.3g", o.biexcitonYield()));
+        }
+        out.flush();
+        return r.ok() ? ExitCodes.OK : ExitCodes.BAD_INPUT;
     }
 
     /** Photon fluences (photons/m²) of the named data sets, read as {@code fit --fluences} reads them. */

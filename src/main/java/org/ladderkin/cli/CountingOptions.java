@@ -13,6 +13,11 @@ final class CountingOptions {
                     + "or --irf-file from a scatterer)")
     boolean on;
 
+    @Option(names = "--pl-integrated",
+            description = "DATA are integrated PL against photon fluence (two columns, 'fluence (photons/cm2),pl'): fits σ "
+                    + "from the saturation and, freed, τ₂ and the biexciton emission yield")
+    boolean integrated;
+
     @Option(names = "--channel-width", paramLabel = "TIME", description = "bin width when the histograms' first column is 'channel'")
     String channelWidth;
 
@@ -27,4 +32,9 @@ final class CountingOptions {
 
     @Option(names = "--ta-fluences", split = ",", paramLabel = "X", description = "photon fluence of each --ta trace, in column order")
     List<String> taFluences;
+
+    /** Whether a photon-counting or integrated-PL fit was asked for. */
+    boolean requested() {
+        return on || integrated;
+    }
 }

@@ -161,7 +161,7 @@ final class FitCommand implements Callable<Integer> {
         if (!format.equals("text") && !format.equals("json")) {
             throw new IllegalArgumentException("--format must be text or json, was " + format);
         }
-        if (counting.on) {
+        if (counting.requested()) {
             if (outDir != null) {
                 AtomicFiles.checkWritableFolder(outDir);
             }

@@ -89,4 +89,25 @@ class CountingFitCommandTest {
         oneLine(MainTest.run("fit", f.toString(), "--counts", "--irf-file", irf.toString(), "--fluences", "1e14", "--quiet"),
                 "longer than the window");
     }
+
+    @Test
+    void integratedPlSaturationGivesTheCrossSection(@TempDir Path dir) throws Exception {
+        // 1 − e^{−σj} at σ = 4e-15 cm² (fast Auger: one photon per excited dot), no noise
+        StringBuilder b = new StringBuilder("fluence (photons/cm2),pl\n");
+        for (int i = 0; i < 10; i++) {
+            double j = 1e13 * Math.pow(2, i);
+            b.append(String.format(Locale.ROOT, "%.6g,%.8g%n", j, 500 * -Math.expm1(-4e-15 * j) * (1 + 0.002 * ((i % 3) - 1))));
+        }
+        Path f = dir.resolve("ipl.csv");
+        Files.writeString(f, b.toString());
+        MainTest.Run fit = MainTest.run("fit", f.toString(), "--pl-integrated", "--tau-rad", "20ns", "--tau-auger2", "1ps",
+                "--free", "scale", "--format", "json", "--quiet");
+        assertThat(fit.exit()).as(fit.err()).isZero();
+        JsonNode root = new ObjectMapper().readTree(fit.out());
+        assertThat(root.at("/parameters/crossSectionCm2/value").asDouble()).isCloseTo(4e-15,
+                org.assertj.core.data.Percentage.withPercentage(2));
+        assertThat(root.get("biexcitonEmissionYield").asDouble()).isBetween(0.0, 1e-3);
+        Files.writeString(f, "fluence (photons/cm2),pl\n1e13,1\n");
+        oneLine(MainTest.run("fit", f.toString(), "--pl-integrated", "--quiet"), "at least 3 fluences");
+    }
 }
