@@ -2,8 +2,10 @@ package org.ladderkin.fit.counting;
 
 /**
  * The classical dead-time (pile-up) correction of a start–stop counter that records only the first photon after each
- * excitation (P. B. Coates, J. Phys. E 1, 878 (1968)): a photon due in bin i is recorded only when no earlier bin of
- * the same cycle fired, so the recorded counts are n_i = N_i·(1 − Σ_{j&lt;i} n_j / N_E) for N_E excitation cycles. The
+ * excitation (P. B. Coates, J. Phys. E 1, 878 (1968), cited from memory; the relation itself, bin i seeing only
+ * E − Σ_{j&lt;i} n_j effective excitation cycles, was checked against a stored description of TCSPC pile-up): a photon
+ * due in bin i is recorded only when no earlier bin of the same cycle fired, so the recorded counts are
+ * n_i = N_i·(1 − Σ_{j&lt;i} n_j / N_E) for N_E excitation cycles. The
  * model applies it forwards to its expected counts; with it, count rates of a few per cent of the excitation rate
  * are fitted without the early-photon bias.
  *
