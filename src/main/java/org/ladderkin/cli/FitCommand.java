@@ -78,6 +78,9 @@ final class FitCommand implements Callable<Integer> {
     @Mixin
     ModelOptions modelOptions;
 
+    @Mixin
+    CountingOptions counting;
+
     @Option(names = "--fluences", split = ",", paramLabel = "X",
             description = "excitation per trace in column order: photon fluence (1e13 photons/cm²; bare numbers are read as "
                     + "set by --bare), pulse energy (2nJ) or energy fluence (0.3mJ/cm², needs --pump)")
@@ -160,6 +163,12 @@ final class FitCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         if (!format.equals("text") && !format.equals("json")) {
             throw new IllegalArgumentException("--format must be text or json, was " + format);
+        }
+        if (counting.requested()) {
+            if (outDir != null) {
+                AtomicFiles.checkWritableFolder(outDir);
+            }
+            return CountingFitRun.run(this, counting);
         }
         if (outDir != null) {
             AtomicFiles.checkWritableFolder(outDir);
