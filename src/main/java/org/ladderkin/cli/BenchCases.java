@@ -68,6 +68,61 @@ public final class BenchCases {
         return sum;
     }
 
+    /** Name of the whole-command case. */
+    public static final String SIMULATE_CASE = "simulate command, sweep 40 <N> at 80 MHz, 1000 delays, CSV";
+
+    /**
+     * The {@code simulate} arguments of that case: the 31-state model from flags, the 40 ⟨N⟩ of the sweep, 80 MHz,
+     * 1000 log-spaced delays 0.1 ps..12.5 ns, CSV.
+     */
+    public static String[] simulateArguments() {
+        StringBuilder ns = new StringBuilder();
+        for (double n : SWEEP_N) {
+            ns.append(ns.length() == 0 ? "" : ",").append(n);
+        }
+        return new String[] {"simulate", "--tau-rad", "20ns", "--radiative-scaling", "statistical", "--tau-auger2",
+            "50ps", "--auger-scaling", "statistical", "--degeneracy", "2", "--n-avg", ns.toString(), "--rep-rate",
+            "80MHz", "--delays", "0.1ps..12.5ns:1000log", "--format", "csv"};
+    }
+
+    /**
+     * The whole {@code simulate} command path in process (argument parsing, model, steady states, grid, CSV text)
+     * with the text counted instead of printed; returns the character count.
+     */
+    public static double simulateCommand() {
+        java.io.StringWriter err = new java.io.StringWriter();
+        CountingWriter text = new CountingWriter();
+        int code = Main.commandLine(new java.io.PrintWriter(text), new java.io.PrintWriter(err))
+                .execute(simulateArguments());
+        if (code != 0) {
+            throw new IllegalStateException("simulate failed in the benchmark: " + err);
+        }
+        return text.count;
+    }
+
+    /** A writer that only counts what it is given. */
+    private static final class CountingWriter extends java.io.Writer {
+        private long count;
+
+        @Override
+        public void write(char[] buf, int off, int len) {
+            count += len;
+        }
+
+        @Override
+        public void write(String str, int off, int len) {
+            count += len;
+        }
+
+        @Override
+        public void flush() {
+        }
+
+        @Override
+        public void close() {
+        }
+    }
+
     private static double[] logSpaced(double from, double to, int count) {
         double[] d = new double[count];
         for (int i = 0; i < count; i++) {
