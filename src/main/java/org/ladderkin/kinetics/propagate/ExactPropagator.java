@@ -606,6 +606,7 @@ public final class ExactPropagator implements Propagator {
                 walks[c] = cacheable(clusters.get(c), nt) ? null : new ClusterWalk(clusters.get(c));
             }
             double[][][] clusterE = new double[clusters.size()][][];
+            double[] y = new double[n];
             for (int j = 0; j < nt; j++) {
                 double[] f = singleFactor[j];
                 int a = active[j];
@@ -615,6 +616,21 @@ public final class ExactPropagator implements Propagator {
                 }
                 for (int st = 0; st < ns; st++) {
                     double[] wp = wps[st];
+                    // exp(B_c t)·W·p of each cluster, once per start (every observable reads it)
+                    for (int c = 0; c < clusterE.length; c++) {
+                        double[][] e = clusterE[c];
+                        if (e == null) {
+                            continue;
+                        }
+                        int[] mem = clusters.get(c).members;
+                        for (int x = 0; x < mem.length; x++) {
+                            double yx = 0;
+                            for (int z = 0; z < mem.length; z++) {
+                                yx += e[x][z] * wp[mem[z]];
+                            }
+                            y[mem[x]] = yx;
+                        }
+                    }
                     for (int r = 0; r < no; r++) {
                         double[] ar = amp[st * no + r];
                         double s = 0;
@@ -622,17 +638,12 @@ public final class ExactPropagator implements Propagator {
                             s += ar[k] * f[k];
                         }
                         for (int c = 0; c < clusterE.length; c++) {
-                            double[][] e = clusterE[c];
-                            if (e == null) {
+                            if (clusterE[c] == null) {
                                 continue;
                             }
                             int[] mem = clusters.get(c).members;
                             for (int x = 0; x < mem.length; x++) {
-                                double yx = 0;
-                                for (int z = 0; z < mem.length; z++) {
-                                    yx += e[x][z] * wp[mem[z]];
-                                }
-                                s += u[r][mem[x]] * yx;
+                                s += u[r][mem[x]] * y[mem[x]];
                             }
                         }
                         out[st][r][j] = s;
