@@ -50,8 +50,9 @@ public final class BenchCases {
     }
 
     /**
-     * Cases 2 and 3: the 40-value ⟨N⟩ sweep, each in the periodic steady state at the given repetition rate with its
-     * bleach and PL trace; returns a checksum so the work cannot be optimised away.
+     * Cases 2 and 3: the 40-value ⟨N⟩ sweep, each in the periodic steady state at the given repetition rate, with the
+     * bleach and PL traces of all ⟨N⟩ from one product with the shared delay grid (as {@code simulate} does it);
+     * returns a checksum so the work cannot be optimised away.
      *
      * @param withConvergence also compute |λ₂| and pulses-to-1 % for every ⟨N⟩
      */
@@ -59,13 +60,73 @@ public final class BenchCases {
         KineticModel model = ladder31();
         LadderKinetics k = LadderKinetics.on(model, model.space(30));
         double sum = 0;
-        for (double n : SWEEP_N) {
-            PulseExcitation pulse = new PulseExcitation.Poisson(n);
-            SteadyState ss = k.steadyState(pulse, 1 / repetitionRateHz, withConvergence);
-            Trace t = k.trace(ss.afterPulse(), DELAYS_S);
-            sum += t.bleach()[0] + t.photoluminescencePerS()[999] + ss.residualExcitedFraction();
+        double[][] starts = new double[SWEEP_N.length][];
+        for (int i = 0; i < SWEEP_N.length; i++) {
+            SteadyState ss = k.steadyState(new PulseExcitation.Poisson(SWEEP_N[i]), 1 / repetitionRateHz, withConvergence);
+            starts[i] = ss.afterPulse().probabilities();
+            sum += ss.residualExcitedFraction();
+        }
+        double[][][] traces = k.propagator().onGrid(DELAYS_S)
+                .observeAll(new double[][] {k.bleachObservable(), k.photoluminescenceObservable()}, starts);
+        for (double[][] t : traces) {
+            sum += t[0][0] + t[1][999];
         }
         return sum;
+    }
+
+    /** Name of the whole-command case. */
+    public static final String SIMULATE_CASE = "simulate command, sweep 40 <N> at 80 MHz, 1000 delays, CSV";
+
+    /**
+     * The {@code simulate} arguments of that case: the 31-state model from flags, the 40 ⟨N⟩ of the sweep, 80 MHz,
+     * 1000 log-spaced delays 0.1 ps..12.5 ns, CSV.
+     */
+    public static String[] simulateArguments() {
+        StringBuilder ns = new StringBuilder();
+        for (double n : SWEEP_N) {
+            ns.append(ns.length() == 0 ? "" : ",").append(n);
+        }
+        return new String[] {"simulate", "--tau-rad", "20ns", "--radiative-scaling", "statistical", "--tau-auger2",
+            "50ps", "--auger-scaling", "statistical", "--degeneracy", "2", "--n-avg", ns.toString(), "--rep-rate",
+            "80MHz", "--delays", "0.1ps..12.5ns:1000log", "--format", "csv"};
+    }
+
+    /**
+     * The whole {@code simulate} command path in process (argument parsing, model, steady states, grid, CSV text)
+     * with the text counted instead of printed; returns the character count.
+     */
+    public static double simulateCommand() {
+        java.io.StringWriter err = new java.io.StringWriter();
+        CountingWriter text = new CountingWriter();
+        int code = Main.commandLine(new java.io.PrintWriter(text), new java.io.PrintWriter(err))
+                .execute(simulateArguments());
+        if (code != 0) {
+            throw new IllegalStateException("simulate failed in the benchmark: " + err);
+        }
+        return text.count;
+    }
+
+    /** A writer that only counts what it is given. */
+    private static final class CountingWriter extends java.io.Writer {
+        private long count;
+
+        @Override
+        public void write(char[] buf, int off, int len) {
+            count += len;
+        }
+
+        @Override
+        public void write(String str, int off, int len) {
+            count += len;
+        }
+
+        @Override
+        public void flush() {
+        }
+
+        @Override
+        public void close() {
+        }
     }
 
     private static double[] logSpaced(double from, double to, int count) {

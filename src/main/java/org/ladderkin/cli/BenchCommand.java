@@ -1,12 +1,17 @@
 package org.ladderkin.cli;
 
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.lang.management.ManagementFactory;
 import java.lang.management.MemoryPoolMXBean;
 import java.lang.management.MemoryType;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import java.util.function.DoubleSupplier;
+import org.ladderkin.io.ResolvedJson;
 import org.ladderkin.kinetics.KineticModel;
 import org.ladderkin.kinetics.LadderKinetics;
 import picocli.CommandLine.Command;
@@ -24,7 +29,8 @@ import picocli.CommandLine.Spec;
         header = "Time the kinetics engine on its speed cases.",
         description = "Time the kinetics engine on its four speed cases (31-state ladder, Nmax = 30; 1000 log delays):"
             + " one trace after one pulse; 40-value ⟨N⟩ sweeps with pulse-train steady state at 1 kHz and 80"
-            + " MHz; the cooling-resolved model at Nmax = 20. With --planner PLAN.json also the desktop"
+            + " MHz; the whole simulate command for that 80 MHz sweep (parse, grid, CSV text); the cooling-resolved"
+            + " model at Nmax = 20. With --planner PLAN.json also the desktop"
             + " planner's update after an edit (prediction, and prediction plus chart build). Prints ms per case"
             + " and peak heap used.")
 final class BenchCommand implements Callable<Integer> {
@@ -41,52 +47,86 @@ final class BenchCommand implements Callable<Integer> {
     @Option(names = "--skip-cooling", description = "skip the cooling-resolved case")
     boolean skipCooling;
 
+    @Option(names = "--format", paramLabel = "text|json", defaultValue = "text",
+            description = "text table or JSON {\"cases\": [{\"name\", \"medianMs\", \"minMs\", \"maxMs\"}], \"peakHeapMb\"}"
+                + " (default ${DEFAULT-VALUE})")
+    String format;
+
     @Option(names = "--planner", paramLabel = "PLAN.json",
             description = "also time the desktop planner's update after an edit on this plan (prediction and chart build)")
     java.nio.file.Path plannerPlan;
+
+    /** One timed case: median, fastest and slowest of the timed runs (ms). */
+    record Timing(String name, double medianMs, double minMs, double maxMs) {
+    }
 
     @Override
     public Integer call() {
         if (repeats < 1 || repeats > 10_000) {
             throw new IllegalArgumentException("--repeats must be between 1 and 10000, was " + repeats);
         }
+        if (!format.equals("text") && !format.equals("json")) {
+            throw new IllegalArgumentException("--format must be text or json, was " + format);
+        }
+        boolean json = format.equals("json");
         // read the plan first: a bad file should fail before a minute of timing
         PlannerUpdateBench update = plannerPlan == null ? null
                 : new PlannerUpdateBench(org.ladderkin.io.PlanCodec.read(plannerPlan));
-        PrintWriter out = quiet.summary();
+        PrintWriter out = json ? new PrintWriter(java.io.Writer.nullWriter()) : quiet.summary();
+        List<Timing> cases = new ArrayList<>();
         resetPeaks();
         KineticModel ladder = BenchCases.ladder31();
         LadderKinetics built = LadderKinetics.on(ladder, ladder.space(30));
         out.println("case                                              median ms");
-        row(out, "trace, 31 states, 1000 delays (engine built)", time(() -> BenchCases.traceOn(built, 3).bleach()[0]));
-        row(out, "trace, 31 states, 1000 delays (incl. set-up)", time(() -> BenchCases.singleTrace(ladder).bleach()[0]));
-        row(out, "sweep 40 <N>, steady state at 1 kHz", time(() -> BenchCases.sweep(1e3, false)));
-        row(out, "sweep 40 <N>, steady state at 80 MHz", time(() -> BenchCases.sweep(80e6, false)));
-        row(out, "sweep 40 <N> at 80 MHz, with pulses-to-1%", time(() -> BenchCases.sweep(80e6, true)));
+        row(out, cases, "trace, 31 states, 1000 delays (engine built)", () -> BenchCases.traceOn(built, 3).bleach()[0]);
+        row(out, cases, "trace, 31 states, 1000 delays (incl. set-up)", () -> BenchCases.singleTrace(ladder).bleach()[0]);
+        row(out, cases, "sweep 40 <N>, steady state at 1 kHz", () -> BenchCases.sweep(1e3, false));
+        row(out, cases, "sweep 40 <N>, steady state at 80 MHz", () -> BenchCases.sweep(80e6, false));
+        row(out, cases, "sweep 40 <N> at 80 MHz, with pulses-to-1%", () -> BenchCases.sweep(80e6, true));
+        row(out, cases, BenchCases.SIMULATE_CASE, BenchCases::simulateCommand);
         KineticModel cooling = BenchCases.cooling21();
         if (skipCooling) {
             out.println("cooling-resolved case skipped (--skip-cooling)");
         } else {
             LadderKinetics hot = LadderKinetics.on(cooling, cooling.space(cooling.fixedNMax()));
-            row(out, "cooling trace, 231 states (engine built)", time(() -> BenchCases.traceOn(hot, 3).bleach()[0]));
-            row(out, "cooling trace, 231 states (incl. set-up)", time(() -> BenchCases.singleTrace(cooling).bleach()[0]));
+            row(out, cases, "cooling trace, 231 states (engine built)", () -> BenchCases.traceOn(hot, 3).bleach()[0]);
+            row(out, cases, "cooling trace, 231 states (incl. set-up)", () -> BenchCases.singleTrace(cooling).bleach()[0]);
         }
         if (update != null) {
-            row(out, "planner update after an edit (prediction)", time(update::predict));
-            row(out, "planner update after an edit (incl. chart build)", time(update::predictAndBuildCharts));
+            row(out, cases, "planner update after an edit (prediction)", update::predict);
+            row(out, cases, "planner update after an edit (incl. chart build)", update::predictAndBuildCharts);
         }
-        out.printf(Locale.ROOT, "peak heap used: %.1f MB (max heap %.0f MB)%n", peakHeapMb(),
+        double peak = peakHeapMb();
+        out.printf(Locale.ROOT, "peak heap used: %.1f MB (max heap %.0f MB)%n", peak,
                 Runtime.getRuntime().maxMemory() / 1048576.0);
         out.flush();
+        if (json) {
+            ObjectNode root = ResolvedJson.object();
+            ArrayNode a = root.putArray("cases");
+            for (Timing t : cases) {
+                ObjectNode c = a.addObject();
+                c.put("name", t.name());
+                c.put("medianMs", t.medianMs());
+                c.put("minMs", t.minMs());
+                c.put("maxMs", t.maxMs());
+            }
+            root.put("peakHeapMb", peak);
+            PrintWriter data = quiet.data();
+            data.print(ResolvedJson.toText(root));
+            data.flush();
+        }
         return ExitCodes.OK;
     }
 
-    private static void row(PrintWriter out, String name, double ms) {
-        out.printf(Locale.ROOT, "%-50s %9.3f%n", name, ms);
+    private void row(PrintWriter out, List<Timing> cases, String name, DoubleSupplier work) {
+        Timing t = time(name, work);
+        cases.add(t);
+        out.printf(Locale.ROOT, "%-50s %9.3f%n", name, t.medianMs());
+        out.flush();
     }
 
-    /** Median wall time in ms after warm-up runs. */
-    private double time(DoubleSupplier work) {
+    /** Wall times in ms after warm-up runs. */
+    private Timing time(String name, DoubleSupplier work) {
         double sink = 0;
         long warmEnd = System.nanoTime() + 300_000_000L;
         int warm = 0;
@@ -104,7 +144,7 @@ final class BenchCommand implements Callable<Integer> {
             throw new IllegalStateException("benchmark produced NaN");
         }
         java.util.Arrays.sort(ms);
-        return ms[repeats / 2];
+        return new Timing(name, ms[repeats / 2], ms[0], ms[repeats - 1]);
     }
 
     private static void resetPeaks() {

@@ -1,18 +1,17 @@
 package org.ladderkin.cli;
 
-import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.fasterxml.jackson.core.JsonGenerator;
+import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.concurrent.Callable;
-import org.ladderkin.io.ResolvedJson;
+import org.ladderkin.io.JsonStream;
+import org.ladderkin.io.NumberText;
 import org.ladderkin.kinetics.KineticModel;
 import org.ladderkin.kinetics.LadderKinetics;
 import org.ladderkin.kinetics.Populations;
-import org.ladderkin.kinetics.Trace;
 import org.ladderkin.kinetics.train.PulseExcitation;
 import org.ladderkin.kinetics.train.SteadyState;
 import org.ladderkin.observe.DelayTraces;
@@ -120,29 +119,31 @@ final class SimulateCommand implements Callable<Integer> {
             pulses.add(eta == null ? new PulseExcitation.Poisson(mean) : new PulseExcitation.Multiplication(mean, eta));
         }
         LadderKinetics kinetics = LadderKinetics.forPulses(model, pulses.toArray(PulseExcitation[]::new));
-        List<Trace> traces = new ArrayList<>();
         List<SteadyState> states = new ArrayList<>();
-        List<List<SimulatedObservables.Column>> columns = new ArrayList<>();
+        List<Populations> afters = new ArrayList<>();
+        List<String> labels = new ArrayList<>();
         SimulatedObservables.Inputs extra = extraInputs();
+        // |λ₂| and pulses-to-1 % cost a dense eigen-decomposition per ⟨N⟩ and only the JSON output prints them
+        boolean convergence = format.equals("json");
         for (int i = 0; i < pulses.size(); i++) {
             PulseExcitation p = pulses.get(i);
-            Populations after;
             SteadyState ss = null;
             if (Double.isNaN(periodS)) {
-                after = kinetics.applyPulse(Populations.ground(kinetics.space()), p);
+                afters.add(kinetics.applyPulse(Populations.ground(kinetics.space()), p));
             } else {
-                ss = kinetics.steadyState(p, periodS, true);
-                after = ss.afterPulse();
+                ss = kinetics.steadyState(p, periodS, convergence);
+                afters.add(ss.afterPulse());
             }
-            traces.add(kinetics.trace(after, delaysS));
             states.add(ss);
-            columns.add(SimulatedObservables.columns(observables, nAvg.get(i).trim(), kinetics, p, after, delaysS, extra));
+            labels.add(nAvg.get(i).trim());
         }
+        List<List<SimulatedObservables.Column>> columns = SimulatedObservables.columnsForAll(observables, labels,
+                kinetics, pulses, afters, delaysS, extra);
         PrintWriter out = quiet.data();
         if (format.equals("csv")) {
             writeCsv(out, delaysS, columns);
         } else {
-            out.println(ResolvedJson.toText(json(kinetics, periodS, delaysS, traces, states, columns)));
+            writeJson(out, kinetics, periodS, delaysS, labels, states, columns);
         }
         out.flush();
         return ExitCodes.OK;
@@ -201,66 +202,88 @@ final class SimulateCommand implements Callable<Integer> {
             throw new IllegalArgumentException(flag + ": " + e.getMessage());
         }
     }
-    private void writeCsv(PrintWriter out, double[] delaysS, List<List<SimulatedObservables.Column>> columns) {
-        StringBuilder header = new StringBuilder("delay_ps");
+    /** Characters gathered before they go to the output: the table streams, it is never held whole. */
+    private static final int CHUNK = 1 << 16;
+
+    private static void writeCsv(PrintWriter out, double[] delaysS, List<List<SimulatedObservables.Column>> columns) {
+        String nl = System.lineSeparator();
+        StringBuilder buf = new StringBuilder(CHUNK + 4096);
+        buf.append("delay_ps");
+        List<double[]> values = new ArrayList<>();
         for (List<SimulatedObservables.Column> perN : columns) {
             for (SimulatedObservables.Column c : perN) {
-                header.append(',').append(c.name().contains(",") ? "\"" + c.name() + "\"" : c.name());
+                buf.append(',').append(c.name().contains(",") ? "\"" + c.name() + "\"" : c.name());
+                values.add(c.values());
             }
         }
-        out.println(header);
-        StringBuilder row = new StringBuilder();
+        buf.append(nl);
         for (int j = 0; j < delaysS.length; j++) {
-            row.setLength(0);
-            row.append(num(delaysS[j] * 1e12));
-            for (List<SimulatedObservables.Column> perN : columns) {
-                for (SimulatedObservables.Column c : perN) {
-                    row.append(',').append(num(c.values()[j]));
-                }
+            NumberText.appendG15(buf, delaysS[j] * 1e12);
+            for (double[] v : values) {
+                buf.append(',');
+                NumberText.appendG15(buf, v[j]);
             }
-            out.println(row);
+            buf.append(nl);
+            if (buf.length() >= CHUNK) {
+                out.append(buf);
+                buf.setLength(0);
+            }
         }
+        out.append(buf);
     }
 
-    private ObjectNode json(LadderKinetics kinetics, double periodS, double[] delaysS, List<Trace> traces,
-                            List<SteadyState> states, List<List<SimulatedObservables.Column>> columns) {
-        ObjectNode root = ResolvedJson.object();
-        root.put("schema", "ladderkin.simulation/1");
-        root.put("states", kinetics.space().size());
-        root.put("nMax", kinetics.space().nMax());
-        if (!Double.isNaN(periodS)) {
-            root.put("repetitionRateHz", 1 / periodS);
-        }
-        ArrayNode d = root.putArray("delaysPs");
-        for (double x : delaysS) {
-            d.add(x * 1e12);
-        }
-        ArrayNode series = root.putArray("series");
-        for (int i = 0; i < traces.size(); i++) {
-            ObjectNode s = series.addObject();
-            s.put("nAvg", nAvg.get(i).trim());
-            SteadyState ss = states.get(i);
-            if (ss != null) {
-                ObjectNode o = s.putObject("steadyState");
-                o.put("residualExcitedFractionAtNextPulse", ss.residualExcitedFraction());
-                o.put("chargedFractionAtNextPulse", ss.chargedFraction());
-                o.put("secondEigenvalueModulus", ss.secondEigenvalueModulus());
-                o.put("pulsesToWithinOnePercent", ss.pulsesToOnePercent());
+    /** The ladderkin.simulation/1 document, streamed (same text as building it as a tree and printing that). */
+    private static void writeJson(PrintWriter out, LadderKinetics kinetics, double periodS, double[] delaysS,
+                                  List<String> labels, List<SteadyState> states,
+                                  List<List<SimulatedObservables.Column>> columns) throws IOException {
+        try (JsonGenerator g = JsonStream.open(out)) {
+            g.writeStartObject();
+            g.writeStringField("schema", "ladderkin.simulation/1");
+            g.writeNumberField("states", kinetics.space().size());
+            g.writeNumberField("nMax", kinetics.space().nMax());
+            if (!Double.isNaN(periodS)) {
+                g.writeNumberField("repetitionRateHz", 1 / periodS);
             }
-            ObjectNode cols = s.putObject("columns");
-            for (SimulatedObservables.Column c : columns.get(i)) {
-                ArrayNode a = cols.putArray(c.name());
-                for (double x : c.values()) {
-                    a.add(x);
+            g.writeArrayFieldStart("delaysPs");
+            for (double x : delaysS) {
+                g.writeNumber(x * 1e12);
+            }
+            g.writeEndArray();
+            g.writeArrayFieldStart("series");
+            for (int i = 0; i < labels.size(); i++) {
+                g.writeStartObject();
+                g.writeStringField("nAvg", labels.get(i));
+                SteadyState ss = states.get(i);
+                if (ss != null) {
+                    g.writeObjectFieldStart("steadyState");
+                    g.writeNumberField("residualExcitedFractionAtNextPulse", ss.residualExcitedFraction());
+                    g.writeNumberField("chargedFractionAtNextPulse", ss.chargedFraction());
+                    g.writeNumberField("secondEigenvalueModulus", ss.secondEigenvalueModulus());
+                    g.writeNumberField("pulsesToWithinOnePercent", ss.pulsesToOnePercent());
+                    g.writeEndObject();
                 }
+                g.writeObjectFieldStart("columns");
+                for (SimulatedObservables.Column c : columns.get(i)) {
+                    g.writeArrayFieldStart(c.name());
+                    for (double x : c.values()) {
+                        g.writeNumber(x);
+                    }
+                    g.writeEndArray();
+                }
+                g.writeEndObject();
+                g.writeEndObject();
             }
+            g.writeEndArray();
+            g.writeEndObject();
         }
-        return root;
+        // the tree printer ended the text with a line separator and println added one more
+        out.print(System.lineSeparator());
+        out.print(System.lineSeparator());
     }
 
     /** 15 significant digits, locale-independent. */
     static String num(double x) {
-        return String.format(Locale.ROOT, "%.15g", x);
+        return NumberText.g15(x);
     }
 
     private KineticModel model() {

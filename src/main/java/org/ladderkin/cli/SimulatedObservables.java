@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.ladderkin.kinetics.LadderKinetics;
+import org.ladderkin.kinetics.Observables;
 import org.ladderkin.kinetics.Populations;
 import org.ladderkin.kinetics.train.PulseExcitation;
 import org.ladderkin.observe.DelayTraces;
@@ -39,6 +40,51 @@ final class SimulatedObservables {
 
     private SimulatedObservables() {
     }
+
+    /**
+     * The columns for every ⟨N⟩ at once ([⟨N⟩][column]). Bleach, PL and charged fraction of all ⟨N⟩ come from one
+     * product of the shared delay grid with all starting distributions; the other signals are computed per ⟨N⟩.
+     */
+    static List<List<Column>> columnsForAll(List<String> observables, List<String> nLabels, LadderKinetics kin,
+                                            List<PulseExcitation> pulses, List<Populations> afters, double[] delaysS,
+                                            Inputs in) {
+        List<double[]> linear = new ArrayList<>();
+        List<String> linearNames = new ArrayList<>();
+        for (String o : observables) {
+            switch (o) {
+                case "bleach" -> linear.add(kin.bleachObservable());
+                case "pl" -> linear.add(kin.photoluminescenceObservable());
+                case "charged" -> linear.add(Observables.charged(kin.space()));
+                default -> {
+                    continue;
+                }
+            }
+            linearNames.add(o);
+        }
+        double[][] starts = new double[afters.size()][];
+        for (int i = 0; i < starts.length; i++) {
+            starts[i] = afters.get(i).probabilities();
+        }
+        double[][][] traces = linear.isEmpty() ? null
+                : kin.propagator().onGrid(delaysS).observeAll(linear.toArray(double[][]::new), starts);
+        List<List<Column>> out = new ArrayList<>();
+        for (int i = 0; i < starts.length; i++) {
+            List<Column> perN = new ArrayList<>();
+            for (String o : observables) {
+                int li = linearNames.indexOf(o);
+                if (li >= 0) {
+                    perN.add(new Column(LINEAR_PREFIX.get(o) + nLabels.get(i), traces[i][li]));
+                } else {
+                    perN.addAll(columns(List.of(o), nLabels.get(i), kin, pulses.get(i), afters.get(i), delaysS, in));
+                }
+            }
+            out.add(perN);
+        }
+        return out;
+    }
+
+    private static final java.util.Map<String, String> LINEAR_PREFIX = java.util.Map.of(
+            "bleach", "bleach@N=", "pl", "pl@N=", "charged", "charged@N=");
 
     static List<Column> columns(List<String> observables, String nLabel, LadderKinetics kin, PulseExcitation pulse,
                                 Populations after, double[] delaysS, Inputs in) {

@@ -2,7 +2,11 @@ package org.ladderkin.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
@@ -24,6 +28,35 @@ class BenchCommandTest {
             assertThat(Double.parseDouble(m.group(1))).as(row).isPositive();
         }
         assertThat(r.out()).contains("cooling-resolved case skipped").contains("peak heap used");
+    }
+
+    @Test
+    void jsonListsEveryCaseWithMedianMinAndMaxAndThePeakHeap() throws Exception {
+        MainTest.Run r = MainTest.run("bench", "--repeats", "3", "--skip-cooling", "--format", "json");
+        assertThat(r.exit()).as(r.err()).isEqualTo(ExitCodes.OK);
+        JsonNode root = new ObjectMapper().readTree(r.out());
+        assertThat(root.fieldNames()).toIterable().containsExactly("cases", "peakHeapMb");
+        assertThat(root.get("peakHeapMb").asDouble()).isPositive();
+        List<String> names = new ArrayList<>();
+        for (JsonNode c : root.get("cases")) {
+            assertThat(c.fieldNames()).toIterable().containsExactly("name", "medianMs", "minMs", "maxMs");
+            names.add(c.get("name").asText());
+            double min = c.get("minMs").asDouble();
+            assertThat(min).isPositive();
+            assertThat(c.get("medianMs").asDouble()).isBetween(min, c.get("maxMs").asDouble());
+        }
+        assertThat(names).contains("sweep 40 <N>, steady state at 80 MHz", "trace, 31 states, 1000 delays (incl. set-up)",
+                BenchCases.SIMULATE_CASE);
+        assertThat(names).filteredOn(n -> n.contains("sweep") && n.contains("80 MHz")).isNotEmpty();
+    }
+
+    @Test
+    void theSimulateCaseRunsTheWholeCommand() {
+        // the case's text is what the command prints for its arguments
+        MainTest.Run r = MainTest.run(BenchCases.simulateArguments());
+        assertThat(r.exit()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(BenchCases.simulateCommand()).isEqualTo(r.out().length());
+        assertThat(r.out().lines().count()).isEqualTo(1001);
     }
 
     @Test

@@ -15,7 +15,9 @@ import java.util.List;
  * with Q = V·B·V⁻¹ is found by back-substitution in which B keeps only within-cluster couplings and every division
  * is by a difference of eigenvalues from different clusters (never by a near-zero one). Then
  * exp(Qt) = V·exp(Bt)·V⁻¹, where singleton clusters contribute e^{λt} and each larger cluster its small triangular
- * block exponential e^{μt}·exp((B_c − μ)t) by {@link PadeExponential}. Exactly and nearly coincident rates are
+ * block exponential e^{μt}·exp((B_c − μ)t), by divided differences ({@link ClusterExponential}, a few hundred flops
+ * per time for blocks up to {@value ClusterExponential#MAX_SIZE} states) or {@link PadeExponential} for larger
+ * blocks. Exactly and nearly coincident rates are
  * therefore handled without the breakdown of the Bateman closed form.
  *
  * <p>The conditioning of V grows as rates crowd together. If ‖V‖∞·‖V⁻¹‖∞ exceeds {@link #GROWTH_LIMIT}, δ is
@@ -27,8 +29,10 @@ import java.util.List;
  * clusters almost everything and each delay costs a dense Padé exponential of the big block (tens of ms at 231
  * states). Correct, but slow: the engine uses {@link SettlingPropagator} for such ladders instead.
  *
- * <p>Many delays are cheap: {@link #onGrid} precomputes the mode factors for a time grid once; each observable trace
- * then costs O(delays × active modes), modes with λt &lt; −745 (underflow) being skipped.
+ * <p>Many delays are cheap: {@link #onGrid} precomputes the mode factors for a time grid once (and keeps the last
+ * grid, so every caller asking for the same delays shares it); each observable trace then costs O(delays × active
+ * modes), modes with λt &lt; −745 (underflow) being skipped, and many starting vectors go through
+ * {@link Grid#observeAll} as one product.
  */
 public final class ExactPropagator implements Propagator {
 
@@ -52,9 +56,14 @@ public final class ExactPropagator implements Propagator {
     private final double[] singleLambda;
     private final List<Cluster> clusters;
     private boolean conservative;
+    /** The last grid built, shared by every caller asking for the same times (a grid is immutable once built). */
+    private volatile Grid lastGrid;
 
-    /** A group of (nearly) coincident eigenvalues with its triangular block of B. */
-    private record Cluster(int[] members, double[][] block, double muPerS) {
+    /**
+     * A group of (nearly) coincident eigenvalues with its triangular block of B; {@code exact} is the block's
+     * divided-difference exponential (null for blocks too large for it, which use Padé).
+     */
+    private record Cluster(int[] members, double[][] block, double muPerS, ClusterExponential exact) {
     }
 
     private ExactPropagator(int n, double[][] v, double[][] w, double delta, double growth, int[] singleIndex,
@@ -168,7 +177,8 @@ public final class ExactPropagator implements Propagator {
                 for (int r = 0; r < idx.length; r++) {
                     block[r][r] -= mu;
                 }
-                clusters.add(new Cluster(idx, block, mu));
+                clusters.add(new Cluster(idx, block, mu,
+                        idx.length <= ClusterExponential.MAX_SIZE ? new ClusterExponential(block) : null));
             }
         }
         singles.sort((x, y) -> Double.compare(q[y][y], q[x][x]));
@@ -427,8 +437,14 @@ public final class ExactPropagator implements Propagator {
         if (x < UNDERFLOW) {
             return null;
         }
-        double[][] e = PadeExponential.exp(c.block, tS);
         double f = Math.exp(x);
+        if (c.exact != null) {
+            int m = c.members.length;
+            double[][] e = new double[m][m];
+            c.exact.exp(tS, f, e, new double[1 << m]);
+            return e;
+        }
+        double[][] e = PadeExponential.exp(c.block, tS);
         for (double[] row : e) {
             for (int j = 0; j < row.length; j++) {
                 row[j] *= f;
@@ -462,10 +478,16 @@ public final class ExactPropagator implements Propagator {
     /** Precomputes the mode factors at the given times (s, each ≥ 0) for cheap repeated traces. */
     @Override
     public Grid onGrid(double[] timesS) {
+        Grid last = lastGrid;
+        if (last != null && Arrays.equals(last.timesS, timesS)) {
+            return last;
+        }
         for (double t : timesS) {
             requireTime(t);
         }
-        return new Grid(timesS.clone());
+        Grid grid = new Grid(timesS.clone());
+        lastGrid = grid;
+        return grid;
     }
 
     private static void requireTime(double tS) {
@@ -526,15 +548,17 @@ public final class ExactPropagator implements Propagator {
          */
         @Override
         public double[][] observe(double[][] observables, double[] p0) {
+            return observeAll(observables, new double[][] {p0})[0];
+        }
+
+        /**
+         * The traces o_r·p_s(t_j) for every start p_s and observable o_r ([start][observable][time]): the amplitudes
+         * of all (start, observable) pairs times the grid's mode factors, one matrix product.
+         */
+        @Override
+        public double[][][] observeAll(double[][] observables, double[][] starts) {
             int no = observables.length;
-            double[] wp = new double[n];
-            for (int i = 0; i < n; i++) {
-                double s = 0;
-                for (int k = i; k < n; k++) {
-                    s += w[i][k] * p0[k];
-                }
-                wp[i] = s;
-            }
+            int ns = starts.length;
             double[][] u = new double[no][n];
             for (int r = 0; r < no; r++) {
                 double[] o = observables[r];
@@ -549,46 +573,81 @@ public final class ExactPropagator implements Propagator {
                     u[r][k] = s;
                 }
             }
-            double[][] amp = new double[no][singleIndex.length];
-            for (int r = 0; r < no; r++) {
-                for (int k = 0; k < singleIndex.length; k++) {
-                    amp[r][k] = u[r][singleIndex[k]] * wp[singleIndex[k]];
+            double[][] wps = new double[ns][];
+            for (int st = 0; st < ns; st++) {
+                double[] p0 = starts[st];
+                if (p0.length != n) {
+                    throw new IllegalArgumentException("state vector has " + p0.length + " entries, generator " + n);
+                }
+                double[] wp = new double[n];
+                for (int i = 0; i < n; i++) {
+                    double s = 0;
+                    for (int k = i; k < n; k++) {
+                        s += w[i][k] * p0[k];
+                    }
+                    wp[i] = s;
+                }
+                wps[st] = wp;
+            }
+            int rows = ns * no;
+            double[][] amp = new double[rows][singleIndex.length];
+            for (int st = 0; st < ns; st++) {
+                for (int r = 0; r < no; r++) {
+                    double[] a = amp[st * no + r];
+                    for (int k = 0; k < singleIndex.length; k++) {
+                        a[k] = u[r][singleIndex[k]] * wps[st][singleIndex[k]];
+                    }
                 }
             }
-            double[][] out = new double[no][timesS.length];
-            double[][][] scratch = new double[clusters.size()][][];
+            int nt = timesS.length;
+            double[][][] out = new double[ns][no][nt];
             ClusterWalk[] walks = new ClusterWalk[clusters.size()];
             for (int c = 0; c < walks.length; c++) {
-                walks[c] = cacheable(clusters.get(c), timesS.length) ? null : new ClusterWalk(clusters.get(c));
+                walks[c] = cacheable(clusters.get(c), nt) ? null : new ClusterWalk(clusters.get(c));
             }
-            for (int j = 0; j < timesS.length; j++) {
+            double[][][] clusterE = new double[clusters.size()][][];
+            double[] y = new double[n];
+            for (int j = 0; j < nt; j++) {
                 double[] f = singleFactor[j];
                 int a = active[j];
-                for (int r = 0; r < no; r++) {
-                    double[] ar = amp[r];
-                    double s = 0;
-                    for (int k = 0; k < a; k++) {
-                        s += ar[k] * f[k];
-                    }
-                    for (int c = 0; c < clusters.size(); c++) {
-                        double[][] e = clusterFactor[j][c];
-                        if (e == null && !cacheable(clusters.get(c), timesS.length)) {
-                            e = r == 0 ? walks[c].at(timesS[j]) : scratch[c];
-                            scratch[c] = e;
-                        }
+                for (int c = 0; c < clusterE.length; c++) {
+                    clusterE[c] = clusterFactor[j][c] != null || cacheable(clusters.get(c), nt)
+                            ? clusterFactor[j][c] : walks[c].at(timesS[j]);
+                }
+                for (int st = 0; st < ns; st++) {
+                    double[] wp = wps[st];
+                    // exp(B_c t)·W·p of each cluster, once per start (every observable reads it)
+                    for (int c = 0; c < clusterE.length; c++) {
+                        double[][] e = clusterE[c];
                         if (e == null) {
                             continue;
                         }
                         int[] mem = clusters.get(c).members;
                         for (int x = 0; x < mem.length; x++) {
-                            double y = 0;
+                            double yx = 0;
                             for (int z = 0; z < mem.length; z++) {
-                                y += e[x][z] * wp[mem[z]];
+                                yx += e[x][z] * wp[mem[z]];
                             }
-                            s += u[r][mem[x]] * y;
+                            y[mem[x]] = yx;
                         }
                     }
-                    out[r][j] = s;
+                    for (int r = 0; r < no; r++) {
+                        double[] ar = amp[st * no + r];
+                        double s = 0;
+                        for (int k = 0; k < a; k++) {
+                            s += ar[k] * f[k];
+                        }
+                        for (int c = 0; c < clusterE.length; c++) {
+                            if (clusterE[c] == null) {
+                                continue;
+                            }
+                            int[] mem = clusters.get(c).members;
+                            for (int x = 0; x < mem.length; x++) {
+                                s += u[r][mem[x]] * y[mem[x]];
+                            }
+                        }
+                        out[st][r][j] = s;
+                    }
                 }
             }
             return out;

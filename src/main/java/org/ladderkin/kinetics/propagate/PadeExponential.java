@@ -47,22 +47,25 @@ public final class PadeExponential {
         if (n == 1) {
             return new double[][] {{Math.exp(a[0][0])}};
         }
+        // an upper-triangular matrix (every block the engine exponentiates) keeps that shape through every product and
+        // the final solve; skipping the zeros is exact and makes each product a sixth of the dense one
+        boolean upper = isUpperTriangular(a);
         for (int k = 0; k < 4; k++) {
             if (norm <= THETA[k]) {
-                return solvePade(a, DEGREE[k], COEFFICIENTS[k], 1.0);
+                return solvePade(a, DEGREE[k], COEFFICIENTS[k], 1.0, upper);
             }
         }
         int s = Math.max(0, (int) Math.ceil(Math.log(norm / THETA[4]) / Math.log(2)));
         double scale = Math.scalb(1.0, -s);
-        double[][] r = solvePade(a, 13, COEFFICIENTS[4], scale);
+        double[][] r = solvePade(a, 13, COEFFICIENTS[4], scale, upper);
         for (int k = 0; k < s; k++) {
-            r = multiply(r, r);
+            r = product(r, r, upper);
         }
         return r;
     }
 
     /** r_m(a·scale) = (V − U)⁻¹(V + U) with U the odd and V the even part of the Padé numerator. */
-    private static double[][] solvePade(double[][] a0, int m, double[] b, double scale) {
+    private static double[][] solvePade(double[][] a0, int m, double[] b, double scale, boolean upper) {
         int n = a0.length;
         double[][] a = new double[n][n];
         for (int i = 0; i < n; i++) {
@@ -70,7 +73,7 @@ public final class PadeExponential {
                 a[i][j] = a0[i][j] * scale;
             }
         }
-        double[][] a2 = multiply(a, a);
+        double[][] a2 = product(a, a, upper);
         double[][] u;
         double[][] v;
         if (m < 13) {
@@ -80,7 +83,7 @@ public final class PadeExponential {
             pow[0] = identity(n);
             pow[1] = a2;
             for (int k = 2; k <= half; k++) {
-                pow[k] = multiply(pow[k - 1], a2);
+                pow[k] = product(pow[k - 1], a2, upper);
             }
             double[][] uIn = new double[n][n];
             v = new double[n][n];
@@ -88,26 +91,26 @@ public final class PadeExponential {
                 addScaled(uIn, pow[k], b[2 * k + 1]);
                 addScaled(v, pow[k], b[2 * k]);
             }
-            u = multiply(a, uIn);
+            u = product(a, uIn, upper);
         } else {
-            double[][] a4 = multiply(a2, a2);
-            double[][] a6 = multiply(a4, a2);
+            double[][] a4 = product(a2, a2, upper);
+            double[][] a6 = product(a4, a2, upper);
             double[][] id = identity(n);
             double[][] inner = new double[n][n];
             addScaled(inner, a6, b[13]);
             addScaled(inner, a4, b[11]);
             addScaled(inner, a2, b[9]);
-            double[][] uOuter = multiply(a6, inner);
+            double[][] uOuter = product(a6, inner, upper);
             addScaled(uOuter, a6, b[7]);
             addScaled(uOuter, a4, b[5]);
             addScaled(uOuter, a2, b[3]);
             addScaled(uOuter, id, b[1]);
-            u = multiply(a, uOuter);
+            u = product(a, uOuter, upper);
             double[][] innerV = new double[n][n];
             addScaled(innerV, a6, b[12]);
             addScaled(innerV, a4, b[10]);
             addScaled(innerV, a2, b[8]);
-            v = multiply(a6, innerV);
+            v = product(a6, innerV, upper);
             addScaled(v, a6, b[6]);
             addScaled(v, a4, b[4]);
             addScaled(v, a2, b[2]);
@@ -121,7 +124,7 @@ public final class PadeExponential {
                 q[i][j] = v[i][j] - u[i][j];
             }
         }
-        return DenseLinear.solve(q, p);
+        return upper ? solveUpper(q, p) : DenseLinear.solve(q, p);
     }
 
     static double norm1(double[][] a) {
@@ -151,6 +154,66 @@ public final class PadeExponential {
                 target[i][j] += c * x[i][j];
             }
         }
+    }
+
+    private static boolean isUpperTriangular(double[][] a) {
+        for (int i = 1; i < a.length; i++) {
+            for (int j = 0; j < i; j++) {
+                if (a[i][j] != 0) {
+                    return false;
+                }
+            }
+        }
+        return true;
+    }
+
+    /**
+     * a·b, for upper-triangular a and b over the upper triangle only; the sums run in the same order as
+     * {@link #multiply}, which only adds zeros besides, so the result is the same to the bit.
+     */
+    private static double[][] product(double[][] a, double[][] b, boolean upper) {
+        if (!upper) {
+            return multiply(a, b);
+        }
+        int n = a.length;
+        double[][] c = new double[n][n];
+        for (int i = 0; i < n; i++) {
+            double[] ci = c[i];
+            double[] ai = a[i];
+            for (int l = i; l < n; l++) {
+                double x = ai[l];
+                if (x == 0) {
+                    continue;
+                }
+                double[] bl = b[l];
+                for (int j = l; j < n; j++) {
+                    ci[j] += x * bl[j];
+                }
+            }
+        }
+        return c;
+    }
+
+    /**
+     * q⁻¹·p for upper-triangular q and p by back-substitution: what {@link DenseLinear#solve} does for them (its
+     * pivoting and elimination find nothing to do), without the terms that are zero.
+     */
+    private static double[][] solveUpper(double[][] q, double[][] p) {
+        int n = q.length;
+        double[][] x = new double[n][n];
+        for (int i = n - 1; i >= 0; i--) {
+            if (q[i][i] == 0) {
+                return DenseLinear.solve(q, p);
+            }
+            for (int c = i; c < n; c++) {
+                double s = p[i][c];
+                for (int k = i + 1; k <= c; k++) {
+                    s -= q[i][k] * x[k][c];
+                }
+                x[i][c] = s / q[i][i];
+            }
+        }
+        return x;
     }
 
     /** Dense product a·b. */

@@ -26,6 +26,15 @@ public interface Propagator {
 
         /** The traces o_r·p(t_j) for each observable row o_r, starting from p0 at t = 0. */
         double[][] observe(double[][] observables, double[] p0);
+
+        /** The traces for several starts at once, [start][observable][time]. */
+        default double[][][] observeAll(double[][] observables, double[][] starts) {
+            double[][][] out = new double[starts.length][][];
+            for (int s = 0; s < starts.length; s++) {
+                out[s] = observe(observables, starts[s]);
+            }
+            return out;
+        }
     }
 
     /** Rejects negative, infinite and NaN times with the value in the message. */
