@@ -152,6 +152,13 @@ final class FitCommand implements Callable<Integer> {
     @Option(names = "--format", paramLabel = "text|json", defaultValue = "text", description = "standard output (default ${DEFAULT-VALUE})")
     String format;
 
+    @Option(names = "--archive", arity = "0..1", fallbackValue = "", paramLabel = "FILE|JDBC-URL",
+            description = "add the fit to the sample-series archive on success (default archive without a value)")
+    String archive;
+
+    @Mixin
+    SampleOptions sample;
+
 
     @Override
     public Integer call() throws Exception {
@@ -162,6 +169,7 @@ final class FitCommand implements Callable<Integer> {
             AtomicFiles.checkWritableFolder(outDir);
             org.ladderkin.report.Charts.warmUpInBackground();
         }
+        ArchiveHook.check(archive, outDir, sample, planFile);
         if (irf != null && irfFile != null) {
             throw new IllegalArgumentException("give either --irf (a Gaussian width) or --irf-file (a measured IRF), not both");
         }
@@ -209,6 +217,7 @@ final class FitCommand implements Callable<Integer> {
             AtomicFiles.writeString(outDir.resolve("fit-report.html"),
                     FitReport.html(data, outcome, comparison == null ? List.of() : comparison.rows()));
         }
+        ArchiveHook.afterFit(archive, outDir, dataFiles, sample, planFile, "ladder; free: " + freed.stream().map(LadderParameter::key).toList(), r.ok(), out, err);
         if (format.equals("json")) {
             out.print(ResolvedJson.toText(json));
         } else {
