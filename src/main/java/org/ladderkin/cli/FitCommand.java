@@ -165,11 +165,11 @@ final class FitCommand implements Callable<Integer> {
         if (!format.equals("text") && !format.equals("json")) {
             throw new IllegalArgumentException("--format must be text or json, was " + format);
         }
+        ArchiveHook.check(archive, outDir, sample, planFile);
         if (outDir != null) {
             AtomicFiles.checkWritableFolder(outDir);
             org.ladderkin.report.Charts.warmUpInBackground();
         }
-        ArchiveHook.check(archive, outDir, sample, planFile);
         if (irf != null && irfFile != null) {
             throw new IllegalArgumentException("give either --irf (a Gaussian width) or --irf-file (a measured IRF), not both");
         }
