@@ -103,4 +103,23 @@ class ArchiveCommandTest {
         assertThat(r.err().strip()).startsWith("ladderkin: --archive needs the fit's sample");
         assertThat(dir.resolve("o")).doesNotExist();
     }
+
+    @Test
+    void planArchiveKeepsTheResolvedPlanUnderItsSample() throws Exception {
+        Path home = Path.of(System.getProperty("ladderkin.home", "."));
+        Path out = dir.resolve("plan");
+        Cli.Run r = Cli.run("plan", home.resolve("experiments-plan/cdse-auger-1khz.plan.json").toString(), "--out", out.toString(),
+                "--quiet", "--archive", archive());
+        assertThat(r.exit()).as(r.err()).isZero();
+        try (ArchiveStore a = ArchiveStore.open(ArchiveStore.sqliteUrl(archive()), "check")) {
+            ArchivedPlan p = a.plans(FitQuery.all()).get(0);
+            assertThat(p.sample().name()).isEqualTo("FH-CdSe-0412 (invented batch)");
+            assertThat(p.sample().material()).isEqualTo("CdSe");
+            assertThat(p.sample().volumeM3()).isPositive();
+            assertThat(p.plan().resolvedJson()).isEqualTo(Files.readString(out.resolve("plan-resolved.json")));
+        }
+        // the plan folder can be added again later: a new row, nothing overwritten
+        assertThat(Cli.run("archive", "add", out.toString(), "--archive", archive()).out()).startsWith("added plan P2");
+        assertThat(Cli.run("archive", "show", "P1", "--archive", archive()).out()).contains("FH-CdSe-0412");
+    }
 }
