@@ -66,8 +66,9 @@ class ArchitectureTest {
         INSIDE.put("kinetics", Map.of("state", List.of(), "rate", List.of("state"), "propagate", List.of("rate"),
                 "train", List.of("propagate"), "", List.of("train"), "ensemble", List.of(""), "process", List.of("")));
         // model (no Swing) < chart < view < app (start-up opens the main frame).
-        INSIDE.put("gui", Map.of("model", List.of(), "chart", List.of("model"), "view", List.of("chart"),
-                "app", List.of("view")));
+        // series (the Sample series view) draws its trend on chart; the main frame (view) opens it.
+        INSIDE.put("gui", Map.of("model", List.of(), "chart", List.of("model"), "series", List.of("chart"),
+                "view", List.of("chart", "series"), "app", List.of("view")));
         INSIDE.put("io", Map.of("json", List.of(), "", List.of("json")));
         // beam measurement (knife edge, camera second moments, caustic) stands alone: it needs no profile or pulse.
         INSIDE.put("excite", Map.of("", List.of(), "beam", List.of()));

@@ -158,6 +158,13 @@ final class FitCommand implements Callable<Integer> {
     @Option(names = "--format", paramLabel = "text|json", defaultValue = "text", description = "standard output (default ${DEFAULT-VALUE})")
     String format;
 
+    @Option(names = "--archive", arity = "0..1", fallbackValue = "", paramLabel = "FILE|JDBC-URL",
+            description = "add the fit to the sample-series archive on success (default archive without a value)")
+    String archive;
+
+    @Mixin
+    SampleOptions sample;
+
 
     @Override
     public Integer call() throws Exception {
@@ -165,11 +172,15 @@ final class FitCommand implements Callable<Integer> {
             throw new IllegalArgumentException("--format must be text or json, was " + format);
         }
         if (counting.requested()) {
+            if (archive != null) {
+                throw new IllegalArgumentException("--archive keeps least-squares fits only for now; archive a counting fit's folder later");
+            }
             if (outDir != null) {
                 AtomicFiles.checkWritableFolder(outDir);
             }
             return CountingFitRun.run(this, counting);
         }
+        ArchiveHook.check(archive, outDir, sample, planFile);
         if (outDir != null) {
             AtomicFiles.checkWritableFolder(outDir);
             org.ladderkin.report.Charts.warmUpInBackground();
@@ -225,6 +236,7 @@ final class FitCommand implements Callable<Integer> {
             AtomicFiles.writeString(outDir.resolve("fit-report.html"),
                     FitReport.html(data, outcome, comparison == null ? List.of() : comparison.rows()));
         }
+        ArchiveHook.afterFit(archive, outDir, dataFiles, sample, planFile, "ladder; free: " + freed.stream().map(LadderParameter::key).toList(), r.ok(), out, err);
         if (format.equals("json")) {
             out.print(ResolvedJson.toText(json));
         } else {

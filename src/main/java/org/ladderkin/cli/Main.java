@@ -14,7 +14,7 @@ import picocli.CommandLine.Spec;
         description = "Plan and analyse pump-probe and time-resolved PL campaigns on semiconductor nanocrystals: "
             + "multiexciton kinetics, fluence series, risks and global fits.",
         subcommands = {PlanCommand.class, SimulateCommand.class, FitCommand.class, ExciteCommand.class, BeamCommand.class, MaterialsCommand.class,
-            FitYieldsCommand.class,
+            FitYieldsCommand.class, ArchiveCommand.class, TrendCommand.class,
             GuiCommand.class, BenchCommand.class, CommandLine.HelpCommand.class},
         footer = {"", "Quantities take units as written in the lab: 50 ps, 1 kHz, 2.5 µJ (or uJ), 0.3 mJ/cm², 400 nm.",
             "Exit codes: 0 ok, 2 bad command line, 3 bad input, 4 cannot write output, 1 internal error."})

@@ -52,9 +52,14 @@ final class PlanCommand implements Callable<Integer> {
             + "(repeatable): refresh=static|stirred|flowing:<flow>:<cell volume>, rate=<frequency>"})
     List<String> whatIfs = new ArrayList<>();
 
+    @Option(names = "--archive", arity = "0..1", fallbackValue = "", paramLabel = "FILE|JDBC-URL",
+            description = "add the plan to the sample-series archive (default archive without a value)")
+    String archive;
+
 
     @Override
     public Integer call() throws Exception {
+        ArchiveHook.check(archive, outDir, null, null);
         if (outDir != null) {
             AtomicFiles.checkWritableFolder(outDir);
             org.ladderkin.report.Charts.warmUpInBackground();
@@ -75,6 +80,7 @@ final class PlanCommand implements Callable<Integer> {
             AtomicFiles.writeString(outDir.resolve("report.html"), PlanReport.html(plan, variants));
             PlanOutputs.write(plan, Cautions.texts(plan.cautions()), outDir);
             out.println("wrote " + outDir.resolve("report.html") + ", plan-resolved.json, traces.csv");
+            ArchiveHook.afterPlan(archive, outDir, out, spec.commandLine().getErr());
         }
         out.flush();
         return ExitCodes.OK;

@@ -815,6 +815,8 @@ public final class PlannerFrame extends JFrame {
             themes.add(item);
             view.add(item);
         }
+        view.addSeparator();
+        view.add(action("Sample Series…", null, this::openSampleSeries)).setName("menu:sample-series");
         bar.add(view);
 
         JMenu help = new JMenu("Help");
@@ -824,6 +826,15 @@ public final class PlannerFrame extends JFrame {
         help.add(action("About ladderkin", null, () -> HelpDialogs.about(this))).setName("help:about");
         bar.add(help);
         return bar;
+    }
+
+    /** The archive's samples and trend; "plan the next size" sets this plan's diameter (and drops a first-peak size). */
+    private void openSampleSeries() {
+        new org.ladderkin.gui.series.SampleSeriesWindow(() -> editor.lastValid().map(p -> p.sample().spec().name()).orElse(null),
+                nm -> editor.editAll(PlanForms.SAMPLE.stream().filter(f -> f.path().toString().equals("sample.diameter")
+                        || f.path().toString().equals("sample.firstExcitonPeak")).map(f -> java.util.Map.entry(f,
+                        f.path().toString().equals("sample.diameter") ? String.format(java.util.Locale.ROOT, "%.2f nm", nm) : ""))
+                        .toList())).setVisible(true);
     }
 
     private void showFitView() {
