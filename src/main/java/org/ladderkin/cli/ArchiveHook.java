@@ -32,16 +32,16 @@ final class ArchiveHook {
         }
     }
 
-    /** After a fit wrote {@code outDir}: its provenance (always), and its rows when {@code archive} is set and it succeeded. */
-    static void afterFit(String archive, Path outDir, List<Path> dataFiles, SampleOptions sample, Path planFile, String model,
-                         boolean ok, PrintWriter out, PrintWriter err) throws IOException {
-        if (outDir == null) {
-            return;
-        }
+    /** A fit's provenance (the sample, the model, each data file's SHA-256), written into {@code folder} with its result. */
+    static void writeProvenance(Path folder, List<Path> dataFiles, SampleOptions sample, Path planFile, String model) throws IOException {
         SampleEntry entry = sample.given() ? sample.entry()
                 : planFile != null ? SampleOptions.of(PlanCodec.read(planFile).sample()) : null;
-        ArchiveInputs.writeProvenance(outDir, dataFiles, entry, model);
-        if (archive != null && ok) {
+        ArchiveInputs.writeProvenance(folder, dataFiles, entry, model);
+    }
+
+    /** After a fit wrote {@code outDir}: its rows, when {@code archive} is set and the fit succeeded. */
+    static void afterFit(String archive, Path outDir, boolean ok, PrintWriter out, PrintWriter err) {
+        if (outDir != null && archive != null && ok) {
             add(archive, outDir, out, err);
         }
     }

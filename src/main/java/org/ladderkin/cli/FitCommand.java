@@ -2,7 +2,6 @@ package org.ladderkin.cli;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
@@ -25,6 +24,7 @@ import org.ladderkin.fit.ParameterEstimate;
 import org.ladderkin.fit.ParameterNaming;
 import org.ladderkin.fit.YieldSummary;
 import org.ladderkin.io.AtomicFiles;
+import org.ladderkin.io.OutputSet;
 import org.ladderkin.io.FitResultJson;
 import org.ladderkin.io.IrfFileReader;
 import org.ladderkin.io.MissingValuePolicy;
@@ -173,7 +173,7 @@ final class FitCommand implements Callable<Integer> {
         }
         if (counting.requested()) {
             if (archive != null) {
-                throw new IllegalArgumentException("--archive keeps least-squares fits only for now; archive a counting fit's folder later");
+                throw new IllegalArgumentException("--archive does not take counting fits yet (it keeps least-squares fits and plans)");
             }
             if (outDir != null) {
                 AtomicFiles.checkWritableFolder(outDir);
@@ -231,12 +231,17 @@ final class FitCommand implements Callable<Integer> {
         FitYieldsCommand.addTo(json, yields);
         PrintWriter out = format.equals("json") ? quiet.data() : quiet.summary();
         if (outDir != null) {
-            Files.createDirectories(outDir);
-            ResolvedJson.write(outDir.resolve("fit-result.json"), json);
-            AtomicFiles.writeString(outDir.resolve("fit-report.html"),
-                    FitReport.html(data, outcome, comparison == null ? List.of() : comparison.rows()));
+            // result, report and provenance replace the previous fit's together, even if this run is killed
+            try (OutputSet set = OutputSet.begin(outDir)) {
+                ResolvedJson.write(set.resolve("fit-result.json"), json);
+                AtomicFiles.writeString(set.resolve("fit-report.html"),
+                        FitReport.html(data, outcome, comparison == null ? List.of() : comparison.rows()));
+                ArchiveHook.writeProvenance(set.folder(), dataFiles, sample, planFile,
+                        "ladder; free: " + freed.stream().map(LadderParameter::key).toList());
+                set.commit();
+            }
         }
-        ArchiveHook.afterFit(archive, outDir, dataFiles, sample, planFile, "ladder; free: " + freed.stream().map(LadderParameter::key).toList(), r.ok(), out, err);
+        ArchiveHook.afterFit(archive, outDir, r.ok(), out, err);
         if (format.equals("json")) {
             out.print(ResolvedJson.toText(json));
         } else {

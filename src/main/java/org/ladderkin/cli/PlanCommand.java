@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.ladderkin.io.AtomicFiles;
+import org.ladderkin.io.OutputSet;
 import org.ladderkin.io.PlanCodec;
 import org.ladderkin.io.PlanOutputs;
 import org.ladderkin.plan.CampaignPlan;
@@ -77,8 +78,12 @@ final class PlanCommand implements Callable<Integer> {
                             .reduce(org.ladderkin.observe.Verdict.PASS, org.ladderkin.observe.Verdict::worst)));
         }
         if (outDir != null) {
-            AtomicFiles.writeString(outDir.resolve("report.html"), PlanReport.html(plan, variants));
-            PlanOutputs.write(plan, Cautions.texts(plan.cautions()), outDir);
+            // the report and the files it was made from replace the previous run's together, even if this run is killed
+            try (OutputSet set = OutputSet.begin(outDir)) {
+                AtomicFiles.writeString(set.resolve("report.html"), PlanReport.html(plan, variants));
+                PlanOutputs.write(plan, Cautions.texts(plan.cautions()), set.folder());
+                set.commit();
+            }
             out.println("wrote " + outDir.resolve("report.html") + ", plan-resolved.json, traces.csv");
             ArchiveHook.afterPlan(archive, outDir, out, spec.commandLine().getErr());
         }
