@@ -161,11 +161,26 @@ public final class GlobalFitter {
         double[][] lastU = new double[1][];
         java.util.function.Function<double[], Projection.Evaluation> at = u -> {
             if (lastU[0] == null || !java.util.Arrays.equals(lastU[0], u)) {
-                last[0] = p.evaluate(u);
-                lastU[0] = u.clone();
-                if (tracker != null) {
-                    tracker.offer(u, last[0]);
+                try {
+                    last[0] = p.evaluate(u);
+                    if (tracker != null) {
+                        tracker.offer(u, last[0]);
+                    }
+                } catch (ExcitationOutOfReach e) {
+                    if (lastU[0] == null) {
+                        throw new Projection.FitFailure("the starting values give " + e.getMessage() + ": start the cross-section "
+                                + "(or the scale) lower");
+                    }
+                    // a step that far is refused like any step that makes the fit worse: the optimiser shortens it
+                    last[0] = rejected(p, target);
+                } catch (IllegalArgumentException e) {
+                    if (lastU[0] == null) {
+                        throw e;
+                    }
+                    // a step to where the model is undefined (a lifetime overflowing to infinity) is refused the same way
+                    last[0] = rejected(p, target);
                 }
+                lastU[0] = u.clone();
             }
             return last[0];
         };
@@ -177,7 +192,7 @@ public final class GlobalFitter {
         LeastSquaresProblem lsp = new LeastSquaresBuilder()
                 .start(u0)
                 .target(target)
-                .model(u -> at.apply(u).value, u -> p.projectedJacobian(u, at.apply(u)))
+                .model(u -> at.apply(u).value, u -> jacobian(p, u, at.apply(u)))
                 .lazyEvaluation(true)
                 .maxIterations(options.maxIterations())
                 .maxEvaluations(options.maxEvaluations())
@@ -191,6 +206,28 @@ public final class GlobalFitter {
         }
         Projection.Evaluation atU = at.apply(u);
         return new Run(p, u, atU, chiSquare(atU.value, target), o.getIterations(), o.getEvaluations());
+    }
+
+    /** An evaluation whose prediction is far from every data point, so the optimiser refuses the step that led to it. */
+    private static Projection.Evaluation rejected(Projection p, double[] target) {
+        Projection.Evaluation e = new Projection.Evaluation(p.traces, p.points);
+        double scale = 1;
+        for (double y : target) {
+            scale = Math.max(scale, Math.abs(y));
+        }
+        for (int j = 0; j < target.length; j++) {
+            e.value[j] = target[j] + 1e6 * scale;
+        }
+        return e;
+    }
+
+    /** The Jacobian at an accepted point; its difference steps may still cross the excitation limit near it. */
+    private static double[][] jacobian(Projection p, double[] u, Projection.Evaluation at) {
+        try {
+            return p.projectedJacobian(u, at);
+        } catch (ExcitationOutOfReach e) {
+            throw new Projection.FitFailure("the fit reached " + e.getMessage() + " while estimating its slopes");
+        }
     }
 
     /** An optimiser run that stopped at a limit, with its best point. */

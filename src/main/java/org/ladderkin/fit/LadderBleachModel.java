@@ -215,9 +215,25 @@ public final class LadderBleachModel implements TraceModel {
         return peakOccupancy(trace, p) * spots.linearFactor();
     }
 
+    /**
+     * Largest on-axis ⟨N⟩ the model evaluates in a fit. Its ladder then needs about 160 states; a fluence series that
+     * reaches further has left the regime a Poisson-filled exciton ladder describes, and only a wandering optimiser
+     * step asks for it.
+     */
+    public static final double MAX_FIT_OCCUPANCY = 100;
+
     /** ⟨N⟩ of trace {@code trace} on the pump axis at the front face (= {@link #meanOccupancy} without a geometry). */
     public double peakOccupancy(int trace, ParameterValues p) {
         return p.get(scaleKey) * excitation[trace];
+    }
+
+    /** The on-axis ⟨N⟩ of a trace, refused beyond {@link #MAX_FIT_OCCUPANCY} before any ladder is built for it. */
+    private double reachableOccupancy(int trace, ParameterValues p) {
+        double n = peakOccupancy(trace, p);
+        if (!(n <= MAX_FIT_OCCUPANCY)) {
+            throw new ExcitationOutOfReach(n, MAX_FIT_OCCUPANCY);
+        }
+        return n;
     }
 
     /** Populations just before and just after a pulse of on-axis ⟨N⟩ {@code nPeak}, averaged over the geometry. */
@@ -260,7 +276,7 @@ public final class LadderBleachModel implements TraceModel {
     @Override
     public synchronized double[] predict(int trace, double[] delaysS, ParameterValues p) {
         LadderKinetics k = kinetics(p);
-        Populations[] ba = averagedPulse(k, peakOccupancy(trace, p), optional(p, MULTIPLICATION_YIELD, Double.NaN));
+        Populations[] ba = averagedPulse(k, reachableOccupancy(trace, p), optional(p, MULTIPLICATION_YIELD, Double.NaN));
         Populations before = ba[0];
         Populations after = ba[1];
         double t0 = optional(p, TIME_ZERO, 0);
@@ -289,7 +305,7 @@ public final class LadderBleachModel implements TraceModel {
             return 0;
         }
         LadderKinetics k = kinetics(p);
-        return averagedPulse(k, peakOccupancy(trace, p), optional(p, MULTIPLICATION_YIELD, Double.NaN))[0].chargedFraction();
+        return averagedPulse(k, reachableOccupancy(trace, p), optional(p, MULTIPLICATION_YIELD, Double.NaN))[0].chargedFraction();
     }
 
     private LadderKinetics kinetics(ParameterValues p) {
@@ -302,10 +318,13 @@ public final class LadderBleachModel implements TraceModel {
         for (double x : excitation) {
             topN = Math.max(topN, x * p.get(scaleKey));
         }
+        if (!(topN <= MAX_FIT_OCCUPANCY)) {
+            throw new ExcitationOutOfReach(topN, MAX_FIT_OCCUPANCY);
+        }
         // the ladder's Nmax depends on the strongest pulse: build with headroom so small steps in s reuse it
         boolean yield = p.indexOf(MULTIPLICATION_YIELD) >= 0;
         if (cached == null || !Arrays.equals(kin, cachedKinetic) || topN > cachedTopN || yield && !cachedForYield) {
-            double headroom = topN * 1.5;
+            double headroom = Math.min(topN * 1.5, MAX_FIT_OCCUPANCY);
             // with multiplication the ladder is sized for η = 1, the widest law, so trying another η never rebuilds it
             cached = LadderKinetics.forPulses(ladder.apply(p), yield
                     ? new PulseExcitation.Multiplication(headroom, 1) : new PulseExcitation.Poisson(headroom));

@@ -117,6 +117,26 @@ class FitCommandTest {
                 .isCloseTo(basis.model().tauBiexcitonS() * 1e12, org.assertj.core.data.Percentage.withPercentage(1e-6));
     }
 
+    /**
+     * The documented demo fit with --shared-amplitude used to end in "OutOfMemoryError: Requested array size exceeds VM
+     * limit at Occupancy.poisson": an optimiser step wandered to σ·j ≈ 10⁸. Such steps are now refused like any worse step.
+     */
+    @Test
+    void theDemoSeriesWithASharedAmplitudeConvergesInsteadOfExhaustingTheHeap() throws Exception {
+        Path plan = MainTest.HOME.resolve("experiments-plan/cdse-auger-1khz.plan.json");
+        MainTest.Run fit = MainTest.run("fit", MainTest.HOME.resolve("experiments-plan/fh-cdse-ta-series.csv").toString(),
+                "--traces-json", MainTest.HOME.resolve("experiments-plan/fh-cdse-ta-series.traces.json").toString(),
+                "--plan", plan.toString(), "--shared-amplitude", "--format", "json", "--quiet");
+        assertThat(fit.exit()).as(fit.err()).isZero();
+        assertThat(fit.err()).doesNotContain("starts failed");
+        JsonNode root = new ObjectMapper().readTree(fit.out());
+        assertThat(root.at("/status").asText()).isEqualTo("converged");
+        org.ladderkin.plan.PlanFitBasis basis = org.ladderkin.plan.PlanFitBasis.of(org.ladderkin.io.PlanCodec.read(plan));
+        JsonNode tau = root.at("/parameters/tauAuger2Ps");
+        double truth = org.ladderkin.gui.model.FitDemoSeries.TAU2_FACTOR * basis.model().tauBiexcitonS() * 1e12;
+        assertThat(Math.abs(tau.get("value").asDouble() - truth)).isLessThan(4 * tau.get("stdError").asDouble());
+    }
+
     @Test
     void calibrationGivesTotalErrorsAndMilliOdHeadersAreReadInOd(@TempDir Path dir) throws Exception {
         Path csv = simulatedSeries(dir, 11);
