@@ -373,6 +373,7 @@ final class FitCommand implements Callable<Integer> {
         if (!r.ok()) {
             return;
         }
+        List<String> undetermined = new ArrayList<>();
         for (ParameterEstimate e : r.estimates()) {
             if (!e.shared() || e.key().equals("amplitude") || e.key().equals("baseline")) {
                 continue;
@@ -380,8 +381,18 @@ final class FitCommand implements Callable<Integer> {
             ParameterNaming.TradeKey t = ParameterNaming.trade(e.key());
             String total = outcome.totalStdError(e.key()).stream()
                     .mapToObj(v -> String.format(Locale.ROOT, " (stat), ± %.3g total", v * t.factor())).findFirst().orElse("");
+            boolean determined = e.fixed() || Double.isFinite(e.stdError());
+            if (!determined) {
+                undetermined.add(t.key());
+            }
             out.println(String.format(Locale.ROOT, "  %-16s %-12.5g %s", t.key(), e.value() * t.factor(),
-                    e.fixed() ? "(fixed)" : "± " + String.format(Locale.ROOT, "%.3g", e.stdError() * t.factor()) + total));
+                    e.fixed() ? "(fixed)" : !determined ? "not determined (the data do not constrain it)"
+                            : "± " + String.format(Locale.ROOT, "%.3g", e.stdError() * t.factor()) + total));
+        }
+        if (!undetermined.isEmpty()) {
+            out.println("! " + String.join(", ", undetermined) + (undetermined.size() == 1 ? " is" : " are")
+                    + " not determined: the data do not constrain " + (undetermined.size() == 1 ? "it" : "them")
+                    + "; fix " + (undetermined.size() == 1 ? "it" : "them") + " or add data that depend on " + (undetermined.size() == 1 ? "it" : "them"));
         }
         if (outcome.fluenceScaleUncertainty() > 0) {
             out.println(String.format(Locale.ROOT, "  total errors include a %s%% fluence calibration uncertainty",

@@ -57,6 +57,10 @@ public final class FitResultJson {
             putNumber(p, "stdError", e.stdError() * t.factor());
             outcome.totalStdError(e.key()).ifPresent(v -> putNumber(p, "totalStdError", v * t.factor()));
             p.put("fixed", e.fixed());
+            if (!e.fixed() && !Double.isFinite(e.stdError())) {
+                // a free parameter without an error is not a result: say so where a script reads it
+                p.put("determined", false);
+            }
             r.profile(e.key()).ifPresent(pi -> addProfile(p, pi, t.factor()));
         }
         ArrayNode traces = root.putArray("traces");

@@ -57,7 +57,8 @@ public final class FitReport {
             String total = e.fixed() ? "" : outcome.totalStdError(e.key()).stream().mapToObj(v -> num(v * t.factor()))
                     .findFirst().orElse("—");
             rows.add(List.of(ParameterNaming.label(e.key()).withUnit(), num(e.value() * t.factor()),
-                    e.fixed() ? "fixed" : num(e.stdError() * t.factor()), total, profile));
+                    e.fixed() ? "fixed" : Double.isFinite(e.stdError()) ? num(e.stdError() * t.factor())
+                            : "not determined (the data do not constrain it)", total, profile));
         }
         page.table(List.of("parameter", "value", "statistical error", "total error (with calibration)", "68% profile interval"), rows);
         if (outcome.fluenceScaleUncertainty() > 0) {

@@ -137,6 +137,23 @@ class FitCommandTest {
         assertThat(Math.abs(tau.get("value").asDouble() - truth)).isLessThan(4 * tau.get("stdError").asDouble());
     }
 
+    /** A fit whose errors cannot be computed used to print "± NaN" and exit 0 as if it were a result. */
+    @Test
+    void unconstrainedParametersAreSaidToBeNotDeterminedNeverNaN() throws Exception {
+        String csv = MainTest.HOME.resolve("experiments-plan/fh-cdse-ta-series.csv").toString();
+        String sidecar = MainTest.HOME.resolve("experiments-plan/fh-cdse-ta-series.traces.json").toString();
+        MainTest.Run text = MainTest.run("fit", csv, "--traces-json", sidecar, "--tau-rad", "1ms", "--tau-auger2", "1 fs",
+                "--free", "time-zero,scale");
+        assertThat(text.exit()).as(text.err()).isZero();
+        assertThat(text.out()).doesNotContain("NaN").contains("timeZeroPs       0.0000       not determined (the data do not constrain it)")
+                .contains("Fit: uncertainty unavailable");
+        MainTest.Run json = MainTest.run("fit", csv, "--traces-json", sidecar, "--tau-rad", "1ms", "--tau-auger2", "1 fs",
+                "--free", "time-zero,scale", "--format", "json", "--quiet");
+        JsonNode root = new ObjectMapper().readTree(json.out());
+        assertThat(root.at("/parameters/timeZeroPs/determined").asBoolean(true)).isFalse();
+        assertThat(root.at("/parameters/timeZeroPs/stdError").isNull()).isTrue();
+    }
+
     @Test
     void calibrationGivesTotalErrorsAndMilliOdHeadersAreReadInOd(@TempDir Path dir) throws Exception {
         Path csv = simulatedSeries(dir, 11);
