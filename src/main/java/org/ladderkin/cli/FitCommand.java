@@ -155,6 +155,7 @@ final class FitCommand implements Callable<Integer> {
     @Option(names = "--format", paramLabel = "text|json", defaultValue = "text", description = "standard output (default ${DEFAULT-VALUE})")
     String format;
 
+    @Mixin RefreshedRunOptions refreshed;
 
     @Override
     public Integer call() throws Exception {
@@ -169,8 +170,8 @@ final class FitCommand implements Callable<Integer> {
             throw new IllegalArgumentException("give either --irf (a Gaussian width) or --irf-file (a measured IRF), not both");
         }
         MeasuredIrf measured = irfFile == null ? null : IrfFileReader.read(irfFile, irfFile.toString());
-        Dataset data = metadata(TraceTableReader.readAll(dataFiles, new TableOptions(
-                delayUnit == null ? null : Units.of(delayUnit.trim()), MissingValuePolicy.DROP)));
+        TableOptions table = new TableOptions(delayUnit == null ? null : Units.of(delayUnit.trim()), MissingValuePolicy.DROP);
+        Dataset data = metadata(TraceTableReader.readAll(dataFiles, table));
         PlanFitBasis basis = planFile == null ? null : PlanFitBasis.of(PlanCodec.read(planFile));
         // with only a plan, the fit starts from the plan's own ladder (the one its predictions use)
         LadderModel base = modelFile == null && !modelOptions.given() && basis != null ? basis.base() : modelOptions.ladder(modelFile);
@@ -180,6 +181,7 @@ final class FitCommand implements Callable<Integer> {
                 freed.add(LadderParameter.of(f));
             }
         }
+        refreshed.load(freed, table, bare, pump);
         LadderFitSetup setup = new LadderFitSetup(base, repRate == null ? Double.NaN : 1 / positive(repRate, Dimension.FREQUENCY, "--rep-rate"),
                 freed, crossSection == null ? Double.NaN : positive(crossSection, Dimension.AREA, "--cross-section"),
                 Quantity.parseSi(timeZero, Dimension.TIME), irf == null ? Double.NaN : positive(irf, Dimension.TIME, "--irf"),
@@ -205,16 +207,16 @@ final class FitCommand implements Callable<Integer> {
         FitResult r = outcome.result();
         PlanComparison comparison = planFile == null || !r.ok() ? null : PlanComparison.of(planFile, outcome);
         ObjectNode json = FitResultJson.of(data, outcome, comparison == null ? null : comparison.json());
-        YieldSummary yields = freed.contains(LadderParameter.MULTIPLICATION_YIELD) && r.ok()
+        YieldSummary yields = refreshed.analyse(data, setup, outcome, freed.contains(LadderParameter.MULTIPLICATION_YIELD) && r.ok()
                 ? YieldSummary.of(data, setup, outcome, pump == null ? OptionalDouble.empty() : OptionalDouble.of(Photon.parseEnergyJ(pump)))
-                : null;
+                : null, quiet.on() ? FitProgress.NONE : progress(err));
         FitYieldsCommand.addTo(json, yields);
         PrintWriter out = format.equals("json") ? quiet.data() : quiet.summary();
         if (outDir != null) {
             Files.createDirectories(outDir);
             ResolvedJson.write(outDir.resolve("fit-result.json"), json);
             AtomicFiles.writeString(outDir.resolve("fit-report.html"),
-                    FitReport.html(data, outcome, comparison == null ? List.of() : comparison.rows()));
+                    FitReport.html(data, outcome, comparison == null ? List.of() : comparison.rows(), yields));
         }
         if (format.equals("json")) {
             out.print(ResolvedJson.toText(json));

@@ -169,10 +169,26 @@ final class FitYieldsCommand implements Callable<Integer> {
         }
         y.photonEnergyJ().ifPresent(e -> json.put("photonEnergyEv", e / PhysicalConstants.ELECTRONVOLT_J));
         ObjectNode m = json.putObject("multiplicationYield");
+        // the reported η: this run's, or the refreshed run's when one was given (then 'parameters' are the static run's)
+        ObjectNode eta = m.putObject("eta");
+        eta.put("value", y.eta());
+        if (Double.isFinite(y.etaStdError())) {
+            eta.put("stdError", y.etaStdError());
+        }
+        m.put("from", y.staticRun().isPresent() ? "refreshed run" : "this run");
         m.put("upperBound", y.upperBound());
         if (y.upperBound()) {
             m.put("reason", y.reason());
         }
+        y.staticRun().ifPresent(s -> {
+            // the static run's own η shows what charging would have added
+            ObjectNode o = m.putObject("staticRun");
+            o.put("eta", s.eta());
+            o.put("chargedFraction", s.chargedFraction());
+            if (!Double.isNaN(s.periodS())) {
+                o.put("repRateMhz", 1e-6 / s.periodS());
+            }
+        });
         y.earlyLate().ifPresentOrElse(e -> {
             ObjectNode o = m.putObject("earlyLate");
             estimate(o.putObject("lowFluenceLimit"), e.limit(), e.limitStdError());
