@@ -125,6 +125,11 @@ final class FitYieldsCommand implements Callable<Integer> {
         if (eta.field("fixed").bool()) {
             throw eta.field("fixed").error(InputProblem.INVALID_VALUE, "the yield was held, not fitted");
         }
+        // with a refreshed run beside it, 'parameters' are the static run's and the yield is the refreshed run's
+        java.util.Optional<Node> reported = root.optional("multiplicationYield").flatMap(m -> m.optional("eta"));
+        if (reported.isPresent()) {
+            eta = reported.get();
+        }
         double value = eta.field("value").number();
         java.util.Optional<Node> se = eta.optional("stdError").filter(n -> n.kind() == Node.Kind.NUMBER && n.number() > 0);
         if (se.isEmpty()) {
