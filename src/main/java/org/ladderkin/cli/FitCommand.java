@@ -20,8 +20,6 @@ import org.ladderkin.fit.FitResult;
 import org.ladderkin.fit.LadderFit;
 import org.ladderkin.fit.LadderFitSetup;
 import org.ladderkin.fit.LadderFitSetup.LadderParameter;
-import org.ladderkin.fit.ParameterEstimate;
-import org.ladderkin.fit.ParameterNaming;
 import org.ladderkin.fit.YieldSummary;
 import org.ladderkin.io.AtomicFiles;
 import org.ladderkin.io.OutputSet;
@@ -165,6 +163,7 @@ final class FitCommand implements Callable<Integer> {
     @Mixin
     SampleOptions sample;
 
+    @Mixin RefreshedRunOptions refreshed;
 
     @Override
     public Integer call() throws Exception {
@@ -189,8 +188,8 @@ final class FitCommand implements Callable<Integer> {
             throw new IllegalArgumentException("give either --irf (a Gaussian width) or --irf-file (a measured IRF), not both");
         }
         MeasuredIrf measured = irfFile == null ? null : IrfFileReader.read(irfFile, irfFile.toString());
-        Dataset data = metadata(TraceTableReader.readAll(dataFiles, new TableOptions(
-                delayUnit == null ? null : Units.of(delayUnit.trim()), MissingValuePolicy.DROP)));
+        TableOptions table = new TableOptions(delayUnit == null ? null : Units.of(delayUnit.trim()), MissingValuePolicy.DROP);
+        Dataset data = metadata(TraceTableReader.readAll(dataFiles, table));
         PlanFitBasis basis = planFile == null ? null : PlanFitBasis.of(PlanCodec.read(planFile));
         // with only a plan, the fit starts from the plan's own ladder (the one its predictions use)
         LadderModel base = modelFile == null && !modelOptions.given() && basis != null ? basis.base() : modelOptions.ladder(modelFile);
@@ -200,6 +199,7 @@ final class FitCommand implements Callable<Integer> {
                 freed.add(LadderParameter.of(f));
             }
         }
+        refreshed.load(freed, table, bare, pump);
         LadderFitSetup setup = new LadderFitSetup(base, repRate == null ? Double.NaN : 1 / positive(repRate, Dimension.FREQUENCY, "--rep-rate"),
                 freed, crossSection == null ? Double.NaN : positive(crossSection, Dimension.AREA, "--cross-section"),
                 Quantity.parseSi(timeZero, Dimension.TIME), irf == null ? Double.NaN : positive(irf, Dimension.TIME, "--irf"),
@@ -225,9 +225,9 @@ final class FitCommand implements Callable<Integer> {
         FitResult r = outcome.result();
         PlanComparison comparison = planFile == null || !r.ok() ? null : PlanComparison.of(planFile, outcome);
         ObjectNode json = FitResultJson.of(data, outcome, comparison == null ? null : comparison.json());
-        YieldSummary yields = freed.contains(LadderParameter.MULTIPLICATION_YIELD) && r.ok()
+        YieldSummary yields = refreshed.analyse(data, setup, outcome, freed.contains(LadderParameter.MULTIPLICATION_YIELD) && r.ok()
                 ? YieldSummary.of(data, setup, outcome, pump == null ? OptionalDouble.empty() : OptionalDouble.of(Photon.parseEnergyJ(pump)))
-                : null;
+                : null, quiet.on() ? FitProgress.NONE : progress(err));
         FitYieldsCommand.addTo(json, yields);
         PrintWriter out = format.equals("json") ? quiet.data() : quiet.summary();
         if (outDir != null) {
@@ -235,7 +235,7 @@ final class FitCommand implements Callable<Integer> {
             try (OutputSet set = OutputSet.begin(outDir)) {
                 ResolvedJson.write(set.resolve("fit-result.json"), json);
                 AtomicFiles.writeString(set.resolve("fit-report.html"),
-                        FitReport.html(data, outcome, comparison == null ? List.of() : comparison.rows()));
+                        FitReport.html(data, outcome, comparison == null ? List.of() : comparison.rows(), yields));
                 ArchiveHook.writeProvenance(set.folder(), dataFiles, sample, planFile,
                         "ladder; free: " + freed.stream().map(LadderParameter::key).toList());
                 set.commit();
@@ -245,7 +245,7 @@ final class FitCommand implements Callable<Integer> {
         if (format.equals("json")) {
             out.print(ResolvedJson.toText(json));
         } else {
-            summary(out, outcome);
+            FitTextSummary.print(out, outcome);
             (yields == null ? List.<String>of() : yields.lines()).forEach(out::println);
             if (outDir != null) {
                 out.println("wrote " + outDir.resolve("fit-report.html") + " and fit-result.json");
@@ -365,56 +365,6 @@ final class FitCommand implements Callable<Integer> {
                 best.set(String.format(Locale.ROOT, ", best χ²/ν %.3g", b.reducedChiSquare()));
             }
         };
-    }
-
-    private static void summary(PrintWriter out, LadderFit.Outcome outcome) {
-        FitResult r = outcome.result();
-        out.println("Fit: " + r.statusText() + (r.message().isEmpty() ? "" : " — " + r.message()));
-        if (!r.ok()) {
-            return;
-        }
-        List<String> undetermined = new ArrayList<>();
-        for (ParameterEstimate e : r.estimates()) {
-            if (!e.shared() || e.key().equals("amplitude") || e.key().equals("baseline")) {
-                continue;
-            }
-            ParameterNaming.TradeKey t = ParameterNaming.trade(e.key());
-            String total = outcome.totalStdError(e.key()).stream()
-                    .mapToObj(v -> String.format(Locale.ROOT, " (stat), ± %.3g total", v * t.factor())).findFirst().orElse("");
-            boolean determined = e.fixed() || Double.isFinite(e.stdError());
-            if (!determined) {
-                undetermined.add(t.key());
-            }
-            out.println(String.format(Locale.ROOT, "  %-16s %-12.5g %s", t.key(), e.value() * t.factor(),
-                    e.fixed() ? "(fixed)" : !determined ? "not determined (the data do not constrain it)"
-                            : "± " + String.format(Locale.ROOT, "%.3g", e.stdError() * t.factor()) + total));
-        }
-        if (!undetermined.isEmpty()) {
-            out.println("! " + String.join(", ", undetermined) + (undetermined.size() == 1 ? " is" : " are")
-                    + " not determined: the data do not constrain " + (undetermined.size() == 1 ? "it" : "them")
-                    + "; fix " + (undetermined.size() == 1 ? "it" : "them") + " or add data that depend on " + (undetermined.size() == 1 ? "it" : "them"));
-        }
-        if (outcome.fluenceScaleUncertainty() > 0) {
-            out.println(String.format(Locale.ROOT, "  total errors include a %s%% fluence calibration uncertainty",
-                    new java.math.BigDecimal(100 * outcome.fluenceScaleUncertainty()).round(new java.math.MathContext(3))
-                            .stripTrailingZeros().toPlainString()));
-        }
-        if (outcome.measuredIrf() != null) {
-            out.println("  " + FitReport.measuredIrfNote(outcome.measuredIrf()));
-        }
-        if (outcome.quality() != null) {
-            out.println(String.format(Locale.ROOT, "  %s, over %d points (statistical errors scaled by the residuals' own "
-                    + "mean square)", outcome.quality().describe(), r.points()));
-        }
-        for (String d : outcome.diagnostics()) {
-            out.println("! " + d);
-        }
-        for (String c : outcome.checks()) {
-            out.println("  " + c);
-        }
-        for (String w : r.warnings()) {
-            out.println("warning: " + w);
-        }
     }
 
     private static double positive(String text, Dimension d, String flag) {

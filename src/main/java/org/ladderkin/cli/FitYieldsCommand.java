@@ -125,6 +125,11 @@ final class FitYieldsCommand implements Callable<Integer> {
         if (eta.field("fixed").bool()) {
             throw eta.field("fixed").error(InputProblem.INVALID_VALUE, "the yield was held, not fitted");
         }
+        // with a refreshed run beside it, 'parameters' are the static run's and the yield is the refreshed run's
+        java.util.Optional<Node> reported = root.optional("multiplicationYield").flatMap(m -> m.optional("eta"));
+        if (reported.isPresent()) {
+            eta = reported.get();
+        }
         double value = eta.field("value").number();
         java.util.Optional<Node> se = eta.optional("stdError").filter(n -> n.kind() == Node.Kind.NUMBER && n.number() > 0);
         if (se.isEmpty()) {
@@ -169,10 +174,26 @@ final class FitYieldsCommand implements Callable<Integer> {
         }
         y.photonEnergyJ().ifPresent(e -> json.put("photonEnergyEv", e / PhysicalConstants.ELECTRONVOLT_J));
         ObjectNode m = json.putObject("multiplicationYield");
+        // the reported η: this run's, or the refreshed run's when one was given (then 'parameters' are the static run's)
+        ObjectNode eta = m.putObject("eta");
+        eta.put("value", y.eta());
+        if (Double.isFinite(y.etaStdError())) {
+            eta.put("stdError", y.etaStdError());
+        }
+        m.put("from", y.staticRun().isPresent() ? "refreshed run" : "this run");
         m.put("upperBound", y.upperBound());
         if (y.upperBound()) {
             m.put("reason", y.reason());
         }
+        y.staticRun().ifPresent(s -> {
+            // the static run's own η shows what charging would have added
+            ObjectNode o = m.putObject("staticRun");
+            o.put("eta", s.eta());
+            o.put("chargedFraction", s.chargedFraction());
+            if (!Double.isNaN(s.periodS())) {
+                o.put("repRateMhz", 1e-6 / s.periodS());
+            }
+        });
         y.earlyLate().ifPresentOrElse(e -> {
             ObjectNode o = m.putObject("earlyLate");
             estimate(o.putObject("lowFluenceLimit"), e.limit(), e.limitStdError());

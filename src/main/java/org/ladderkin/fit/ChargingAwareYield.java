@@ -61,7 +61,14 @@ public final class ChargingAwareYield {
     public static Verdict analyse(Dataset staticData, LadderFitSetup staticSetup, Dataset refreshedData,
                                   LadderFitSetup refreshedSetup, FitProgress progress) {
         requireYieldFreed(staticSetup);
-        LadderFit.Outcome st = LadderFit.fit(staticData, staticSetup, progress);
+        return analyse(staticData, staticSetup, LadderFit.fit(staticData, staticSetup, progress), refreshedData,
+                refreshedSetup, progress);
+    }
+
+    /** As {@link #analyse(Dataset, LadderFitSetup, Dataset, LadderFitSetup, FitProgress)}, the static run already fitted. */
+    public static Verdict analyse(Dataset staticData, LadderFitSetup staticSetup, LadderFit.Outcome st,
+                                  Dataset refreshedData, LadderFitSetup refreshedSetup, FitProgress progress) {
+        requireYieldFreed(staticSetup);
         double staticEta = etaOf(st).orElse(Double.NaN);
         double charged = Double.NaN;
         if (st.result().ok()) {

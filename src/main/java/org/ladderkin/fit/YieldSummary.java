@@ -17,10 +17,28 @@ import java.util.OptionalDouble;
  * @param earlyLateNote why there is none (empty when there is)
  * @param upperBound    whether η is only an upper bound
  * @param reason        why (empty when it is not)
+ * @param staticRun     when η comes from a refreshed run: what the static run beside it gave
  */
 public record YieldSummary(OptionalDouble photonEnergyJ, double eta, double etaStdError,
                            Optional<EarlyLateYield.Estimate> earlyLate, String earlyLateNote, boolean upperBound,
-                           String reason) {
+                           String reason, Optional<StaticRun> staticRun) {
+
+    /**
+     * The static run fitted beside a refreshed one: its own η (too high by whatever charging added) and the charged
+     * fraction before a pulse its fit implies, which say how much a static run alone would have misled.
+     *
+     * @param eta             η of the static run alone (NaN when its fit failed)
+     * @param chargedFraction charged fraction before a pulse of its strongest trace (NaN when unknown)
+     * @param periodS         its pulse period (NaN for a single pulse)
+     */
+    public record StaticRun(double eta, double chargedFraction, double periodS) {
+    }
+
+    /** This summary, of a refreshed run, with the static run's numbers beside it (a refreshed run is no bound). */
+    public YieldSummary withStaticRun(ChargingAwareYield.Verdict verdict, double staticPeriodS) {
+        return new YieldSummary(photonEnergyJ, eta, etaStdError, earlyLate, earlyLateNote, false, "",
+                Optional.of(new StaticRun(verdict.staticEta(), verdict.chargedFraction(), staticPeriodS)));
+    }
 
     /** The late delay in biexciton lifetimes: long enough for Auger decay to be over (e^−10). */
     private static final double LATE_IN_TAU2 = 10;
@@ -75,7 +93,7 @@ public record YieldSummary(OptionalDouble photonEnergyJ, double eta, double etaS
         }
         boolean bound = ChargingAwareYield.exposed(setup);
         return new YieldSummary(photonEnergyJ(data, pumpJ), eta.value(), eta.stdError(), el, note, bound,
-                bound ? ChargingAwareYield.upperBoundReason(setup.periodS()) : "");
+                bound ? ChargingAwareYield.upperBoundReason(setup.periodS()) : "", Optional.empty());
     }
 
     /** Lines for the terminal summary. */
@@ -83,7 +101,12 @@ public record YieldSummary(OptionalDouble photonEnergyJ, double eta, double etaS
         List<String> out = new ArrayList<>();
         String pump = photonEnergyJ.isPresent() ? String.format(Locale.ROOT, " at ħω = %.4g eV",
                 photonEnergyJ.getAsDouble() / org.ladderkin.units.PhysicalConstants.ELECTRONVOLT_J) : " (photon energy not given: --pump or the sidecar)";
-        out.add(String.format(Locale.ROOT, "  multiplication yield%s: full fit η = %.3g ± %.2g", pump, eta, etaStdError));
+        out.add(String.format(Locale.ROOT, "  multiplication yield%s: full fit η = %.3g ± %.2g%s", pump, eta, etaStdError,
+                staticRun.isPresent() ? " (from the refreshed run)" : ""));
+        staticRun.ifPresent(s -> out.add(String.format(Locale.ROOT, "  static run%s alone: η = %.3g, charged fraction before "
+                + "a pulse %.3g (trions from earlier pulses; its η is not the yield)", Double.isNaN(s.periodS()) ? ""
+                : " at " + new java.math.BigDecimal(1e-6 / s.periodS()).round(new java.math.MathContext(3)).stripTrailingZeros()
+                .toPlainString() + " MHz", s.eta(), s.chargedFraction())));
         earlyLate.ifPresent(e -> out.add(String.format(Locale.ROOT, "  early/late A/B → 1 + η = %.4g ± %.2g (η = %.3g; A at "
                 + "%.3g ps, B at %.3g ps, %d weakest traces)", e.limit(), e.limitStdError(), e.eta(), e.earlyS() * 1e12,
                 e.lateS() * 1e12, e.x().length)));

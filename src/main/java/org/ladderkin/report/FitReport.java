@@ -28,6 +28,15 @@ public final class FitReport {
      * @param planRows rows (quantity, plan, fit, note) comparing with the plan, or empty
      */
     public static String html(Dataset data, LadderFit.Outcome outcome, List<List<String>> planRows) {
+        return html(data, outcome, planRows, null);
+    }
+
+    /**
+     * @param planRows rows (quantity, plan, fit, note) comparing with the plan, or empty
+     * @param yields   what comes with a freed multiplication yield, or null
+     */
+    public static String html(Dataset data, LadderFit.Outcome outcome, List<List<String>> planRows,
+                              org.ladderkin.fit.YieldSummary yields) {
         FitResult r = outcome.result();
         HtmlPage page = new HtmlPage("Global fit of a fluence series");
         page.paragraph("Data: " + String.join(", ", data.sourceFiles()) + " — " + data.size() + " traces, fitted with the "
@@ -61,6 +70,14 @@ public final class FitReport {
                             : "not determined (the data do not constrain it)", total, profile));
         }
         page.table(List.of("parameter", "value", "statistical error", "total error (with calibration)", "68% profile interval"), rows);
+        if (yields != null) {
+            page.heading(2, "Multiplication yield");
+            // the terminal's lines, without their margin: one wording for both
+            page.bullets(yields.lines().stream().filter(l -> !l.startsWith("! ")).map(String::strip).toList());
+            if (yields.upperBound()) {
+                page.block("caution", yields.reason());
+            }
+        }
         if (outcome.fluenceScaleUncertainty() > 0) {
             page.paragraph(String.format(Locale.ROOT, "Total errors add a %s%% fluence calibration uncertainty (a common "
                     + "factor on every trace's excitation, treated as a nuisance parameter with a Gaussian prior).",

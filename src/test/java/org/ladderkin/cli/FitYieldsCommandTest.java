@@ -65,4 +65,26 @@ class FitYieldsCommandTest {
         assertThat(run.err().strip()).startsWith("ladderkin: " + b + ":5:").contains("stdError").contains("cannot be weighted");
         assertThat(run.err().strip().lines()).hasSize(1);
     }
+
+    @Test
+    void aResultWithARefreshedRunGivesTheRefreshedRunsYield(@TempDir Path dir) throws Exception {
+        Path charged = dir.resolve("charged.json");
+        // 'parameters' hold the static run's η, inflated by trions; the reported η is the refreshed run's
+        Files.writeString(charged, """
+                {
+                  "schema": "ladderkin.fit-result/1",
+                  "photonEnergyEv": 7,
+                  "parameters": {"multiplicationYield": {"value": 0.9, "stdError": 0.03, "fixed": false}},
+                  "multiplicationYield": {"eta": {"value": 0.3, "stdError": 0.05}, "from": "refreshed run"}
+                }
+                """);
+        MainTest.Run run = MainTest.run("fit-yields", result(dir, "a.json", 5, "0.05", "0.03").toString(),
+                result(dir, "b.json", 6, "0.2", "0.03").toString(), charged.toString(), "--gap", "2eV", "--format", "json",
+                "--quiet");
+        assertThat(run.exit()).as(run.err()).isZero();
+        JsonNode point = new ObjectMapper().readTree(run.out()).get("points").get(2);
+        assertThat(point.get("result").asText()).isEqualTo("charged.json");
+        assertThat(point.get("quantumYield").asDouble()).isEqualTo(1.3);
+        assertThat(point.get("stdError").asDouble()).isEqualTo(0.05);
+    }
 }
