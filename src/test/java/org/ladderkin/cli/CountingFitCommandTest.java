@@ -53,6 +53,8 @@ class CountingFitCommandTest {
         assertThat(d).isBetween(dof - 5 * Math.sqrt(2.0 * dof), dof + 5 * Math.sqrt(2.0 * dof));
         assertThat(root.get("histograms")).hasSize(3);
         assertThat(Files.exists(dir.resolve("out/fit-result.json"))).isTrue();
+        String report = Files.readString(dir.resolve("out/fit-report.html"));
+        assertThat(report).contains("Poisson deviance", "Histograms and fit", "tcspc.csv").doesNotContain("NaN");
     }
 
     private static MainTest.Run fitCounts(Path dir, String table, String... more) throws Exception {
