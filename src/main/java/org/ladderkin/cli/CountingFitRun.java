@@ -22,6 +22,7 @@ import org.ladderkin.fit.counting.InstrumentResponse;
 import org.ladderkin.fit.counting.IntegratedPlFit;
 import org.ladderkin.fit.counting.LikelihoodResult;
 import org.ladderkin.fit.counting.PileUp;
+import org.ladderkin.io.AtomicFiles;
 import org.ladderkin.io.HistogramReader;
 import org.ladderkin.io.InputException;
 import org.ladderkin.io.InputProblem;
@@ -35,6 +36,8 @@ import org.ladderkin.io.TraceArguments;
 import org.ladderkin.io.TraceTableReader;
 import org.ladderkin.kinetics.process.LadderModel;
 import org.ladderkin.observe.MeasuredIrf;
+import org.ladderkin.report.CountingFitReport;
+import org.ladderkin.report.FitReport;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Quantity;
 import org.ladderkin.units.Units;
@@ -137,13 +140,25 @@ final class CountingFitRun {
         if (c.outDir != null) {
             Files.createDirectories(c.outDir);
             ResolvedJson.write(c.outDir.resolve("fit-result.json"), json);
+            List<String> files = new ArrayList<>(c.dataFiles.stream().map(Path::toString).toList());
+            if (o.taFiles != null) {
+                o.taFiles.forEach(f -> files.add(f.toString()));
+            }
+            List<String> notes = new ArrayList<>();
+            notes.add("Instrument response: " + (response.isMeasured() ? FitReport.measuredIrfNote(response.measuredIrf())
+                    : "Gaussian") + "; its shift is fitted.");
+            if (o.pileUpCycles != null) {
+                notes.add("Pile-up: classical dead-time correction (Coates 1968) over " + o.pileUpCycles + " excitation cycles.");
+            }
+            AtomicFiles.writeString(c.outDir.resolve("fit-report.html"),
+                    CountingFitReport.html(new CountingFitReport.Input(files, histograms, ta, r, notes)));
         }
         if (c.format.equals("json")) {
             out.print(ResolvedJson.toText(json));
         } else {
             summary(out, r, histograms);
             if (c.outDir != null) {
-                out.println("wrote " + c.outDir.resolve("fit-result.json"));
+                out.println("wrote " + c.outDir.resolve("fit-report.html") + " and fit-result.json");
             }
         }
         out.flush();

@@ -53,6 +53,39 @@ class CountingFitCommandTest {
         assertThat(d).isBetween(dof - 5 * Math.sqrt(2.0 * dof), dof + 5 * Math.sqrt(2.0 * dof));
         assertThat(root.get("histograms")).hasSize(3);
         assertThat(Files.exists(dir.resolve("out/fit-result.json"))).isTrue();
+        String report = Files.readString(dir.resolve("out/fit-report.html"));
+        assertThat(report).contains("Poisson deviance", "Histograms and fit", "tcspc.csv").doesNotContain("NaN");
+    }
+
+    @Test
+    void aJointFitWritesAReportWithBothDataSetsAndEscapedHeaders(@TempDir Path dir) throws Exception {
+        Path csv = table(dir);
+        Files.writeString(csv, Files.readString(csv).replaceFirst(",pl0,", ",<script>pl0</script>,"));
+        org.ladderkin.fit.Dataset ta = JointFitTest.ta(4);
+        StringBuilder b = new StringBuilder("delay (ps)");
+        for (org.ladderkin.fit.Trace t : ta.traces()) {
+            b.append(',').append(t.label()).append(',').append(t.label()).append(" err");
+        }
+        b.append('\n');
+        for (int m = 0; m < ta.traces().get(0).delaysS().length; m++) {
+            b.append(String.format(Locale.ROOT, "%.6g", ta.traces().get(0).delaysS()[m] * 1e12));
+            for (org.ladderkin.fit.Trace t : ta.traces()) {
+                b.append(String.format(Locale.ROOT, ",%.8g,%.8g", t.signal()[m], t.sigma()[m]));
+            }
+            b.append('\n');
+        }
+        Path taFile = dir.resolve("ta.csv");
+        Files.writeString(taFile, b.toString());
+        MainTest.Run fit = MainTest.run("fit", csv.toString(), "--counts", "--irf", "80ps", "--tau-rad", "15ns",
+                "--tau-auger2", "150ps", "--free", "scale,tau-rad,tau-auger2", "--fluences", "6e13,2e14,6e14",
+                "--ta", taFile.toString(), "--ta-fluences", "6e13,2e14,6e14", "--quiet", "--out", dir.resolve("out").toString());
+        assertThat(fit.exit()).as(fit.err()).isZero();
+        String html = Files.readString(dir.resolve("out/fit-report.html"));
+        assertThat(html).contains("Joint fit of TA traces and photon-counting histograms", "Histograms and fit",
+                "TA traces and fit", "ta.csv", "tcspc.csv", "Shared by both data sets: σ (cm²)", "histograms only");
+        assertThat(html).doesNotContain("<script").contains("&lt;script&gt;pl0&lt;/script&gt;");
+        assertThat(html).doesNotContain("NaN").doesNotContain("Infinity");
+        assertThat(Files.exists(dir.resolve("out/fit-result.json"))).isTrue();
     }
 
     private static MainTest.Run fitCounts(Path dir, String table, String... more) throws Exception {

@@ -58,7 +58,7 @@ public class JointFitTest {
         return out;
     }
 
-    static Dataset ta(long seed) {
+    public static Dataset ta(long seed) {
         SplittableRandom rng = new SplittableRandom(seed);
         double[] delays = new double[60];
         for (int m = 0; m < delays.length; m++) {
@@ -85,7 +85,7 @@ public class JointFitTest {
         return Math.sqrt(-2 * Math.log(1 - rng.nextDouble())) * Math.cos(2 * Math.PI * rng.nextDouble());
     }
 
-    static CountingFit.Setup setup() {
+    public static CountingFit.Setup setup() {
         LadderModel start = TRUTH.withSeconds(org.ladderkin.kinetics.process.RadiativeProcess.LIFETIME, 15e-9)
                 .withSeconds(org.ladderkin.kinetics.process.AugerProcess.BIEXCITON_LIFETIME, 150e-12);
         return new CountingFit.Setup(start, 0.7 * SIGMA_M2, true, Set.of("tau-rad", "tau-auger2"), Double.NaN,
