@@ -69,12 +69,14 @@ public final class PlanForms {
                     "wavelength where your cross-section holds"),
             FieldSpec.quantity("Path length", "sample.pathLength", Dimension.LENGTH, "optical path length of the cell or film"),
             libraryChoice("Matrix", "sample.matrix", LIBRARY_MATRICES, "solvent or film host from the library"),
-            FieldSpec.choice("Refresh", "sample.refresh.mode", List.of("static", "stirred", "flowing"),
-                    "how the excited volume is renewed between pulses"),
+            FieldSpec.choice("Refresh", "sample.refresh.mode", List.of("static", "stirred", "flowing",
+                    "translated"), "how the excited volume is renewed between pulses (a film: translated under the beam)"),
             FieldSpec.optionalQuantity("Flow rate", "sample.refresh.flowRate", Dimension.VOLUMETRIC_FLOW,
                     "volumetric flow, only for a flowing cell"),
             FieldSpec.optionalQuantity("Cell volume", "sample.refresh.cellVolume", Dimension.VOLUME,
-                    "volume of the flow cell, only for a flowing cell"));
+                    "volume of the flow cell, only for a flowing cell"),
+            FieldSpec.optionalQuantity("Translation speed", "sample.refresh.speed", Dimension.SPEED,
+                    "speed the film moves under the beam, only when translated (a fresh spot every pump diameter / speed)"));
 
     /** Laser and geometry. */
     public static final List<FieldSpec> LASER = List.of(
