@@ -49,9 +49,10 @@ public final class PlanForms {
             FieldSpec.text("Sample name", "sample.name", false, "your name for the batch"),
             libraryChoice("Material", "sample.material", LIBRARY_MATERIALS, "material from the library (see 'ladderkin materials')"),
             FieldSpec.optionalQuantity("Diameter", "sample.diameter", Dimension.LENGTH,
-                    "core diameter; give either this or the first-exciton peak"),
+                    "core diameter (sets the volume); give it, the first-exciton peak, or both"),
             FieldSpec.optionalQuantity("First-exciton peak", "sample.firstExcitonPeak", Dimension.LENGTH,
-                    "measured first absorption peak; give either this or the diameter"),
+                    "measured first absorption peak (sets E₁S); alone it needs the material's sizing curve, "
+                            + "beside the diameter the peak sets E₁S and the size the volume"),
             FieldSpec.fraction("Size dispersion", "sample.sizeDispersion", true,
                     "relative standard deviation of the diameter, e.g. 6 %"),
             FieldSpec.optionalQuantity("Absorbance", "sample.absorbance.value", Dimension.ABSORBANCE,
