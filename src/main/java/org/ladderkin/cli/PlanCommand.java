@@ -125,6 +125,7 @@ final class PlanCommand implements Callable<Integer> {
             if (d.counting() != null) {
                 out.println("  tcspc       " + ModeSections.countingLine(d));
                 d.counting().notPlanned().forEach(n -> out.println("              not planned: " + n));
+                out.println("              " + ModeSections.defaultsLine(plan, ModeSections.Mode.COUNTING));
             }
         }
         if (plan.multiplicationPlan() != null) {

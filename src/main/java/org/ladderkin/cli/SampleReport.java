@@ -38,7 +38,9 @@ final class SampleReport {
                 + spec.matrix().map(m -> ", in " + m.name()).orElse("") + ", " + spec.refresh().key()
                 + (spec.refresh().mode() == org.ladderkin.sample.Refresh.Mode.FLOWING
                 ? " at " + fmt(spec.refresh().flowRateM3PerS(), Dimension.VOLUMETRIC_FLOW) + " through "
-                + org.ladderkin.material.Numbers.sig(spec.refresh().cellVolumeM3() * 1e6, 4) + " mL" : ""));
+                + org.ladderkin.material.Numbers.sig(spec.refresh().cellVolumeM3() * 1e6, 4) + " mL"
+                : spec.refresh().mode() == org.ladderkin.sample.Refresh.Mode.TRANSLATED
+                ? " at " + fmt(spec.refresh().speedMPerS(), Dimension.SPEED) : ""));
         spec.spectrum().ifPresent(sp -> out.println("         absorption spectrum " + sp.origin()));
         if (!spec.material().notes().isEmpty()) {
             out.println("         " + spec.material().notes());
@@ -73,6 +75,9 @@ final class SampleReport {
             o.put("flowRateMlPerMin", spec.refresh().flowRateM3PerS() * 6e7);
             o.put("cellVolumeMl", spec.refresh().cellVolumeM3() * 1e6);
             o.put("exchangeTimeS", spec.refresh().exchangeTimeS());
+        }
+        if (spec.refresh().mode() == org.ladderkin.sample.Refresh.Mode.TRANSLATED) {
+            o.put("translationSpeedMmPerS", spec.refresh().speedMPerS() * 1e3);
         }
         spec.spectrum().ifPresent(sp -> o.put("absorptionSpectrum", sp.origin()));
         double tau2 = spec.material().biexcitonAugerLifetimeS(s.sizeM());

@@ -149,9 +149,11 @@ public final class SampleCodec {
     }
 
     private static Refresh refresh(Node n) {
-        String mode = n.field("mode").choice("static", "stirred", "flowing");
+        String mode = n.field("mode").choice("static", "stirred", "flowing", "translated");
         Refresh r;
-        if (mode.equals("flowing")) {
+        if (mode.equals("translated")) {
+            r = Refresh.translated(n.field("speed").positive(Dimension.SPEED, null));
+        } else if (mode.equals("flowing")) {
             double flow = n.field("flowRate").positive(Dimension.VOLUMETRIC_FLOW, null);
             double volume = n.field("cellVolume").positive(Dimension.VOLUME, null);
             r = Refresh.flowing(flow, volume);

@@ -89,9 +89,9 @@ public record GainPlan(int degeneracy, double thresholdN, double thresholdShifte
         notPlanned.add(String.format(Locale.ROOT, "the biexciton shift (no value in the library; a repulsive shift far beyond "
                 + "the line width lowers the threshold to ⟨N⟩ = %.3g): measure it and give the threshold again", nShift));
         notPlanned.add("losses: a lasing threshold lies above this transparency point by the cavity or waveguide loss");
-        if (film) {
-            notPlanned.add("refresh of a static film: translate it so each pulse meets a fresh spot (the plan models it as "
-                    + "static)");
+        if (film && !Double.isFinite(model.refreshS())) {
+            notPlanned.add("refresh of a static film: give \"refresh\": {\"mode\": \"translated\", \"speed\": ...} "
+                    + "if it is moved under the beam (the plan models it as static)");
         }
         return new GainPlan(g, nTh, nShift, energy, fluence, reachable, at, life, tau2, perPulse, heat.steadyRiseK(), risks,
                 notPlanned);

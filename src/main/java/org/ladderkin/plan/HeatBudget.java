@@ -52,7 +52,22 @@ public record HeatBudget(double heatFraction, double heatPowerW, double steadyRi
                 : Math.sqrt(2 * ex.geometry().pump().effectiveAreaM2() / Math.PI);
         double perPulse = Heating.perPulseVolumeRiseK(heatPerDot, s.numberDensityPerM3(), medium);
         if (matrix.kind() == Matrix.Kind.FILM) {
-            return new HeatBudget(fraction, power, Heating.steadyRiseFilmK(power, radius, FUSED_SILICA), perPulse, dotJump,
+            double steady = Heating.steadyRiseFilmK(power, radius, FUSED_SILICA);
+            double dwellS = s.spec().refresh().translationRefreshS(2 * radius);
+            if (Double.isFinite(dwellS)) {
+                // a spot under the beam for D/v warms at most as much as that many pulses with no conduction, and never
+                // more than a resting spot: either bound holds, so the smaller one does
+                double pulses = Math.max(1, ex.pulse().repetitionRateHz() * dwellS);
+                double accumulated = perPulse * pulses;
+                if (Double.isFinite(accumulated) && accumulated < steady) {
+                    return new HeatBudget(fraction, power, accumulated, perPulse, dotJump, Double.POSITIVE_INFINITY,
+                            String.format(java.util.Locale.ROOT, "film translated under the beam: %.3g pulses per spot, "
+                                    + "each adding the per-pulse rise (no conduction, an upper bound)", pulses));
+                }
+                return new HeatBudget(fraction, power, steady, perPulse, dotJump, Double.POSITIVE_INFINITY,
+                        "film on fused silica, conduction into the substrate (bounds the translated film too)");
+            }
+            return new HeatBudget(fraction, power, steady, perPulse, dotJump,
                     Double.POSITIVE_INFINITY, "film on fused silica, conduction into the substrate");
         }
         double rise = Heating.steadyRiseLiquidK(power, radius, s.spec().pathLengthM(), WALL_DISTANCE_M, medium);

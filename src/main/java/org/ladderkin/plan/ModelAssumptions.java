@@ -97,8 +97,16 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
         }
     }
 
-    /** The model for a sample: material values scaled to its size, then the plan's overrides. */
+    /** As {@link #forSample(Sample, Overrides, double)} for a sample that is not translated under the beam. */
     public static ModelAssumptions forSample(Sample sample, Overrides o) {
+        return forSample(sample, o, Double.NaN);
+    }
+
+    /**
+     * The model for a sample: material values scaled to its size, then the plan's overrides; a translated sample is
+     * refreshed once it has moved a pump 1/e² diameter {@code pumpDiameterM}.
+     */
+    public static ModelAssumptions forSample(Sample sample, Overrides o, double pumpDiameterM) {
         List<String> bases = new ArrayList<>();
         var m = sample.material();
         if (Double.isNaN(o.tauSingleExcitonS()) && !m.singleExcitonLifetimeS().known()) {
@@ -143,11 +151,14 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
             case STATIC -> Double.POSITIVE_INFINITY;
             case STIRRED -> DEFAULT_STIRRED_REFRESH_S;
             case FLOWING -> refresh.exchangeTimeS();
+            case TRANSLATED -> refresh.translationRefreshS(pumpDiameterM);
         };
         bases.add("refresh: " + switch (refresh.mode()) {
             case STATIC -> "static sample, no exchange";
             case STIRRED -> "stirred, excited volume renewed in ~0.1 s (common practice, no source)";
             case FLOWING -> "flowing, cell volume / flow rate";
+            case TRANSLATED -> String.format(java.util.Locale.ROOT, "translated, pump 1/e² diameter / speed = %.3g mm / "
+                    + "%.3g mm/s", pumpDiameterM * 1e3, refresh.speedMPerS() * 1e3);
         });
         for (ProcessSpec p : o.processes()) {
             for (ProcessParameter pp : p.type().parameters()) {

@@ -80,7 +80,7 @@ public final class Planner {
         }
         LaserSetup laser = in.laser();
         int g = (int) Math.round(sample.material().electronDegeneracy().value());
-        ModelAssumptions model = ModelAssumptions.forSample(sample, in.modelOverrides());
+        ModelAssumptions model = ModelAssumptions.forSample(sample, in.modelOverrides(), 2 * laser.pumpRadiusM());
         KineticModel km = model.kineticModel(g);
         BeamProfile pump = new GaussianBeam(laser.pumpRadiusM());
         BeamProfile probe = new GaussianBeam(laser.probeRadiusM());
@@ -205,9 +205,8 @@ public final class Planner {
                 in.limits().maxTemperatureRiseK(), heat.boilingPointK()), at));
         Risk charging = evaluatedAt(PulseTrainRisks.chargingRisk(chosenRate.charged(), in.limits().maxChargedFraction()), at);
         if (sample.spec().matrix().map(m -> m.kind() == org.ladderkin.sample.Matrix.Kind.FILM).orElse(false)) {
-            // a film cannot be stirred: it is refreshed by moving it under the beam
-            charging = new Risk(charging.name(), charging.verdict(), charging.value(), charging.limit(), charging.unit(),
-                    charging.why().replace("stir or flow the sample", "translate the film so each pulse meets a fresh spot"));
+            charging = FilmTranslation.advise(charging, km, top(nSeries), period, in.limits().maxChargedFraction(),
+                    sample.spec().refresh(), 2 * laser.pumpRadiusM());
         }
         risks.add(charging);
         risks.add(evaluatedAt(PulseTrainRisks.residualRisk(chosenRate.residual(), in.limits().maxResidualExcitation()), at));

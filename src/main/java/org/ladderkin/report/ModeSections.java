@@ -6,6 +6,8 @@ import java.util.Locale;
 import org.ladderkin.plan.CampaignPlan;
 import org.ladderkin.plan.DelayPlan;
 import org.ladderkin.plan.MultiplicationPlan;
+import org.ladderkin.sample.CrossSection;
+import org.ladderkin.sample.SampleSpec;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Quantity;
 
@@ -56,6 +58,7 @@ public final class ModeSections {
         }
         lines.add("Yield prior: " + MultiplicationPlan.priorSource() + ".");
         m.notPlanned().forEach(x -> lines.add("Not planned: " + x + "."));
+        lines.add(defaultsLine(plan, Mode.MULTIPLICATION));
         return lines;
     }
 
@@ -74,7 +77,63 @@ public final class ModeSections {
         lines.add(String.format(Locale.ROOT, "Heating at the series' top: %.3g K per pulse, %.3g K steady.", g.perPulseRiseK(),
                 g.steadyRiseK()));
         g.notPlanned().forEach(n -> lines.add("Not planned: " + n + "."));
+        lines.add(defaultsLine(plan, Mode.GAIN));
         return lines;
+    }
+
+    /** The campaign modes whose rows name the library values they rest on. */
+    public enum Mode { COUNTING, MULTIPLICATION, GAIN }
+
+    /**
+     * The library values {@code mode} rests on that the plan did not give, each with its source: a reader sees which
+     * numbers are the library's guesses for their sample before trusting the mode's rows.
+     */
+    public static String defaultsLine(CampaignPlan plan, Mode mode) {
+        List<String> used = new ArrayList<>();
+        var sample = plan.inputs().sample();
+        var material = sample.material();
+        double pumpM = plan.chosenWavelength().wavelengthM();
+        var sigma = sample.crossSectionAt(pumpM);
+        if (sigma.regime() != CrossSection.Regime.USER && sigma.regime() != CrossSection.Regime.MEASURED) {
+            used.add("σ at " + q(pumpM, Dimension.LENGTH) + ": " + sigma.basis());
+        }
+        var size = sample.spec().size();
+        if (!(size instanceof SampleSpec.ByDiameterAndPeak)) {
+            material.sizing().ifPresent(c -> used.add((size instanceof SampleSpec.ByDiameter ? "E₁S from the size"
+                    : "size from the peak") + " by the sizing curve: " + c.source()));
+        }
+        // the charging and residual judgements of every mode rest on the ionisation and the photocharge lifetime too
+        List<String> lifetimes = switch (mode) {
+            case COUNTING -> List.of("τ₁", "PL quantum yield", "Auger ionisation probability", "photocharge lifetime");
+            case MULTIPLICATION -> List.of("τ₁", "τ₂", "negative-trion lifetime", "positive-trion lifetime",
+                    "Auger ionisation probability", "photocharge lifetime");
+            case GAIN -> List.of("τ₂", "Auger ionisation probability", "photocharge lifetime");
+        };
+        for (String b : plan.model().bases()) {
+            for (String what : lifetimes) {
+                if (b.startsWith(what + ": ") && !b.equals(what + ": plan")) {
+                    used.add(b);
+                }
+            }
+            if (b.startsWith("refresh: stirred")) {
+                used.add(b);
+            }
+        }
+        if (mode != Mode.MULTIPLICATION) {
+            sample.spec().matrix().ifPresent(m -> used.add(m.name() + " heat capacity: density "
+                    + m.densityKgPerM3().source() + ", specific heat " + m.specificHeatJPerKgK().source()));
+        }
+        if (mode == Mode.MULTIPLICATION) {
+            used.add("yield law: " + MultiplicationPlan.priorSource());
+        }
+        if (mode == Mode.GAIN) {
+            used.add(String.format(Locale.ROOT, "band-edge degeneracy %.0f: %s", material.electronDegeneracy().value(),
+                    material.electronDegeneracy().source()));
+            used.add("dot heat capacity: density " + material.densityKgPerM3().source() + ", specific heat "
+                    + material.specificHeatJPerKgK().source());
+        }
+        return used.isEmpty() ? "Defaults used: none (every value this mode rests on was given in the plan)."
+                : "Defaults used: " + String.join("; ", used) + ".";
     }
 
     private static String q(double si, Dimension d) {

@@ -205,6 +205,7 @@ public final class PlanReport {
             } else {
                 lines.add(ModeSections.countingLine(d));
                 d.counting().notPlanned().forEach(n -> lines.add("Not planned by photon counting: " + n + "."));
+                lines.add(ModeSections.defaultsLine(plan, ModeSections.Mode.COUNTING));
             }
         }
         lines.add("Overall risk verdict: " + worst.name() + " (see the risk table).");

@@ -22,6 +22,7 @@ public enum Dimension {
     THERMAL_CONDUCTIVITY("thermal conductivity", "W/(m·K)", "0.13 W/(m·K)"),
     MOLAR_EXTINCTION("molar extinction coefficient", "m²/mol", "1e5 M⁻¹cm⁻¹"),
     VOLUMETRIC_FLOW("volumetric flow rate", "m³/s", "5 mL/min"),
+    SPEED("speed", "m/s", "1 mm/s"),
     DIMENSIONLESS("dimensionless number", "", "0.5");
 
     private final String label;

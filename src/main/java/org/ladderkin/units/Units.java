@@ -114,6 +114,11 @@ public final class Units {
         add("L/min", Dimension.VOLUMETRIC_FLOW, 1e-3 / 60);
         add("m³/s", Dimension.VOLUMETRIC_FLOW, 1);
 
+        add("µm/s", Dimension.SPEED, MICRO);
+        add("mm/s", Dimension.SPEED, 1e-3);
+        add("cm/s", Dimension.SPEED, 1e-2);
+        add("m/s", Dimension.SPEED, 1);
+
         add("", Dimension.DIMENSIONLESS, 1);
         add("%", Dimension.DIMENSIONLESS, 0.01);
     }

@@ -70,6 +70,35 @@ public class SampleCodecTest {
         assertThatThrownBy(() -> read(t)).satisfies(input(InputProblem.BAD_CHOICE, "s.json:4:15", "material"));
     }
 
+    private static final String FLOWING = "{ \"mode\": \"flowing\", \"flowRate\": \"5 mL/min\", \"cellVolume\": \"0.5 mL\" }";
+
+    @Test
+    void aTranslatedFilmReadsItsSpeed() {
+        Sample s = read(FILE.replace(FLOWING, "{ \"mode\": \"translated\", \"speed\": \"1 mm/s\" }"));
+        assertThat(s.spec().refresh().mode()).isEqualTo(Refresh.Mode.TRANSLATED);
+        assertThat(s.spec().refresh().speedMPerS()).isEqualTo(1e-3);
+        // a 300 µm spot moved at 1 mm/s: a fresh spot every 0.3 s
+        assertThat(s.spec().refresh().translationRefreshS(300e-6)).isCloseTo(0.3, org.assertj.core.data.Offset.offset(1e-15));
+    }
+
+    @Test
+    void aNegativeSpeedIsReportedAtTheSpeed() {
+        String t = FILE.replace(FLOWING, "{ \"mode\": \"translated\", \"speed\": \"-1 mm/s\" }");
+        assertThatThrownBy(() -> read(t)).satisfies(input(InputProblem.OUT_OF_RANGE, "s.json:10:47", "refresh.speed"));
+    }
+
+    @Test
+    void aSpeedWithoutUnitIsReportedAtTheSpeed() {
+        String t = FILE.replace(FLOWING, "{ \"mode\": \"translated\", \"speed\": \"1\" }");
+        assertThatThrownBy(() -> read(t)).satisfies(input(InputProblem.WRONG_UNIT, "s.json:10:47", "refresh.speed"));
+    }
+
+    @Test
+    void aTranslatedFilmNeedsItsSpeed() {
+        String t = FILE.replace(FLOWING, "{ \"mode\": \"translated\" }");
+        assertThatThrownBy(() -> read(t)).satisfies(input(InputProblem.MISSING_FIELD, "s.json:10:14", "refresh.speed"));
+    }
+
     @Test
     void flowingNeedsTheCellVolume() {
         String t = FILE.replace(", \"cellVolume\": \"0.5 mL\"", "");

@@ -139,6 +139,6 @@ class SampleTest {
     void refreshModesValidate() {
         assertThat(Refresh.flowing(5e-6 / 60, 0.5e-6).exchangeTimeS()).isCloseTo(6.0, org.assertj.core.data.Offset.offset(1e-12));
         assertThatThrownBy(() -> Refresh.flowing(0, 1e-6)).hasMessage("flow rate must be > 0, was 0.0 mL/min");
-        assertThatThrownBy(() -> new Refresh(Refresh.Mode.STATIC, 1e-6, 0)).hasMessage("flow rate and cell volume apply only to a flowing cell");
+        assertThatThrownBy(() -> new Refresh(Refresh.Mode.STATIC, 1e-6, 0, 0)).hasMessage("flow rate and cell volume apply only to a flowing cell");
     }
 }

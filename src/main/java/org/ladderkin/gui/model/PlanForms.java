@@ -49,9 +49,10 @@ public final class PlanForms {
             FieldSpec.text("Sample name", "sample.name", false, "your name for the batch"),
             libraryChoice("Material", "sample.material", LIBRARY_MATERIALS, "material from the library (see 'ladderkin materials')"),
             FieldSpec.optionalQuantity("Diameter", "sample.diameter", Dimension.LENGTH,
-                    "core diameter; give either this or the first-exciton peak"),
+                    "core diameter (sets the volume); give it, the first-exciton peak, or both"),
             FieldSpec.optionalQuantity("First-exciton peak", "sample.firstExcitonPeak", Dimension.LENGTH,
-                    "measured first absorption peak; give either this or the diameter"),
+                    "measured first absorption peak (sets E₁S); alone it needs the material's sizing curve, "
+                            + "beside the diameter the peak sets E₁S and the size the volume"),
             FieldSpec.fraction("Size dispersion", "sample.sizeDispersion", true,
                     "relative standard deviation of the diameter, e.g. 6 %"),
             FieldSpec.optionalQuantity("Absorbance", "sample.absorbance.value", Dimension.ABSORBANCE,
@@ -69,12 +70,14 @@ public final class PlanForms {
                     "wavelength where your cross-section holds"),
             FieldSpec.quantity("Path length", "sample.pathLength", Dimension.LENGTH, "optical path length of the cell or film"),
             libraryChoice("Matrix", "sample.matrix", LIBRARY_MATRICES, "solvent or film host from the library"),
-            FieldSpec.choice("Refresh", "sample.refresh.mode", List.of("static", "stirred", "flowing"),
-                    "how the excited volume is renewed between pulses"),
+            FieldSpec.choice("Refresh", "sample.refresh.mode", List.of("static", "stirred", "flowing",
+                    "translated"), "how the excited volume is renewed between pulses (a film: translated under the beam)"),
             FieldSpec.optionalQuantity("Flow rate", "sample.refresh.flowRate", Dimension.VOLUMETRIC_FLOW,
                     "volumetric flow, only for a flowing cell"),
             FieldSpec.optionalQuantity("Cell volume", "sample.refresh.cellVolume", Dimension.VOLUME,
-                    "volume of the flow cell, only for a flowing cell"));
+                    "volume of the flow cell, only for a flowing cell"),
+            FieldSpec.optionalQuantity("Translation speed", "sample.refresh.speed", Dimension.SPEED,
+                    "speed the film moves under the beam, only when translated (a fresh spot every pump diameter / speed)"));
 
     /** Laser and geometry. */
     public static final List<FieldSpec> LASER = List.of(

@@ -145,13 +145,15 @@ class PlanEditorTest {
 
     @Test
     void aProblemNoFieldShowsIsAGeneralProblem() {
-        editor.edit(DIAMETER, "4 nm");
+        // a concentration beside the absorbance says the amount twice: the conflict is the sample's, not one field's
+        FieldSpec concentration = field("sample.concentration");
+        editor.edit(concentration, "2 µM");
         assertThat(editor.check().field()).isEqualTo("sample");
-        assertThat(editor.problem(DIAMETER)).isEmpty();
+        assertThat(editor.problem(concentration)).isEmpty();
         assertThat(editor.check().key()).isEqualTo(InputProblem.CONFLICT);
         assertThat(editor.generalProblem()).contains("'sample': " + editor.check().problem());
-        editor.edit(DIAMETER, "");
-        assertThat(editor.document().at("/sample").has("diameter")).as("blank optional field removes the key").isFalse();
+        editor.edit(concentration, "");
+        assertThat(editor.document().at("/sample").has("concentration")).as("blank optional field removes the key").isFalse();
         assertThat(editor.check().valid()).isTrue();
     }
 
