@@ -104,12 +104,7 @@ public final class ModelCodec {
         @Override
         public double seconds(ProcessParameter p) {
             Node n = at(p);
-            double x = n.positive(Dimension.TIME, null);
-            String problem = p.problemWith(x);
-            if (problem != null) {
-                throw n.error(InputProblem.OUT_OF_RANGE, problem);
-            }
-            return x;
+            return ParameterRange.check(p, n, n.positive(Dimension.TIME, null));
         }
 
         @Override
@@ -118,12 +113,7 @@ public final class ModelCodec {
             if (p.kind() == ParameterKind.PROBABILITY) {
                 return n.probability();
             }
-            double x = n.number();
-            String problem = x < 0 ? "must be >= 0, was " + x : p.problemWith(x);
-            if (problem != null) {
-                throw n.error(InputProblem.OUT_OF_RANGE, problem);
-            }
-            return x;
+            return ParameterRange.check(p, n, n.number());
         }
 
         @Override

@@ -341,21 +341,13 @@ public final class PlanCodec {
         @Override
         public double seconds(ProcessParameter p) {
             Node v = section.field(p.planKey());
-            return inRange(p, v, v.positive(Dimension.TIME, null));
+            return ParameterRange.check(p, v, v.positive(Dimension.TIME, null));
         }
 
         @Override
         public double number(ProcessParameter p) {
             Node v = section.field(p.planKey());
-            return inRange(p, v, p.kind() == ParameterKind.PROBABILITY ? v.probability() : v.number());
-        }
-
-        private static double inRange(ProcessParameter p, Node v, double x) {
-            String problem = x < 0 ? "must be >= 0, was " + x : p.problemWith(x);
-            if (problem != null) {
-                throw v.error(InputProblem.OUT_OF_RANGE, problem);
-            }
-            return x;
+            return ParameterRange.check(p, v, p.kind() == ParameterKind.PROBABILITY ? v.probability() : v.number());
         }
 
         @Override
