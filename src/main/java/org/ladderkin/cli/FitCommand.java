@@ -192,7 +192,8 @@ final class FitCommand implements Callable<Integer> {
         Dataset data = metadata(TraceTableReader.readAll(dataFiles, table));
         PlanFitBasis basis = planFile == null ? null : PlanFitBasis.of(PlanCodec.read(planFile));
         // with only a plan, the fit starts from the plan's own ladder (the one its predictions use)
-        LadderModel base = modelFile == null && !modelOptions.given() && basis != null ? basis.base() : modelOptions.ladder(modelFile);
+        LadderModel base = modelFile == null && !modelOptions.given() && basis != null ? modelOptions.planModel(basis.base())
+                : modelOptions.ladder(modelFile);
         Set<LadderParameter> freed = new LinkedHashSet<>();
         for (String f : free == null ? List.of("scale", "tau-auger2") : free) {
             if (!f.isBlank()) {

@@ -96,6 +96,20 @@ final class ModelOptions {
         return ProcessRegistry.read(this::section, degeneracy, nMax == null ? 0 : nMax);
     }
 
+    /**
+     * The plan's model, when no model flag is given beside it. A lone flag (say --tau-trap) would otherwise be dropped
+     * silently; the whole model is given by --tau-rad and --tau-auger2 with the flags, or by a model file.
+     */
+    LadderModel planModel(LadderModel fromPlan) {
+        List<String> ignored = flagsGiven();
+        if (!ignored.isEmpty()) {
+            throw new IllegalArgumentException(String.join(", ", ignored) + (ignored.size() == 1 ? " does" : " do")
+                    + " not combine with the plan's model: give the whole model with " + RadiativeProcess.LIFETIME.flag() + " and "
+                    + AugerProcess.BIEXCITON_LIFETIME.flag() + " (and the other flags), or a model file with --model");
+        }
+        return fromPlan;
+    }
+
     /** The model flags on the command line (registry flags and --degeneracy), in registry order. */
     private List<String> flagsGiven() {
         List<String> given = new java.util.ArrayList<>();

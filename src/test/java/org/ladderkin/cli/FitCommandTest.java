@@ -154,6 +154,17 @@ class FitCommandTest {
         assertThat(root.at("/parameters/timeZeroPs/stdError").isNull()).isTrue();
     }
 
+    /** Beside --plan (whose model the fit starts from), a lone --tau-trap used to be dropped without a word. */
+    @Test
+    void aLoneModelFlagBesideThePlansModelIsRefusedNotIgnored() {
+        MainTest.Run fit = MainTest.run("fit", MainTest.HOME.resolve("experiments-plan/fh-cdse-ta-series.csv").toString(),
+                "--traces-json", MainTest.HOME.resolve("experiments-plan/fh-cdse-ta-series.traces.json").toString(),
+                "--plan", MainTest.HOME.resolve("experiments-plan/cdse-auger-1khz.plan.json").toString(), "--tau-trap", "1ns");
+        assertThat(fit.exit()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(fit.err().strip().lines()).hasSize(1);
+        assertThat(fit.err()).contains("--tau-trap does not combine with the plan's model");
+    }
+
     @Test
     void calibrationGivesTotalErrorsAndMilliOdHeadersAreReadInOd(@TempDir Path dir) throws Exception {
         Path csv = simulatedSeries(dir, 11);
