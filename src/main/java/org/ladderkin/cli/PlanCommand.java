@@ -121,6 +121,9 @@ final class PlanCommand implements Callable<Integer> {
                     b.delaysS().length, b.grid(), fmt(b.delaysS()[0], Dimension.TIME), fmt(b.delaysS()[b.delaysS().length - 1],
                             Dimension.TIME), fmt(b.timePerPointS(), Dimension.TIME)));
         }
+        if (plan.delayPlans().stream().anyMatch(d -> d.instrument().kind() == org.ladderkin.plan.Instrument.Kind.TRANSIENT_ABSORPTION)) {
+            out.println("  ta          " + ModeSections.defaultsLine(plan, ModeSections.Mode.TRANSIENT_ABSORPTION));
+        }
         for (var d : plan.delayPlans()) {
             if (d.counting() != null) {
                 out.println("  tcspc       " + ModeSections.countingLine(d));

@@ -82,7 +82,7 @@ public final class ModeSections {
     }
 
     /** The campaign modes whose rows name the library values they rest on. */
-    public enum Mode { COUNTING, MULTIPLICATION, GAIN }
+    public enum Mode { TRANSIENT_ABSORPTION, COUNTING, MULTIPLICATION, GAIN }
 
     /**
      * The library values {@code mode} rests on that the plan did not give, each with its source: a reader sees which
@@ -104,6 +104,8 @@ public final class ModeSections {
         }
         // the charging and residual judgements of every mode rest on the ionisation and the photocharge lifetime too
         List<String> lifetimes = switch (mode) {
+            case TRANSIENT_ABSORPTION -> List.of("τ₁", "τ₂", "negative-trion lifetime", "positive-trion lifetime",
+                    "Auger ionisation probability", "photocharge lifetime");
             case COUNTING -> List.of("τ₁", "PL quantum yield", "Auger ionisation probability", "photocharge lifetime");
             case MULTIPLICATION -> List.of("τ₁", "τ₂", "negative-trion lifetime", "positive-trion lifetime",
                     "Auger ionisation probability", "photocharge lifetime");

@@ -202,6 +202,7 @@ public final class PlanReport {
                         q(d.timePerFluenceS(), Dimension.TIME)));
                 lines.add(String.format(Locale.ROOT, "Early/late windows: early %s, late %s%s.", q(d.windows().earlyS(), Dimension.TIME),
                         q(d.windows().lateS(), Dimension.TIME), d.windows().separated() ? "" : " (time scales overlap)"));
+                lines.add(ModeSections.defaultsLine(plan, ModeSections.Mode.TRANSIENT_ABSORPTION));
             } else {
                 lines.add(ModeSections.countingLine(d));
                 d.counting().notPlanned().forEach(n -> lines.add("Not planned by photon counting: " + n + "."));

@@ -47,4 +47,12 @@ class ModeDefaultsTest {
                 .doesNotContain("τ₂:");
         assertThat(ModeSections.gainLines(plan)).contains(line);
     }
+
+    @Test
+    void theCdseTaReportAndTextListTheDefaultsTheAugerSeriesRestsOn() {
+        CampaignPlan plan = plan("cdse-auger-1khz.plan.json");
+        String line = ModeSections.defaultsLine(plan, ModeSections.Mode.TRANSIENT_ABSORPTION);
+        assertThat(line).startsWith("Defaults used: ").contains("photocharge lifetime").contains("heat capacity");
+        assertThat(PlanReport.html(plan)).contains(HtmlPage.escape(line));
+    }
 }
