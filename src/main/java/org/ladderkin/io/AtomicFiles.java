@@ -77,7 +77,6 @@ public final class AtomicFiles {
      * running, and old unnamed ones. A killed run otherwise leaves one behind on every kill, and no later run removed them.
      */
     static void removeStaleTemporaries(Path dir, String prefix) {
-        long self = ProcessHandle.current().pid();
         try (var entries = Files.newDirectoryStream(dir, p -> {
             String n = p.getFileName().toString();
             return n.startsWith(prefix) && n.endsWith(".tmp");
@@ -88,8 +87,7 @@ public final class AtomicFiles {
                 int dash = middle.indexOf('-');
                 boolean stale;
                 if (dash > 0 && digits(middle.substring(0, dash)) && digits(middle.substring(dash + 1))) {
-                    long pid = Long.parseLong(middle.substring(0, dash));
-                    stale = pid != self && ProcessHandle.of(pid).map(h -> !h.isAlive()).orElse(true);
+                    stale = !writerRunning(Long.parseLong(middle.substring(0, dash)));
                 } else {
                     stale = digits(middle) && Files.getLastModifiedTime(p).toInstant()
                             .isBefore(java.time.Instant.now().minus(UNOWNED_TEMPORARY_AGE));
@@ -101,6 +99,11 @@ public final class AtomicFiles {
         } catch (IOException | RuntimeException e) {
             // tidying is a courtesy: it must never stop the write the user asked for
         }
+    }
+
+    /** Whether the process that named a temporary file or folder after itself may still be writing it. */
+    static boolean writerRunning(long pid) {
+        return pid == ProcessHandle.current().pid() || ProcessHandle.of(pid).map(ProcessHandle::isAlive).orElse(false);
     }
 
     private static boolean digits(String s) {

@@ -1,6 +1,7 @@
 package org.ladderkin.io;
 
 import java.util.Objects;
+import org.ladderkin.units.Excerpt;
 
 /**
  * Bad input, located as precisely as known. The message reads
@@ -61,32 +62,7 @@ public final class InputException extends RuntimeException {
             String shown = field.length() > MAX_FIELD_SHOWN ? field.substring(0, MAX_FIELD_SHOWN) + "…" : field;
             b.append("field '").append(shown).append("': ");
         }
-        return oneLine(b.append(detail).toString());
-    }
-
-    /** The message on one line whatever the user's text held: control characters are written as escapes. */
-    private static String oneLine(String message) {
-        StringBuilder b = null;
-        for (int i = 0; i < message.length(); i++) {
-            char c = message.charAt(i);
-            boolean control = Character.isISOControl(c) || c == '\u2028' || c == '\u2029';
-            if (control && b == null) {
-                b = new StringBuilder(message.length() + 16).append(message, 0, i);
-            }
-            if (b != null) {
-                if (!control) {
-                    b.append(c);
-                } else if (c == '\n') {
-                    b.append("\\n");
-                } else if (c == '\r') {
-                    b.append("\\r");
-                } else if (c == '\t') {
-                    b.append("\\t");
-                } else {
-                    b.append(String.format("\\u%04x", (int) c));
-                }
-            }
-        }
-        return b == null ? message : b.toString();
+        // the user's text may hold anything: control characters are written as escapes so the message stays one line
+        return Excerpt.escaped(b.append(detail).toString());
     }
 }

@@ -105,8 +105,7 @@ public final class OutputSet implements AutoCloseable {
             return false;
         }
         try {
-            long pid = Long.parseLong(rest.substring(0, dash));
-            return pid == ProcessHandle.current().pid() || ProcessHandle.of(pid).map(ProcessHandle::isAlive).orElse(false);
+            return AtomicFiles.writerRunning(Long.parseLong(rest.substring(0, dash)));
         } catch (NumberFormatException e) {
             return false;
         }

@@ -17,27 +17,29 @@ public final class Excerpt {
         if (text == null) {
             return "null";
         }
-        StringBuilder b = new StringBuilder(Math.min(text.length(), MAX_SHOWN) + 8);
-        int shown = 0;
+        boolean cut = text.length() > MAX_SHOWN;
+        return escaped(cut ? text.substring(0, MAX_SHOWN) : text) + (cut ? "…" : "");
+    }
+
+    /** {@code text} on one line: control characters written as escapes, nothing cut. */
+    public static String escaped(String text) {
+        StringBuilder b = null;
         for (int i = 0; i < text.length(); i++) {
-            if (shown == MAX_SHOWN) {
-                return b.append('…').toString();
-            }
             char c = text.charAt(i);
+            boolean control = Character.isISOControl(c) || c == '\u2028' || c == '\u2029';
+            if (control && b == null) {
+                b = new StringBuilder(text.length() + 16).append(text, 0, i);
+            }
+            if (b == null) {
+                continue;
+            }
             switch (c) {
                 case '\n' -> b.append("\\n");
                 case '\r' -> b.append("\\r");
                 case '\t' -> b.append("\\t");
-                default -> {
-                    if (Character.isISOControl(c) || c == '\u2028' || c == '\u2029') {
-                        b.append(String.format("\\u%04x", (int) c));
-                    } else {
-                        b.append(c);
-                    }
-                }
+                default -> b.append(control ? String.format("\\u%04x", (int) c) : String.valueOf(c));
             }
-            shown++;
         }
-        return b.toString();
+        return b == null ? text : b.toString();
     }
 }
