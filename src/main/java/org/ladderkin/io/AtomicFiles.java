@@ -132,6 +132,8 @@ public final class AtomicFiles {
         Files.setPosixFilePermissions(tmp, perms);
     }
 
+    private static final String WRITE_CHECK_PREFIX = ".ladderkin-write-check.";
+
     /**
      * Makes sure files can be written into {@code dir} (creating it when missing) the way {@link #write} writes them,
      * so a caller can find an unusable output folder before the work whose results go there, not after it.
@@ -145,7 +147,9 @@ public final class AtomicFiles {
                 throw new IOException(dir + ": is a file, not a folder");
             }
             Files.createDirectories(absolute);
-            Files.delete(Files.createTempFile(absolute, ".ladderkin-write-check.", ".tmp"));
+            // named after this process like every temporary file, so one left by a kill is removed by the next run
+            Files.delete(Files.createTempFile(absolute, WRITE_CHECK_PREFIX + ProcessHandle.current().pid() + "-", ".tmp"));
+            removeStaleTemporaries(absolute, WRITE_CHECK_PREFIX);
         } catch (FileSystemException e) {
             throw new IOException(dir + ": " + reason(e), e);
         }

@@ -28,6 +28,17 @@ class AtomicFilesTest {
     }
 
     @Test
+    void aWriteCheckFileLeftByAKilledRunIsRemovedByTheNextCheck(@TempDir Path dir) throws Exception {
+        Process dead = new ProcessBuilder("true").start();
+        dead.waitFor();
+        Path left = Files.createFile(dir.resolve(".ladderkin-write-check." + dead.pid() + "-123.tmp"));
+        Path running = Files.createFile(dir.resolve(".ladderkin-write-check." + ProcessHandle.current().pid() + "-456.tmp"));
+        AtomicFiles.checkWritableFolder(dir);
+        assertThat(left).doesNotExist();
+        assertThat(running).exists();
+    }
+
+    @Test
     void runtimeFailureMidwayAlsoLeavesTheOldFile(@TempDir Path dir) throws IOException {
         Path target = dir.resolve("plan.json");
         Files.writeString(target, "{}");
