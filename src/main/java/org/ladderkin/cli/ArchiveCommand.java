@@ -16,6 +16,7 @@ import org.ladderkin.archive.FitQuery;
 import org.ladderkin.archive.SampleEntry;
 import org.ladderkin.io.ResolvedJson;
 import org.ladderkin.units.PhysicalConstants;
+import org.ladderkin.units.Rounded;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -150,7 +151,7 @@ final class ArchiveCommand implements Callable<Integer> {
                 }
                 for (ArchivedFit f : store.fits(q)) {
                     out.println(String.format(Locale.ROOT, "F%-5d %s  %-28s %s%s%s", f.id(), f.addedAt(), f.sample().name(),
-                            f.parameter("tauAuger2Ps").map(p -> "τ₂ = " + num(p.value()) + " ± " + num(p.bestStdError()) + " ps")
+                            f.parameter("tauAuger2Ps").map(p -> "τ₂ = " + Rounded.pm(p.value(), p.bestStdError()) + " ps")
                                     .orElse(f.fit().status()), f.superseded() ? "  (superseded)" : "",
                             f.fit().warning().isEmpty() ? "" : "  (warning)"));
                 }
@@ -220,8 +221,9 @@ final class ArchiveCommand implements Callable<Integer> {
                 .append(f.fit().toolVersion()).append('\n');
         b.append("  model ").append(f.fit().model()).append(", χ² ").append(num(f.fit().chiSquare())).append('\n');
         for (FitParameter p : f.fit().parameters()) {
-            b.append(String.format(Locale.ROOT, "  %-18s %-12s %s%n", p.key(), num(p.value()), p.fixed() ? "(fixed)"
-                    : "± " + num(p.stdError()) + (Double.isNaN(p.totalStdError()) ? "" : " (stat), ± " + num(p.totalStdError()) + " total")));
+            b.append(String.format(Locale.ROOT, "  %-18s %-12s %s%n", p.key(), p.fixed() ? num(p.value()) : Rounded.value(p.value(), p.stdError()),
+                    p.fixed() ? "(fixed)" : "± " + Rounded.error(p.stdError())
+                            + (Double.isNaN(p.totalStdError()) ? "" : " (stat), ± " + Rounded.error(p.totalStdError()) + " total")));
         }
         for (DataFileHash d : f.fit().dataFiles()) {
             b.append("  data ").append(d.path()).append("  sha256 ").append(d.sha256().isEmpty() ? "unknown" : d.sha256()).append('\n');

@@ -40,6 +40,7 @@ import org.ladderkin.report.CountingFitReport;
 import org.ladderkin.report.FitReport;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Quantity;
+import org.ladderkin.units.Rounded;
 import org.ladderkin.units.Units;
 
 /** {@code fit --counts}: reads histograms (and TA tables for a joint fit), fits by likelihood, prints and writes. */
@@ -213,8 +214,9 @@ final class CountingFitRun {
                     + (r.message().isEmpty() ? "" : " — " + r.message()));
             for (ParameterEstimate e : r.estimates()) {
                 ParameterNaming.TradeKey k = ParameterNaming.trade(e.key());
-                out.println(String.format(Locale.ROOT, "  %-16s %-12.5g %s", k.key(), e.value() * k.factor(),
-                        e.fixed() ? "(fixed)" : "± " + String.format(Locale.ROOT, "%.3g", e.stdError() * k.factor())));
+                out.println(String.format(Locale.ROOT, "  %-16s %-12s %s", k.key(),
+                        e.fixed() ? num5(e.value() * k.factor()) : Rounded.value(e.value() * k.factor(), e.stdError() * k.factor()),
+                        e.fixed() ? "(fixed)" : "± " + Rounded.error(e.stdError() * k.factor())));
             }
             out.println(String.format(Locale.ROOT, "  biexciton emission yield %.3g", o.biexcitonYield()));
         }
@@ -310,8 +312,9 @@ final class CountingFitRun {
         for (ParameterEstimate e : r.estimates()) {
             if (e.shared()) {
                 ParameterNaming.TradeKey t = ParameterNaming.trade(e.key());
-                out.println(String.format(Locale.ROOT, "  %-16s %-12.5g %s", t.key(), e.value() * t.factor(),
-                        e.fixed() ? "(fixed)" : "± " + String.format(Locale.ROOT, "%.3g", e.stdError() * t.factor())));
+                out.println(String.format(Locale.ROOT, "  %-16s %-12s %s", t.key(),
+                        e.fixed() ? num5(e.value() * t.factor()) : Rounded.value(e.value() * t.factor(), e.stdError() * t.factor()),
+                        e.fixed() ? "(fixed)" : "± " + Rounded.error(e.stdError() * t.factor())));
             }
         }
         out.println(String.format(Locale.ROOT, "  Poisson deviance %.2f over %d bins, %d degrees of freedom (P = %.3g)",
@@ -335,5 +338,9 @@ final class CountingFitRun {
             throw new IllegalArgumentException(flag + " must be > 0, was " + text);
         }
         return v;
+    }
+
+    private static String num5(double v) {
+        return String.format(Locale.ROOT, "%.5g", v);
     }
 }

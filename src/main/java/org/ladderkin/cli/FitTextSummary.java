@@ -9,6 +9,7 @@ import org.ladderkin.fit.LadderFit;
 import org.ladderkin.fit.ParameterEstimate;
 import org.ladderkin.fit.ParameterNaming;
 import org.ladderkin.report.FitReport;
+import org.ladderkin.units.Rounded;
 
 /** The terminal summary of a least-squares fit: parameters with their errors, quality, diagnostics and warnings. */
 final class FitTextSummary {
@@ -30,14 +31,16 @@ final class FitTextSummary {
             }
             ParameterNaming.TradeKey t = ParameterNaming.trade(e.key());
             String total = outcome.totalStdError(e.key()).stream()
-                    .mapToObj(v -> String.format(Locale.ROOT, " (stat), ± %.3g total", v * t.factor())).findFirst().orElse("");
+                    .mapToObj(v -> " (stat), ± " + Rounded.error(v * t.factor()) + " total").findFirst().orElse("");
             boolean determined = e.fixed() || Double.isFinite(e.stdError());
             if (!determined) {
                 undetermined.add(t.key());
             }
-            out.println(String.format(Locale.ROOT, "  %-16s %-12.5g %s", t.key(), e.value() * t.factor(),
+            String value = e.fixed() || !determined ? String.format(Locale.ROOT, "%.5g", e.value() * t.factor())
+                    : Rounded.value(e.value() * t.factor(), e.stdError() * t.factor());
+            out.println(String.format(Locale.ROOT, "  %-16s %-12s %s", t.key(), value,
                     e.fixed() ? "(fixed)" : !determined ? "not determined (the data do not constrain it)"
-                            : "± " + String.format(Locale.ROOT, "%.3g", e.stdError() * t.factor()) + total));
+                            : "± " + Rounded.error(e.stdError() * t.factor()) + total));
         }
         if (!undetermined.isEmpty()) {
             out.println("! " + String.join(", ", undetermined) + (undetermined.size() == 1 ? " is" : " are")

@@ -14,6 +14,7 @@ import org.ladderkin.fit.counting.CountingFit;
 import org.ladderkin.fit.counting.InstrumentResponse;
 import org.ladderkin.fit.counting.LikelihoodResult;
 import org.ladderkin.fit.counting.PoissonDeviance;
+import org.ladderkin.units.Rounded;
 
 /**
  * The HTML report of a photon-counting fit ({@code fit --counts}): the histograms with the model on a log-count axis,
@@ -84,8 +85,9 @@ public final class CountingFitReport {
             Shown s = shown(e.key());
             String profile = r.profile(e.key()).map(p -> num(p.lower() * s.factor()) + (p.lowerOpen() ? " (open)" : "")
                     + " … " + num(p.upper() * s.factor()) + (p.upperOpen() ? " (open)" : "")).orElse("");
-            List<String> row = new ArrayList<>(List.of(s.label(), num(e.value() * s.factor()),
-                    e.fixed() ? "fixed" : num(e.stdError() * s.factor()), profile));
+            List<String> row = new ArrayList<>(List.of(s.label(),
+                    e.fixed() ? num(e.value() * s.factor()) : Rounded.value(e.value() * s.factor(), e.stdError() * s.factor()),
+                    e.fixed() ? "fixed" : Rounded.error(e.stdError() * s.factor()), profile));
             if (in.joint()) {
                 boolean shared = !HISTOGRAM_ONLY.contains(e.key());
                 row.add(shared ? "TA and histograms" : "histograms only");
@@ -230,7 +232,7 @@ public final class CountingFitReport {
     }
 
     private static String withError(ParameterEstimate e) {
-        return num(e.value()) + (e.fixed() ? " (fixed)" : " ± " + num(e.stdError()));
+        return e.fixed() ? num(e.value()) + " (fixed)" : Rounded.pm(e.value(), e.stdError());
     }
 
     private static String num(double v) {

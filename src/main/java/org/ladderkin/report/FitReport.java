@@ -13,6 +13,7 @@ import org.ladderkin.fit.Trace;
 import org.ladderkin.observe.MeasuredIrf;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Quantity;
+import org.ladderkin.units.Rounded;
 
 /**
  * The HTML report of a ladder fit: data with the fitted curves on a log delay axis, residuals, the parameter table
@@ -63,10 +64,12 @@ public final class FitReport {
             ParameterNaming.TradeKey t = ParameterNaming.trade(e.key());
             String profile = r.profile(e.key()).map(p -> num(p.lower() * t.factor()) + (p.lowerOpen() ? " (open)" : "") + " … "
                     + num(p.upper() * t.factor()) + (p.upperOpen() ? " (open)" : "")).orElse("");
-            String total = e.fixed() ? "" : outcome.totalStdError(e.key()).stream().mapToObj(v -> num(v * t.factor()))
+            String total = e.fixed() ? "" : outcome.totalStdError(e.key()).stream().mapToObj(v -> Rounded.error(v * t.factor()))
                     .findFirst().orElse("—");
-            rows.add(List.of(ParameterNaming.label(e.key()).withUnit(), num(e.value() * t.factor()),
-                    e.fixed() ? "fixed" : Double.isFinite(e.stdError()) ? num(e.stdError() * t.factor())
+            // the value stops at the statistical error's last digit: more digits claim a precision the fit lacks
+            rows.add(List.of(ParameterNaming.label(e.key()).withUnit(),
+                    e.fixed() ? num(e.value() * t.factor()) : Rounded.value(e.value() * t.factor(), e.stdError() * t.factor()),
+                    e.fixed() ? "fixed" : Double.isFinite(e.stdError()) ? Rounded.error(e.stdError() * t.factor())
                             : "not determined (the data do not constrain it)", total, profile));
         }
         page.table(List.of("parameter", "value", "statistical error", "total error (with calibration)", "68% profile interval"), rows);
@@ -93,8 +96,8 @@ public final class FitReport {
             int trace = i;
             double[] acf = r.autocorrelation().get(i);
             traceRows.add(List.of(data.traces().get(i).label(), num(outcome.meanN()[i]),
-                    r.find("amplitude", i).map(e -> num(e.value()) + " ± " + num(e.stdError())).orElse("shared"),
-                    r.find("baseline", i).map(e -> num(e.value()) + " ± " + num(e.stdError())).orElse("—"),
+                    r.find("amplitude", i).map(e -> Rounded.pm(e.value(), e.stdError())).orElse("shared"),
+                    r.find("baseline", i).map(e -> Rounded.pm(e.value(), e.stdError())).orElse("—"),
                     acf.length == 0 ? "—" : String.format(Locale.ROOT, "%.2f", acf[0]), String.valueOf(trace + 1)));
         }
         page.table(List.of("trace", "⟨N⟩ (fit)", "amplitude", "baseline", "residual autocorrelation, lag 1", "#"), traceRows);

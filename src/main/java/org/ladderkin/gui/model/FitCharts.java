@@ -9,6 +9,7 @@ import org.ladderkin.fit.LadderFit;
 import org.ladderkin.fit.ParameterEstimate;
 import org.ladderkin.report.ChartSpec;
 import org.ladderkin.report.FitReport;
+import org.ladderkin.units.Rounded;
 
 /**
  * What the fit view draws, as plain data: the traces as points over model curves and the residuals on a log delay
@@ -68,8 +69,9 @@ public final class FitCharts {
             }
             Trade t = trade(e.key());
             String unit = t.unit().isEmpty() ? "" : " " + t.unit();
-            String error = e.fixed() ? "" : Double.isFinite(e.stdError()) ? "± " + num(e.stdError() * t.factor()) + unit : "± unavailable";
-            rows.add(new ParameterRow(t.name(), num(e.value() * t.factor()) + unit, error, !e.fixed()));
+            String error = e.fixed() ? "" : Double.isFinite(e.stdError()) ? "± " + Rounded.error(e.stdError() * t.factor()) + unit : "± unavailable";
+            String value = e.fixed() ? num(e.value() * t.factor()) : Rounded.value(e.value() * t.factor(), e.stdError() * t.factor());
+            rows.add(new ParameterRow(t.name(), value + unit, error, !e.fixed()));
         }
         return List.copyOf(rows);
     }

@@ -12,6 +12,7 @@ import org.ladderkin.fit.LadderFit;
 import org.ladderkin.fit.ParameterEstimate;
 import org.ladderkin.fit.ParameterNaming;
 import org.ladderkin.report.FitReport;
+import org.ladderkin.units.Rounded;
 
 /**
  * The fit tab's words: the parameter table (labels with trade units from {@link ParameterNaming}, as in the report)
@@ -33,8 +34,9 @@ final class FitSummary {
             }
             double f = ParameterNaming.trade(e.key()).factor();
             String error = e.fixed() ? "" : !r.converged() ? "not converged"
-                    : Double.isFinite(e.stdError()) ? "± " + num(e.stdError() * f) : "± unavailable";
-            rows.add(new FitCharts.ParameterRow(ParameterNaming.label(e.key()).withUnit(), num(e.value() * f), error, !e.fixed()));
+                    : Double.isFinite(e.stdError()) ? "± " + Rounded.error(e.stdError() * f) : "± unavailable";
+            String value = e.fixed() || !r.converged() ? num(e.value() * f) : Rounded.value(e.value() * f, e.stdError() * f);
+            rows.add(new FitCharts.ParameterRow(ParameterNaming.label(e.key()).withUnit(), value, error, !e.fixed()));
         }
         return List.copyOf(rows);
     }
