@@ -106,6 +106,11 @@ public final class PlanReport {
         if (!plan.inputs().lab().isEmpty()) {
             page.block("note", plan.inputs().lab());
         }
+        org.ladderkin.sample.Sample sample = plan.inputs().sample();
+        // the report must say which sample it plans for: a folder of reports is read long after the plan file is gone
+        page.paragraph(String.format(Locale.ROOT, "Sample %s: %s, diameter %s, first exciton %.3f eV.", sample.spec().name(),
+                sample.spec().material().name(), q(sample.sizeM(), Dimension.LENGTH),
+                sample.firstExcitonEnergyJ() / PhysicalConstants.ELECTRONVOLT_J));
         summary(page, plan);
         String top = highest(plan);
         page.heading(2, "Risks");
