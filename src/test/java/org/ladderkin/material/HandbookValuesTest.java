@@ -5,11 +5,13 @@ import static org.assertj.core.api.Assertions.assertThat;
 import org.junit.jupiter.api.Test;
 import org.ladderkin.io.MaterialLibrary;
 import org.ladderkin.sample.Matrix;
-import org.ladderkin.units.PhysicalConstants;
 import org.ladderkin.validation.CheckedAgainst;
 import org.ladderkin.validation.Reference;
 
-/** Handbook constants as stored in models/, against the NIST WebBook where it is stored here, else the physics notes. */
+/**
+ * Handbook constants as stored in models/, against the NIST WebBook where it is stored here, else the physics notes.
+ * The other matrices' constants are checked in org.ladderkin.validation.MatrixHandbookValuesTest.
+ */
 class HandbookValuesTest {
 
     private static final MaterialLibrary LIB = MaterialLibrary.fromHome();
@@ -76,18 +78,5 @@ class HandbookValuesTest {
         Reference.checkRelative("chloroform molar heat capacity, 298.15 K (J/(mol·K))", molarCp(LIB.matrix("chloroform"), 119.38),
                 114.25, 1e-3);
         Reference.check("toluene boiling point (K)", LIB.matrix("toluene").boilingPointK().value(), 383.8, 0.2);
-    }
-
-    @Test
-    @CheckedAgainst(source = "boiling points as listed in the project physics notes: chloroform 61.2 °C, n-hexane 68.7 °C, "
-            + "tetrachloroethylene 121.1 °C, n-octane 125.6 °C (from memory: their NIST WebBook phase-change pages are "
-            + "not stored here)", kind = CheckedAgainst.Kind.FROM_MEMORY)
-    void otherSolventBoilingPoints() {
-        String[] keys = {"chloroform", "hexane", "tetrachloroethylene", "octane"};
-        double[] bpC = {61.2, 68.7, 121.1, 125.6};
-        for (int i = 0; i < keys.length; i++) {
-            Reference.check(keys[i] + " boiling point (°C)",
-                    LIB.matrix(keys[i]).boilingPointK().value() - PhysicalConstants.CELSIUS_ZERO_K, bpC[i], 1e-9);
-        }
     }
 }

@@ -16,7 +16,7 @@ class HeatingTest {
     private static final double CDSE_DENSITY = 5810;
     private static final double CDSE_C = 49.41 / 191.38e-3;
     // Toluene: Cp(liquid, 298 K) 157.1 J/(mol·K) (NIST Chemistry WebBook), M = 92.14 g/mol → 1705 J/(kg·K);
-    // density 0.8669 g/cm³ at 20 °C (CRC Handbook of Chemistry and Physics, from memory);
+    // density 0.8669 g/cm³ at 20 °C (CoolProp 8.0.0, Lemmon & Span 2006 equation of state: 0.866892);
     // conductivity 0.13 W/(m·K) (from memory); boiling point 110.6 °C (PHYSICS.md / CRC)
     private static final ThermalMedium TOLUENE = new ThermalMedium(866.9, 157.1 / 92.14e-3, 0.13, 383.75);
 
@@ -33,8 +33,10 @@ class HeatingTest {
 
     @Test
     @CheckedAgainst(source = "hand calculation with toluene Cp(liquid) = 157.1 J/(mol·K) (NIST Chemistry WebBook, "
-            + "condensed-phase heat capacity table) and density 0.8669 g/cm³ (from memory): 1 µM dots = 6.0221e20 m⁻³, "
-            + "4.9666e-19 J each → 299.10 J/m³; ρc = 1.47808e6 J/(m³·K); ΔT = 2.0236e-4 K", kind = CheckedAgainst.Kind.FROM_MEMORY)
+            + "condensed-phase heat capacity table, Grolier et al. 1993) and density 0.8669 g/cm³ at 20 °C (CoolProp "
+            + "8.0.0, toluene equation of state of Lemmon & Span 2006, evaluated outside the build: 0.866892): "
+            + "1 µM dots = 6.0221e20 m⁻³, 4.9666e-19 J each → 299.10 J/m³; ρc = 1.47808e6 J/(m³·K); ΔT = 2.0236e-4 K",
+            kind = CheckedAgainst.Kind.REFERENCE_LIBRARY)
     void perPulseRiseOfTheExcitedVolumeMatchesHandCalculation() {
         double photonJ = 3.1 * PhysicalConstants.ELECTRONVOLT_J;
         double dotsPerM3 = 1e-6 * 1e3 * PhysicalConstants.AVOGADRO_PER_MOL;

@@ -75,7 +75,7 @@ class CrossSectionModelTest {
     @Test
     @CheckedAgainst(source = "Moreels et al., Chem. Mater. 19, 6101 (2007) (PbSe) and ACS Nano 3, 3023 (2009) (PbS): ε(400 nm) = "
             + "0.0277·d³ and 0.0233·d³ µM⁻¹cm⁻¹ (coefficients from memory; the PbS abstract states the d³ scaling and its "
-            + "Maxwell-Garnett agreement); bulk n, k from memory, 30 %", kind = CheckedAgainst.Kind.FROM_MEMORY)
+            + "Maxwell-Garnett agreement); bulk n, k from memory, 30 % (neither paper's table nor an optical-constant table for PbS or PbSe is stored here)", kind = CheckedAgainst.Kind.FROM_MEMORY)
     void leadChalcogenideOpticalConstantsReproduceTheMoreelsLaws() {
         double sigmaPerVolumePerCm = 1e6 * 1000 * Math.log(10) / 6.02214076e23 / (Math.PI / 6 * 1e-21);
         Reference.checkRelative("PbSe μ_i(400 nm) from bulk n, k (cm⁻¹)",
