@@ -6,6 +6,7 @@ import org.ladderkin.io.json.Node;
 import org.ladderkin.material.BandAlignment;
 import org.ladderkin.material.Heterostructure;
 import org.ladderkin.material.Material;
+import org.ladderkin.material.Numbers;
 import org.ladderkin.sample.Shell;
 import org.ladderkin.units.Dimension;
 
@@ -44,8 +45,8 @@ final class ShellCodec {
                 : Heterostructure.monolayer(shellMaterial).map(m -> m.value() * ((Shell.Monolayers) thickness).count())
                         .orElse(Double.NaN);
         if (knownM > Shell.MAX_THICKNESS_M) {
-            throw thicknessNode.error(InputProblem.OUT_OF_RANGE, String.format(Locale.ROOT, "a %.3g nm shell is thicker than "
-                    + "physically sensible (at most %.0f nm)", knownM * 1e9, Shell.MAX_THICKNESS_M * 1e9));
+            throw thicknessNode.error(InputProblem.OUT_OF_RANGE, String.format(Locale.ROOT, "a %s nm shell is thicker than "
+                    + "physically sensible (at most %.0f nm)", Numbers.sig(knownM * 1e9, 3), Shell.MAX_THICKNESS_M * 1e9));
         }
         Optional<BandAlignment> alignment = n.optional("alignment")
                 .map(a -> BandAlignment.ofKey(a.choice("type-I", "quasi-type-II", "type-II")));
