@@ -32,6 +32,11 @@ public record CoreShell(Shell shell, double coreVolumeM3, double totalVolumeM3, 
     private static final double MEV = 1e-3 * PhysicalConstants.ELECTRONVOLT_J;
     /** Gaussian FWHM over standard deviation, 2√(2 ln 2). */
     static final double FWHM_PER_SIGMA = 2 * Math.sqrt(2 * Math.log(2));
+    /**
+     * Smallest overlap taken for quasi-type II: thick-shell CdSe/CdS radiative lifetimes are a few times the core's
+     * (from memory), far from the volume ratio's hundredfold.
+     */
+    static final double QUASI_MIN_OVERLAP = 0.25;
     /** Line width used when neither a measured width nor a size dispersion with a sizing curve gives one. */
     static final double DEFAULT_FWHM_J = 60 * MEV;
 
@@ -81,12 +86,22 @@ public record CoreShell(Shell shell, double coreVolumeM3, double totalVolumeM3, 
                             + "shells suppress Auger recombination by orders of magnitude (García-Santamaría et al., Nano "
                             + "Lett. 2009, 'giant' CdSe/CdS nanocrystals, abstract, read in a stored copy)")
                 : "τ₂ scales with the core volume: type I, both carriers stay in the core (abrupt interface)";
-        double overlap = a == BandAlignment.TYPE_I ? 1 : vCore / vTotal;
-        String overlapBasis = a == BandAlignment.TYPE_I
-                ? "type I: electron and hole both in the core, overlap unchanged"
-                : String.format(Locale.ROOT, "%s: overlap |⟨e|h⟩|² = V_core/V_total = %.3g (one carrier spread evenly over "
-                    + "the dot, the other in the core; for type II an upper bound on the overlap), τ₁ lengthened by 1/%.3g "
-                    + "(assumption: the library's τ₁ is mostly radiative)", a.key(), overlap, overlap);
+        double spread = vCore / vTotal;
+        double overlap = switch (a) {
+            case TYPE_I -> 1;
+            case QUASI_TYPE_II -> Math.max(spread, QUASI_MIN_OVERLAP);
+            case TYPE_II -> spread;
+        };
+        String overlapBasis = switch (a) {
+            case TYPE_I -> "type I: electron and hole both in the core, overlap unchanged";
+            case QUASI_TYPE_II -> String.format(Locale.ROOT, "quasi-type-II: overlap |⟨e|h⟩|² = max(V_core/V_total, %.2g) = "
+                    + "%.3g (the spread carrier stays bound to the core's carrier, so thick shells lengthen the radiative "
+                    + "lifetime a few times, not by the volume ratio: from memory), τ₁ lengthened by 1/%.3g (assumption: the "
+                    + "library's τ₁ is mostly radiative)", QUASI_MIN_OVERLAP, overlap, overlap);
+            case TYPE_II -> String.format(Locale.ROOT, "type-II: overlap |⟨e|h⟩|² = V_core/V_total = %.3g (the carrier in the "
+                    + "shell spread evenly over the dot, the other in the core: an upper bound on the overlap), τ₁ lengthened "
+                    + "by 1/%.3g (assumption: the library's τ₁ is mostly radiative)", overlap, overlap);
+        };
         double shift = Double.isNaN(shell.biexcitonShiftJ()) ? defaultShiftJ(a) : shell.biexcitonShiftJ();
         String shiftBasis = Double.isNaN(shell.biexcitonShiftJ()) ? defaultShiftBasis(a) : "measured, given in the sample";
         double width;

@@ -86,6 +86,6 @@ class CoreShellGainTest {
                 .anyMatch(b -> b.startsWith("shell first exciton:"))
                 .anyMatch(b -> b.startsWith("shell heat capacity:"))
                 .anyMatch(b -> b.startsWith("τ₂:") && b.contains("core/shell: τ₂ scales with the whole core/shell volume"))
-                .anyMatch(b -> b.startsWith("τ₁:") && b.contains("core/shell: type-II: overlap"));
+                .anyMatch(b -> b.startsWith("τ₁:") && b.contains("core/shell: type-II: overlap |⟨e|h⟩|² = V_core/V_total"));
     }
 }

@@ -84,9 +84,29 @@ class CoreShellTest {
         assertThat(quasi.augerVolumeM3()).isCloseTo(total, offset(total * 1e-12));
         assertThat(typeI.overlap()).isEqualTo(1);
         assertThat(quasi.overlap()).isCloseTo(core / total, offset(1e-12));
+        CoreShell giant = CoreShell.of(sample(shell("CdSe", "CdS", new Shell.Monolayers(19), null, false), 3e-9)).orElseThrow();
+        assertThat(giant.overlap()).as("a giant shell's overlap is held at the quasi-type-II floor")
+                .isEqualTo(CoreShell.QUASI_MIN_OVERLAP);
         assertThat(typeI.biexcitonShiftJ()).isNegative();
         assertThat(CoreShell.of(sample(shell("CdSe", "CdTe", new Shell.Length(h), null, false), d)).orElseThrow()
                 .biexcitonShiftJ()).isPositive();
+    }
+
+    @Test
+    void everyCoreShellPresetResolvesInTheFictionalLab() throws Exception {
+        Path dir = Path.of(System.getProperty("ladderkin.home", ".")).resolve("models/presets/core-shell");
+        java.util.Map<String, BandAlignment> expected = java.util.Map.of("cdse-zns-thin.sample.json", BandAlignment.TYPE_I,
+                "cdse-cds-thick.sample.json", BandAlignment.QUASI_TYPE_II, "cdse-cdte-type2.sample.json", BandAlignment.TYPE_II);
+        try (var files = java.nio.file.Files.list(dir)) {
+            assertThat(files.map(f -> f.getFileName().toString()).sorted().toList())
+                    .containsExactlyInAnyOrderElementsOf(expected.keySet());
+        }
+        for (var e : expected.entrySet()) {
+            Sample s = org.ladderkin.io.SampleCodec.read(dir.resolve(e.getKey()), LIB);
+            assertThat(s.spec().name()).contains("Fernhollow").contains("fictional");
+            assertThat(s.spec().shell().orElseThrow().alignment()).isEqualTo(e.getValue());
+            assertThat(s.crossSectionAt(400e-9).crossSectionM2()).isPositive();
+        }
     }
 
     @Test
