@@ -264,10 +264,9 @@ public final class PlanOutputs {
             ObjectNode gain = root.putObject("gain");
             gain.put("degeneracy", g.degeneracy());
             gain.put("thresholdNAvg", g.thresholdN());
-            if (Double.isNaN(g.shiftOverWidth())) {
-                gain.put("thresholdNAvgFarBiexcitonShift", g.thresholdShiftedN());
-            } else {
-                gain.put("thresholdNAvgWithBiexcitonShift", g.thresholdShiftedN());
+            gain.put(g.shiftApplied() ? "thresholdNAvgWithBiexcitonShift" : "thresholdNAvgFarBiexcitonShift",
+                    g.thresholdShiftedN());
+            if (!Double.isNaN(g.shiftOverWidth())) {
                 gain.put("biexcitonShiftOverLineWidth", g.shiftOverWidth());
             }
             gain.put("thresholdPulseEnergyNj", g.thresholdEnergyJ() * 1e9);

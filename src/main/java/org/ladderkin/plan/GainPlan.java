@@ -22,9 +22,10 @@ import org.ladderkin.units.Quantity;
  * @param degeneracy            g of the band edge
  * @param thresholdN            probe-averaged ⟨N⟩ at transparency without a biexciton shift (a plain dot)
  * @param thresholdShiftedN     the same with the sample's biexciton shift Δ_XX over its line width when the sample
- *                              gives one (a core/shell dot), else with a repulsive biexciton shifted far beyond the line
- *                              width (a lower bound)
- * @param shiftOverWidth        the sample's Δ_XX over the line's standard deviation, NaN for a plain dot
+ *                              gives one beyond the line width (a core/shell dot), else with a repulsive biexciton
+ *                              shifted far beyond the line width (a lower bound)
+ * @param shiftOverWidth        the sample's Δ_XX over the line's standard deviation, NaN for a plain dot; applied to the
+ *                              threshold only when larger than 1 in size
  * @param thresholdEnergyJ      pump pulse energy for the planned threshold: {@code thresholdShiftedN} when the sample
  *                              gives Δ_XX, else {@code thresholdN} (J)
  * @param thresholdFluenceJPerM2 peak pump fluence for the planned threshold (J/m²)
@@ -53,11 +54,18 @@ public record GainPlan(int degeneracy, double thresholdN, double thresholdShifte
         }
     }
 
+    /** Whether the planned threshold rests on the sample's biexciton shift (|Δ_XX| beyond the line width). */
+    public boolean shiftApplied() {
+        return Math.abs(shiftOverWidth) > 1;
+    }
+
     static GainPlan of(int g, KineticModel km, ModelAssumptions model, Excitation atChosenRate, LaserSetup laser,
                        double nTop, HeatBudget heat, Limits limits, boolean film) {
         double nPlain = GainThreshold.poissonThreshold(g);
-        boolean shifted = model.hasBiexcitonShift();
-        double shiftOverWidth = shifted ? model.biexcitonShiftJ() / model.lineWidthJ() : Double.NaN;
+        double shiftOverWidth = model.hasBiexcitonShift() ? model.biexcitonShiftJ() / model.lineWidthJ() : Double.NaN;
+        // within the line width the shifted lines overlap their unshifted partners and the lowering would rest on the
+        // far tails of the assumed Gaussian lines alone
+        boolean shifted = Math.abs(shiftOverWidth) > 1;
         double nShift = GainThreshold.poissonThreshold(g, shifted ? shiftOverWidth : FAR_SHIFT);
         // a core/shell's own Δ_XX sets the threshold the plan aims at; a plain dot keeps the unshifted one
         double nTh = shifted ? nShift : nPlain;
@@ -94,7 +102,11 @@ public record GainPlan(int degeneracy, double thresholdN, double thresholdShifte
                             : ": lower the top fluence")));
         }
         List<String> notPlanned = new ArrayList<>();
-        if (!shifted) {
+        if (model.hasBiexcitonShift() && !shifted) {
+            notPlanned.add(String.format(Locale.ROOT, "the core/shell's biexciton shift (%.2g line widths, within the line): "
+                    + "the threshold is the unshifted one; a shift beyond the line width would lower it towards ⟨N⟩ = %.3g",
+                    shiftOverWidth, nShift));
+        } else if (!shifted) {
             notPlanned.add(String.format(Locale.ROOT, "the biexciton shift (no value in the library; a repulsive shift far "
                     + "beyond the line width lowers the threshold to ⟨N⟩ = %.3g): measure it and give the threshold again",
                     nShift));

@@ -66,7 +66,7 @@ public final class ModeSections {
     public static List<String> gainLines(CampaignPlan plan) {
         var g = plan.gain();
         List<String> lines = new ArrayList<>();
-        if (Double.isNaN(g.shiftOverWidth())) {
+        if (!g.shiftApplied()) {
             lines.add(String.format(Locale.ROOT, "Gain threshold (transparency of the %d-fold band edge, Poisson excitation, "
                             + "no biexciton shift): ⟨N⟩ = %.3g, %s per pulse, %.3g µJ/cm² peak%s.", g.degeneracy(),
                     g.thresholdN(), q(g.thresholdEnergyJ(), Dimension.ENERGY), g.thresholdFluenceJPerM2() * 100,
@@ -79,8 +79,8 @@ public final class ModeSections {
                     g.degeneracy(), g.shiftOverWidth(), g.thresholdShiftedN(), q(g.thresholdEnergyJ(), Dimension.ENERGY),
                     g.thresholdFluenceJPerM2() * 100, g.thresholdReachable() ? "" : " — outside the laser's range"));
             lines.add(String.format(Locale.ROOT, "Without the biexciton shift (a plain dot) the threshold would be ⟨N⟩ = %.3g%s.",
-                    g.thresholdN(), g.thresholdShiftedN() < g.thresholdN() ? "; the repulsive shift lowers it: singly excited "
-                            + "dots no longer absorb at their own emission" : ""));
+                    g.thresholdN(), g.thresholdShiftedN() < g.thresholdN() ? "; the shift beyond the line width lowers it: dots "
+                            + "holding one exciton no longer absorb at their own emission" : ""));
         }
         lines.add(String.format(Locale.ROOT, "Gain lifetime at ⟨N⟩ = %.3g: %s, against the biexciton Auger lifetime τ₂ = %s.",
                 g.gainAtN(), q(g.gainLifetimeS(), Dimension.TIME), q(g.augerLifetimeS(), Dimension.TIME)));
@@ -127,7 +127,7 @@ public final class ModeSections {
                     used.add(b);
                 }
             }
-            if (b.startsWith("refresh: stirred")) {
+            if (b.startsWith("refresh: stirred") || b.startsWith("shell")) {
                 used.add(b);
             }
         }

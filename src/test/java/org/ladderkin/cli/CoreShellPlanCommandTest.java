@@ -36,4 +36,19 @@ class CoreShellPlanCommandTest {
         assertThat(r.err().strip().lines()).hasSize(1);
         assertThat(r.err()).contains("field 'sample.shell.material'").contains("Unobtainium");
     }
+
+    @Test
+    void theTypeTwoDemoSaysWhichShellEffectsItAppliedAndWhere(@TempDir Path dir) throws Exception {
+        MainTest.Run r = MainTest.run("plan", MainTest.HOME.resolve("experiments-plan/cdse-cdte-gain-type2.plan.json").toString(),
+                "--out", dir.toString());
+        assertThat(r.exit()).as(r.err()).isZero();
+        String gainDefaults = r.out().lines().filter(l -> l.contains("gain") && l.contains("Defaults used")).findFirst().orElseThrow();
+        assertThat(gainDefaults).contains("shell: CdSe/CdTe, 1.20 nm thick; type-II alignment: bulk band edges")
+                .contains("shell biexciton shift: Δ_XX = +30.0 meV (repulsive").contains("shell heat capacity:")
+                .contains("shell σ:").contains("shell first exciton:")
+                .contains("core/shell: τ₂ scales with the whole core/shell volume");
+        assertThat(r.out()).contains("the core/shell's biexciton shift Δ_XX = 1.28 line widths): ⟨N⟩ = 0.763")
+                .contains("Without the biexciton shift (a plain dot) the threshold would be ⟨N⟩ = 1.15");
+        assertThat(Files.readString(dir.resolve("report.html"))).contains("shell biexciton shift: Δ_XX = +30.0 meV");
+    }
 }
