@@ -264,7 +264,11 @@ public final class PlanOutputs {
             ObjectNode gain = root.putObject("gain");
             gain.put("degeneracy", g.degeneracy());
             gain.put("thresholdNAvg", g.thresholdN());
-            gain.put("thresholdNAvgFarBiexcitonShift", g.thresholdShiftedN());
+            gain.put(g.shiftApplied() ? "thresholdNAvgWithBiexcitonShift" : "thresholdNAvgFarBiexcitonShift",
+                    g.thresholdShiftedN());
+            if (!Double.isNaN(g.shiftOverWidth())) {
+                gain.put("biexcitonShiftOverLineWidth", g.shiftOverWidth());
+            }
             gain.put("thresholdPulseEnergyNj", g.thresholdEnergyJ() * 1e9);
             gain.put("thresholdPeakFluenceUjPerCm2", g.thresholdFluenceJPerM2() * 100);
             gain.put("thresholdReachable", g.thresholdReachable());

@@ -11,6 +11,7 @@ import org.ladderkin.sample.Refresh;
 import org.ladderkin.sample.Sample;
 import org.ladderkin.sample.SampleException;
 import org.ladderkin.sample.SampleSpec;
+import org.ladderkin.sample.Shell;
 import org.ladderkin.units.Dimension;
 
 /**
@@ -123,10 +124,12 @@ public final class SampleCodec {
             csNode.finish();
             given = Optional.of(new SampleSpec.GivenCrossSection(sigma, at));
         }
+        Optional<Shell> shell = n.optional("shell").map(s -> ShellCodec.shell(s, material, library));
         n.finish();
         SampleSpec spec;
         try {
-            spec = new SampleSpec(name, material, size, dispersion, amount, path, Optional.of(matrix), refresh, spectrum, given);
+            spec = new SampleSpec(name, material, size, dispersion, amount, path, Optional.of(matrix), refresh, spectrum, given,
+                    shell);
         } catch (IllegalArgumentException e) {
             throw n.error(InputProblem.INVALID_VALUE, e.getMessage());
         }

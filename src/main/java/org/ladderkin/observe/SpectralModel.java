@@ -35,6 +35,15 @@ public record SpectralModel(List<Transition> transitions, BandEdgeFilling fillin
         }
     }
 
+    /**
+     * A copy whose cold-exciton shift comes from a biexciton interaction Δ_XX = E_XX − 2E_X, positive for repulsion (a
+     * type-II core/shell): the lines of a dot holding an exciton move up by Δ_XX, which is a red shift of −Δ_XX in
+     * this record's convention, so a repulsive biexciton leaves its induced absorption on the blue side of the bleach.
+     */
+    public SpectralModel withBiexcitonInteraction(double interactionJ) {
+        return new SpectralModel(transitions, filling, hotDegeneracy, -interactionJ, hotShiftJ);
+    }
+
     /** ΔA of each state at each photon energy: rows are energies, columns states (OD). */
     public double[][] stateDifferenceSpectra(LadderSpace space, double[] photonEnergiesJ) {
         double[] bandEdge = filling.observable(space);

@@ -20,10 +20,15 @@ import org.ladderkin.units.Quantity;
  * heating of one pulse and of the train.
  *
  * @param degeneracy            g of the band edge
- * @param thresholdN            probe-averaged ⟨N⟩ at transparency without a biexciton shift
- * @param thresholdShiftedN     the same with a repulsive biexciton shifted far beyond the line width (a lower bound)
- * @param thresholdEnergyJ      pump pulse energy for {@code thresholdN} (J)
- * @param thresholdFluenceJPerM2 peak pump fluence for {@code thresholdN} (J/m²)
+ * @param thresholdN            probe-averaged ⟨N⟩ at transparency without a biexciton shift (a plain dot)
+ * @param thresholdShiftedN     the same with the sample's biexciton shift Δ_XX over its line width when the sample
+ *                              gives one beyond the line width (a core/shell dot), else with a repulsive biexciton
+ *                              shifted far beyond the line width (a lower bound)
+ * @param shiftOverWidth        the sample's Δ_XX over the line's standard deviation, NaN for a plain dot; applied to the
+ *                              threshold only when larger than 1 in size
+ * @param thresholdEnergyJ      pump pulse energy for the planned threshold: {@code thresholdShiftedN} when the sample
+ *                              gives Δ_XX, else {@code thresholdN} (J)
+ * @param thresholdFluenceJPerM2 peak pump fluence for the planned threshold (J/m²)
  * @param thresholdReachable    whether the laser reaches it
  * @param gainAtN               ⟨N⟩ the gain lifetime is evaluated at (the series' top, at least twice the threshold)
  * @param gainLifetimeS         how long the band edge stays above transparency after that pulse (s)
@@ -33,7 +38,7 @@ import org.ladderkin.units.Quantity;
  * @param risks                 the gain mode's risks
  * @param notPlanned            what the plan does not cover, in words
  */
-public record GainPlan(int degeneracy, double thresholdN, double thresholdShiftedN, double thresholdEnergyJ,
+public record GainPlan(int degeneracy, double thresholdN, double thresholdShiftedN, double shiftOverWidth, double thresholdEnergyJ,
                        double thresholdFluenceJPerM2, boolean thresholdReachable, double gainAtN, double gainLifetimeS,
                        double augerLifetimeS, double perPulseRiseK, double steadyRiseK, List<Risk> risks,
                        List<String> notPlanned) {
@@ -49,10 +54,21 @@ public record GainPlan(int degeneracy, double thresholdN, double thresholdShifte
         }
     }
 
+    /** Whether the planned threshold rests on the sample's biexciton shift (|Δ_XX| beyond the line width). */
+    public boolean shiftApplied() {
+        return Math.abs(shiftOverWidth) > 1;
+    }
+
     static GainPlan of(int g, KineticModel km, ModelAssumptions model, Excitation atChosenRate, LaserSetup laser,
                        double nTop, HeatBudget heat, Limits limits, boolean film) {
-        double nTh = GainThreshold.poissonThreshold(g);
-        double nShift = GainThreshold.poissonThreshold(g, FAR_SHIFT);
+        double nPlain = GainThreshold.poissonThreshold(g);
+        double shiftOverWidth = model.hasBiexcitonShift() ? model.biexcitonShiftJ() / model.lineWidthJ() : Double.NaN;
+        // within the line width the shifted lines overlap their unshifted partners and the lowering would rest on the
+        // far tails of the assumed Gaussian lines alone
+        boolean shifted = Math.abs(shiftOverWidth) > 1;
+        double nShift = GainThreshold.poissonThreshold(g, shifted ? shiftOverWidth : FAR_SHIFT);
+        // a core/shell's own Δ_XX sets the threshold the plan aims at; a plain dot keeps the unshifted one
+        double nTh = shifted ? nShift : nPlain;
         double nPerJ = atChosenRate.nAvgProbeWeighted() / atChosenRate.pulse().energyJ();
         double energy = nTh / nPerJ;
         Excitation atTh = atChosenRate.withEnergyJ(energy);
@@ -86,14 +102,21 @@ public record GainPlan(int degeneracy, double thresholdN, double thresholdShifte
                             : ": lower the top fluence")));
         }
         List<String> notPlanned = new ArrayList<>();
-        notPlanned.add(String.format(Locale.ROOT, "the biexciton shift (no value in the library; a repulsive shift far beyond "
-                + "the line width lowers the threshold to ⟨N⟩ = %.3g): measure it and give the threshold again", nShift));
+        if (model.hasBiexcitonShift() && !shifted) {
+            notPlanned.add(String.format(Locale.ROOT, "the core/shell's biexciton shift (%.2g line widths, within the line): "
+                    + "the threshold is the unshifted one; a shift beyond the line width would lower it towards ⟨N⟩ = %.3g",
+                    shiftOverWidth, nShift));
+        } else if (!shifted) {
+            notPlanned.add(String.format(Locale.ROOT, "the biexciton shift (no value in the library; a repulsive shift far "
+                    + "beyond the line width lowers the threshold to ⟨N⟩ = %.3g): measure it and give the threshold again",
+                    nShift));
+        }
         notPlanned.add("losses: a lasing threshold lies above this transparency point by the cavity or waveguide loss");
         if (film && !Double.isFinite(model.refreshS())) {
             notPlanned.add("refresh of a static film: give \"refresh\": {\"mode\": \"translated\", \"speed\": ...} "
                     + "if it is moved under the beam (the plan models it as static)");
         }
-        return new GainPlan(g, nTh, nShift, energy, fluence, reachable, at, life, tau2, perPulse, heat.steadyRiseK(), risks,
+        return new GainPlan(g, nPlain, nShift, shiftOverWidth, energy, fluence, reachable, at, life, tau2, perPulse, heat.steadyRiseK(), risks,
                 notPlanned);
     }
 

@@ -2,6 +2,7 @@ package org.ladderkin.plan;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import org.ladderkin.kinetics.KineticModel;
 import org.ladderkin.kinetics.process.LadderBuilder;
 import org.ladderkin.kinetics.process.ProcessParameter;
@@ -16,6 +17,7 @@ import org.ladderkin.kinetics.rate.RadiativeScaling;
 import org.ladderkin.kinetics.rate.SampleRefresh;
 import org.ladderkin.kinetics.rate.Trapping;
 import org.ladderkin.kinetics.state.Charge;
+import org.ladderkin.sample.CoreShell;
 import org.ladderkin.sample.Refresh;
 import org.ladderkin.sample.Sample;
 
@@ -37,11 +39,15 @@ import org.ladderkin.sample.Sample;
  * @param bases                  one line per value saying where it comes from
  * @param processes              further processes the plan sets through {@link ProcessRegistry#planParameters()}
  *                               (e.g. a measured triexciton lifetime), added after the plan's own ladder
+ * @param biexcitonShiftJ        biexciton interaction Δ_XX (J), positive for repulsion; NaN when the sample says nothing
+ *                               (a plain dot)
+ * @param lineWidthJ             standard deviation of the band-edge line Δ_XX is compared with (J); NaN with Δ_XX
  */
 public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, double tauBiexcitonS,
                                AugerScaling augerScaling, RadiativeScaling radiativeScaling, double tauTrionNegativeS,
                                double tauTrionPositiveS, double ionisationProbability, double neutralisationS,
-                               double refreshS, double coolingS, List<String> bases, List<ProcessSpec> processes) {
+                               double refreshS, double coolingS, List<String> bases, List<ProcessSpec> processes,
+                               double biexcitonShiftJ, double lineWidthJ) {
 
     /** Default PL quantum yield of the single exciton (from memory: typical of good colloidal dots). */
     public static final double DEFAULT_QUANTUM_YIELD = 0.5;
@@ -69,6 +75,25 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
         if (!(refreshS > 0)) {
             throw new IllegalArgumentException("refresh time must be > 0 (use +∞ for a static sample), was " + refreshS + " s");
         }
+        if (Double.isNaN(biexcitonShiftJ) != Double.isNaN(lineWidthJ) || Double.isInfinite(biexcitonShiftJ)
+                || !(Double.isNaN(lineWidthJ) || lineWidthJ > 0 && Double.isFinite(lineWidthJ))) {
+            throw new IllegalArgumentException("a biexciton shift needs a finite line width > 0 beside it, and neither alone");
+        }
+    }
+
+    /** Assumptions with further registry processes and no biexciton shift. */
+    public ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, double tauBiexcitonS,
+                            AugerScaling augerScaling, RadiativeScaling radiativeScaling, double tauTrionNegativeS,
+                            double tauTrionPositiveS, double ionisationProbability, double neutralisationS,
+                            double refreshS, double coolingS, List<String> bases, List<ProcessSpec> processes) {
+        this(tauSingleExcitonS, plQuantumYield, tauBiexcitonS, augerScaling, radiativeScaling, tauTrionNegativeS,
+                tauTrionPositiveS, ionisationProbability, neutralisationS, refreshS, coolingS, bases, processes, Double.NaN,
+                Double.NaN);
+    }
+
+    /** Whether the sample gives a biexciton shift (a core/shell dot). */
+    public boolean hasBiexcitonShift() {
+        return !Double.isNaN(biexcitonShiftJ);
     }
 
     /** Assumptions with no further registry processes. */
@@ -117,11 +142,16 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
             throw new IllegalArgumentException(m.key() + " has no Auger volume constant in the library: give "
                     + "\"biexcitonLifetime\" in the plan's \"model\" section");
         }
-        double tau1 = pick(o.tauSingleExcitonS(), m.singleExcitonLifetimeS().value(), "τ₁", "plan",
-                "material library: " + m.singleExcitonLifetimeS().source(), bases);
+        Optional<CoreShell> shell = CoreShell.of(sample);
+        double overlap = shell.map(CoreShell::overlap).orElse(1.0);
+        double tau1 = pick(o.tauSingleExcitonS(), m.singleExcitonLifetimeS().value() / overlap, "τ₁", "plan",
+                "material library: " + m.singleExcitonLifetimeS().source()
+                        + shell.map(c -> c.overlap() < 1 ? "; core/shell: " + c.overlapBasis() : "").orElse(""), bases);
         double qy = pick(o.plQuantumYield(), DEFAULT_QUANTUM_YIELD, "PL quantum yield", "plan", "default (from memory)", bases);
-        double tau2 = pick(o.tauBiexcitonS(), m.biexcitonAugerLifetimeS(sample.sizeM()), "τ₂", "plan",
-                "Auger volume scaling τ₂ = C·V with C from " + m.augerVolumeConstantSPerM3().source(), bases);
+        double augerVolume = shell.map(CoreShell::augerVolumeM3).orElse(sample.dotVolumeM3());
+        double tau2 = pick(o.tauBiexcitonS(), m.augerVolumeConstantSPerM3().value() * augerVolume, "τ₂", "plan",
+                "Auger volume scaling τ₂ = C·V with C from " + m.augerVolumeConstantSPerM3().source()
+                        + shell.map(c -> "; core/shell: " + c.augerBasis()).orElse(""), bases);
         AugerScaling auger = o.augerScaling() != null ? o.augerScaling() : AugerScaling.STATISTICAL;
         bases.add("Auger scaling " + auger.key() + (o.augerScaling() != null ? ": plan"
                 : ": default, carrier-triplet counting (Klimov, McGuire, Schaller, Rupasov, Phys. Rev. B 77, 195324 (2008))"));
@@ -167,8 +197,10 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
                 }
             }
         }
+        shell.ifPresent(c -> ShellLines.add(sample, c, bases));
         return new ModelAssumptions(tau1, qy, tau2, auger, rad, trionNeg, trionPos, pIon, neut, refreshS, cooling, bases,
-                o.processes());
+                o.processes(), shell.map(CoreShell::biexcitonShiftJ).orElse(Double.NaN),
+                shell.map(CoreShell::lineWidthJ).orElse(Double.NaN));
     }
 
     /** The ladder model: neutral and negative dots, no hot-exciton resolution (instantaneous cooling). */
@@ -196,19 +228,22 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
     /** A copy with the biexciton lifetime changed (the instance is not changed). */
     public ModelAssumptions withTauBiexcitonS(double tau) {
         return new ModelAssumptions(tauSingleExcitonS, plQuantumYield, tau, augerScaling, radiativeScaling, tauTrionNegativeS,
-                tauTrionPositiveS, ionisationProbability, neutralisationS, refreshS, coolingS, bases, processes);
+                tauTrionPositiveS, ionisationProbability, neutralisationS, refreshS, coolingS, bases, processes,
+                biexcitonShiftJ, lineWidthJ);
     }
 
     /** A copy with the single-exciton lifetime changed (the instance is not changed). */
     public ModelAssumptions withTauSingleExcitonS(double tau) {
         return new ModelAssumptions(tau, plQuantumYield, tauBiexcitonS, augerScaling, radiativeScaling, tauTrionNegativeS,
-                tauTrionPositiveS, ionisationProbability, neutralisationS, refreshS, coolingS, bases, processes);
+                tauTrionPositiveS, ionisationProbability, neutralisationS, refreshS, coolingS, bases, processes,
+                biexcitonShiftJ, lineWidthJ);
     }
 
     /** A copy with a different refresh time (the instance is not changed). */
     public ModelAssumptions withRefreshS(double refresh) {
         return new ModelAssumptions(tauSingleExcitonS, plQuantumYield, tauBiexcitonS, augerScaling, radiativeScaling,
-                tauTrionNegativeS, tauTrionPositiveS, ionisationProbability, neutralisationS, refresh, coolingS, bases, processes);
+                tauTrionNegativeS, tauTrionPositiveS, ionisationProbability, neutralisationS, refresh, coolingS, bases, processes,
+                biexcitonShiftJ, lineWidthJ);
     }
 
     private static double pick(double override, double derived, String what, String overrideBasis, String derivedBasis,

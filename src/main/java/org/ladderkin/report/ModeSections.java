@@ -66,12 +66,22 @@ public final class ModeSections {
     public static List<String> gainLines(CampaignPlan plan) {
         var g = plan.gain();
         List<String> lines = new ArrayList<>();
-        lines.add(String.format(Locale.ROOT, "Gain threshold (transparency of the %d-fold band edge, Poisson excitation, no "
-                        + "biexciton shift): ⟨N⟩ = %.3g, %s per pulse, %.3g µJ/cm² peak%s.", g.degeneracy(), g.thresholdN(),
-                q(g.thresholdEnergyJ(), Dimension.ENERGY), g.thresholdFluenceJPerM2() * 100,
-                g.thresholdReachable() ? "" : " — outside the laser's range"));
-        lines.add(String.format(Locale.ROOT, "With a repulsive biexciton shifted far beyond the line width the threshold "
-                + "falls to ⟨N⟩ = %.3g.", g.thresholdShiftedN()));
+        if (!g.shiftApplied()) {
+            lines.add(String.format(Locale.ROOT, "Gain threshold (transparency of the %d-fold band edge, Poisson excitation, "
+                            + "no biexciton shift): ⟨N⟩ = %.3g, %s per pulse, %.3g µJ/cm² peak%s.", g.degeneracy(),
+                    g.thresholdN(), q(g.thresholdEnergyJ(), Dimension.ENERGY), g.thresholdFluenceJPerM2() * 100,
+                    g.thresholdReachable() ? "" : " — outside the laser's range"));
+            lines.add(String.format(Locale.ROOT, "With a repulsive biexciton shifted far beyond the line width the threshold "
+                    + "falls to ⟨N⟩ = %.3g.", g.thresholdShiftedN()));
+        } else {
+            lines.add(String.format(Locale.ROOT, "Gain threshold (the %d-fold band edge, Poisson excitation, the core/shell's "
+                            + "biexciton shift Δ_XX = %.3g line widths): ⟨N⟩ = %.3g, %s per pulse, %.3g µJ/cm² peak%s.",
+                    g.degeneracy(), g.shiftOverWidth(), g.thresholdShiftedN(), q(g.thresholdEnergyJ(), Dimension.ENERGY),
+                    g.thresholdFluenceJPerM2() * 100, g.thresholdReachable() ? "" : " — outside the laser's range"));
+            lines.add(String.format(Locale.ROOT, "Without the biexciton shift (a plain dot) the threshold would be ⟨N⟩ = %.3g%s.",
+                    g.thresholdN(), g.thresholdShiftedN() < g.thresholdN() ? "; the shift beyond the line width lowers it: dots "
+                            + "holding one exciton no longer absorb at their own emission" : ""));
+        }
         lines.add(String.format(Locale.ROOT, "Gain lifetime at ⟨N⟩ = %.3g: %s, against the biexciton Auger lifetime τ₂ = %s.",
                 g.gainAtN(), q(g.gainLifetimeS(), Dimension.TIME), q(g.augerLifetimeS(), Dimension.TIME)));
         lines.add(String.format(Locale.ROOT, "Heating at the series' top: %.3g K per pulse, %.3g K steady.", g.perPulseRiseK(),
@@ -117,7 +127,7 @@ public final class ModeSections {
                     used.add(b);
                 }
             }
-            if (b.startsWith("refresh: stirred")) {
+            if (b.startsWith("refresh: stirred") || b.startsWith("shell")) {
                 used.add(b);
             }
         }

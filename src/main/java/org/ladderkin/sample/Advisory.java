@@ -25,7 +25,9 @@ public record Advisory(Kind kind, String message) {
         /** A library value used here is recalled or unsourced. */
         UNCONFIRMED_VALUE,
         /** The size and the first-exciton peak given disagree with the material's sizing curve. */
-        SIZE_PEAK_DISAGREE
+        SIZE_PEAK_DISAGREE,
+        /** The shell's band alignment given contradicts the library's band edges. */
+        SHELL_ALIGNMENT
     }
 
     public Advisory {

@@ -66,7 +66,8 @@ public record Sample(SampleSpec spec, double sizeM, double firstExcitonEnergyJ, 
         } else if (spec.size() instanceof SampleSpec.ByDiameterAndPeak both) {
             sizeM = both.sizeM();
             firstJ = Photon.energyJ(both.wavelengthM());
-            curve.ifPresent(c -> disagreement(c, sizeM, firstJ).ifPresent(advisories::add));
+            double peakJ = firstJ;
+            curve.ifPresent(c -> disagreement(c, sizeM, peakJ).ifPresent(advisories::add));
         } else {
             SampleSpec.ByFirstPeak p = (SampleSpec.ByFirstPeak) spec.size();
             firstJ = Photon.energyJ(p.wavelengthM());
@@ -78,6 +79,16 @@ public record Sample(SampleSpec spec, double sizeM, double firstExcitonEnergyJ, 
                 sizeM = curve.get().diameterM(firstJ);
             } catch (IllegalArgumentException e) {
                 throw new SampleException(SampleException.Part.SIZE, m.key() + ": " + e.getMessage(), e);
+            }
+        }
+        if (spec.shell().isPresent()) {
+            Shell shell = spec.shell().get();
+            if (!shell.alignmentWarning().isEmpty()) {
+                advisories.add(new Advisory(Advisory.Kind.SHELL_ALIGNMENT, shell.alignmentWarning()));
+            }
+            // the core's size stays; a peak measured on the core/shell sets E₁S (no published shift curve is used)
+            if (!Double.isNaN(shell.firstExcitonPeakM())) {
+                firstJ = Photon.energyJ(shell.firstExcitonPeakM());
             }
         }
         Sample partial = new Sample(spec, sizeM, firstJ, 1.0, List.of());
@@ -193,7 +204,8 @@ public record Sample(SampleSpec spec, double sizeM, double firstExcitonEnergyJ, 
         if (!(wavelengthM > 0)) {
             throw new IllegalArgumentException("wavelength must be > 0, was " + wavelengthM * 1e9 + " nm");
         }
-        return CrossSectionModel.at(this, wavelengthM);
+        CrossSection core = CrossSectionModel.at(this, wavelengthM);
+        return spec.shell().isEmpty() ? core : CoreShell.of(this).orElseThrow().crossSection(core);
     }
 
     static String nm(double m) {

@@ -19,10 +19,12 @@ import org.ladderkin.material.Material;
  * @param refresh         how the excited volume is renewed
  * @param spectrum        measured linear absorption spectrum, if loaded
  * @param givenCrossSection a cross-section measured by the user, overriding the material's laws
+ * @param shell           a shell grown on the core (the material and size above describe the core), if any
  */
 public record SampleSpec(String name, Material material, Size size, double sizeDispersion, Amount amount,
                          double pathLengthM, Optional<Matrix> matrix, Refresh refresh,
-                         Optional<AbsorptionSpectrum> spectrum, Optional<GivenCrossSection> givenCrossSection) {
+                         Optional<AbsorptionSpectrum> spectrum, Optional<GivenCrossSection> givenCrossSection,
+                         Optional<Shell> shell) {
 
     /** How the size is given. */
     public sealed interface Size permits ByDiameter, ByFirstPeak, ByDiameterAndPeak { }
@@ -114,6 +116,7 @@ public record SampleSpec(String name, Material material, Size size, double sizeD
         Objects.requireNonNull(refresh, "refresh");
         Objects.requireNonNull(spectrum, "spectrum");
         Objects.requireNonNull(givenCrossSection, "givenCrossSection");
+        Objects.requireNonNull(shell, "shell");
         if (!(sizeDispersion >= 0) || sizeDispersion >= 1) {
             throw new IllegalArgumentException("size dispersion must be in [0, 1), was " + sizeDispersion);
         }
@@ -122,18 +125,35 @@ public record SampleSpec(String name, Material material, Size size, double sizeD
         }
     }
 
-    /** This description with a different given cross-section (the instance is not changed). */
-    /** A copy with another refresh mode (the instance is not changed). */
-    public SampleSpec withRefresh(Refresh r) {
-        return new SampleSpec(name, material, size, sizeDispersion, amount, pathLengthM, matrix, r, spectrum, givenCrossSection);
+    /** A plain dot, without a shell. */
+    public SampleSpec(String name, Material material, Size size, double sizeDispersion, Amount amount, double pathLengthM,
+                      Optional<Matrix> matrix, Refresh refresh, Optional<AbsorptionSpectrum> spectrum,
+                      Optional<GivenCrossSection> givenCrossSection) {
+        this(name, material, size, sizeDispersion, amount, pathLengthM, matrix, refresh, spectrum, givenCrossSection,
+                Optional.empty());
     }
 
+    /** A copy with another refresh mode (the instance is not changed). */
+    public SampleSpec withRefresh(Refresh r) {
+        return new SampleSpec(name, material, size, sizeDispersion, amount, pathLengthM, matrix, r, spectrum, givenCrossSection,
+                shell);
+    }
+
+    /** This description with a different given cross-section (the instance is not changed). */
     public SampleSpec withGivenCrossSection(Optional<GivenCrossSection> given) {
-        return new SampleSpec(name, material, size, sizeDispersion, amount, pathLengthM, matrix, refresh, spectrum, given);
+        return new SampleSpec(name, material, size, sizeDispersion, amount, pathLengthM, matrix, refresh, spectrum, given,
+                shell);
     }
 
     /** This description with a different spectrum (the instance is not changed). */
     public SampleSpec withSpectrum(Optional<AbsorptionSpectrum> s) {
-        return new SampleSpec(name, material, size, sizeDispersion, amount, pathLengthM, matrix, refresh, s, givenCrossSection);
+        return new SampleSpec(name, material, size, sizeDispersion, amount, pathLengthM, matrix, refresh, s, givenCrossSection,
+                shell);
+    }
+
+    /** This description with a different shell (the instance is not changed). */
+    public SampleSpec withShell(Optional<Shell> s) {
+        return new SampleSpec(name, material, size, sizeDispersion, amount, pathLengthM, matrix, refresh, spectrum,
+                givenCrossSection, s);
     }
 }

@@ -22,7 +22,8 @@ class PlanFilesTest {
         try (Stream<Path> files = Files.list(HOME.resolve("experiments-plan"))) {
             assertThat(files.filter(PlanFiles::listed).map(p -> p.getFileName().toString()))
                     .containsExactlyInAnyOrder("cdse-auger-1khz.plan.json", "pbse-multiplication-80mhz.plan.json",
-                            "inp-zns-tcspc-5mhz.plan.json", "cdse-cds-gain-film.plan.json", "cspbbr3-auger-1khz.plan.json");
+                            "inp-zns-tcspc-5mhz.plan.json", "cdse-cds-gain-film.plan.json", "cspbbr3-auger-1khz.plan.json",
+                            "cdse-cdte-gain-type2.plan.json");
         }
         try (Stream<Path> files = Files.list(HOME.resolve("models/materials"))) {
             assertThat(files.filter(PlanFiles::listed)).as("materials are JSON but no plans").isEmpty();
