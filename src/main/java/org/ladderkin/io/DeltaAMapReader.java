@@ -1,11 +1,12 @@
 package org.ladderkin.io;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 import org.ladderkin.fit.map.DeltaAMap;
 import org.ladderkin.units.Dimension;
 import org.ladderkin.units.Photon;
-import org.ladderkin.units.PhysicalConstants;
 import org.ladderkin.units.Unit;
 
 /**
@@ -23,23 +24,67 @@ public final class DeltaAMapReader {
     /** Reads one map; {@code displayName} is how messages name the file. */
     public static DeltaAMap read(Path path, String displayName, MapOptions options) {
         try (DelimitedLineReader in = DelimitedLineReader.open(path, displayName)) {
-            return read(in, options);
+            return read(in, options, new int[1]);
         }
+    }
+
+    /**
+     * Reads one map per fluence, in the order given. Spectra are shared across a series, so every map must have the
+     * first one's wavelengths; a map that differs is refused at its axis line (resample the maps to one grid first).
+     */
+    public static List<DeltaAMap> readAll(List<Path> paths, MapOptions options) {
+        if (paths.isEmpty()) {
+            throw new IllegalArgumentException("no files to read");
+        }
+        List<DeltaAMap> maps = new ArrayList<>();
+        String firstName = paths.get(0).toString();
+        for (Path p : paths) {
+            String name = p.toString();
+            int[] headerLine = new int[1];
+            DeltaAMap m;
+            try (DelimitedLineReader in = DelimitedLineReader.open(p, name)) {
+                m = read(in, options, headerLine);
+            }
+            if (!maps.isEmpty()) {
+                String difference = axisDifference(maps.get(0).wavelengthsM(), m.wavelengthsM());
+                if (difference != null) {
+                    throw new InputException(new SourceLocation(name, headerLine[0], 0), "wavelengths", InputProblem.MISMATCH,
+                            difference + " in " + firstName + " (the maps of a series share their spectra: resample them "
+                            + "to one wavelength grid or cut them to one window)");
+                }
+            }
+            maps.add(m);
+        }
+        return maps;
+    }
+
+    /** Null when the axes are the same to a part in 10⁹ (photon energies converted twice may differ in the last bits). */
+    private static String axisDifference(double[] first, double[] other) {
+        if (first.length != other.length) {
+            return other.length + " wavelengths here but " + first.length;
+        }
+        for (int i = 0; i < first.length; i++) {
+            if (Math.abs(first[i] - other[i]) > 1e-9 * first[i]) {
+                return "wavelength " + (i + 1) + " is " + fmt(other[i] / 1e-9) + " nm here but " + fmt(first[i] / 1e-9) + " nm";
+            }
+        }
+        return null;
     }
 
     /** Reads a map from text in memory (small maps, tests). */
     static DeltaAMap read(String text, String displayName, MapOptions options) {
         try (DelimitedLineReader in = DelimitedLineReader.of(text, displayName)) {
-            return read(in, options);
+            return read(in, options, new int[1]);
         }
     }
 
-    private static DeltaAMap read(DelimitedLineReader in, MapOptions options) {
+    private static DeltaAMap read(DelimitedLineReader in, MapOptions options, int[] headerLine) {
         String header = in.nextContentLine();
         if (header == null) {
             throw new InputException(SourceLocation.of(in.file()), null, InputProblem.EMPTY,
                     "no data (expected a ΔA map: first row one axis, first column the other)");
         }
+        headerLine[0] = in.lineNumber();
         in.detectDelimiter(header);
         int width = in.count(header);
         if (width < 2) {
@@ -56,8 +101,8 @@ public final class DeltaAMapReader {
                 throw new InputException(in.here(starts[c]), "first row", InputProblem.MISSING_VALUE, "missing axis value (every column needs one)");
             }
         }
-        Unit spectral = spectralUnit(corner, options);
-        MatrixOptions.Orientation o = orientation(options, corner, axis, spectral, in);
+        Unit spectral = MapCorner.spectralUnit(corner, options);
+        MatrixOptions.Orientation o = MapCorner.orientation(options, corner, axis, spectral, in);
         Unit delayUnit = HeaderUnit.find(corner, Dimension.TIME);
         if (delayUnit == null) {
             delayUnit = options.defaultDelayUnit();
@@ -66,7 +111,7 @@ public final class DeltaAMapReader {
             throw new InputException(in.here(starts[0]), "corner cell", InputProblem.WRONG_UNIT, "no time unit for the delays (write the corner as "
                     + "'delay (ps) \\ wavelength (nm)' or give the delay unit)");
         }
-        Signal signal = signal(corner, options.signal());
+        MapCorner.Signal signal = MapCorner.signal(corner, options.signal());
         Axis first = new Axis(in, in.lineNumber(), spectral, delayUnit);
         return o == MatrixOptions.Orientation.DELAYS_DOWN
                 ? delaysDown(in, axis, starts, first, signal)
@@ -84,99 +129,7 @@ public final class DeltaAMapReader {
         }
     }
 
-    /** The cells' unit: a factor to OD, or a relative transmission change. */
-    private record Signal(double toOd, boolean transmission) {
-        double odOf(double v, DelimitedLineReader in, int column) {
-            if (!transmission) {
-                return v * toOd;
-            }
-            if (!(v > -1)) {
-                throw new InputException(in.here(column), "ΔT/T", InputProblem.OUT_OF_RANGE, "ΔT/T = " + fmt(v)
-                        + " is at or below −1 (a transmission cannot drop below zero)");
-            }
-            return -Math.log10(1 + v);
-        }
-    }
-
-    private static Signal signal(String corner, MapOptions.Signal option) {
-        return switch (option) {
-            case OD -> new Signal(1, false);
-            case MILLI_OD -> new Signal(1e-3, false);
-            case DELTA_T_OVER_T -> new Signal(1, true);
-            case FROM_HEADER -> signalFromHeader(corner);
-        };
-    }
-
-    private static Signal signalFromHeader(String corner) {
-        String c = corner.replace('\u0394', 'd').replace('D', 'd');
-        if (c.contains("dT/T")) {
-            return new Signal(1, true);
-        }
-        if (corner.contains("mOD")) {
-            return new Signal(1e-3, false);
-        }
-        if (corner.contains("\u00b5OD") || corner.contains("\u03bcOD") || corner.contains("uOD")) {
-            return new Signal(1e-6, false);
-        }
-        return new Signal(1, false);
-    }
-
-    private static Unit spectralUnit(String corner, MapOptions options) {
-        int l = HeaderUnit.position(corner, Dimension.LENGTH);
-        int e = HeaderUnit.position(corner, Dimension.ENERGY);
-        if (l >= 0 && (e < 0 || l < e)) {
-            return HeaderUnit.find(corner, Dimension.LENGTH);
-        }
-        if (e >= 0) {
-            return HeaderUnit.find(corner, Dimension.ENERGY);
-        }
-        return options.defaultSpectralUnit();
-    }
-
-    private static MatrixOptions.Orientation orientation(MapOptions options, String corner, double[] axis, Unit spectral,
-                                                         DelimitedLineReader in) {
-        if (options.orientation() != MatrixOptions.Orientation.DETECT) {
-            return options.orientation();
-        }
-        int t = HeaderUnit.position(corner, Dimension.TIME);
-        int s = Math.max(HeaderUnit.position(corner, Dimension.LENGTH), HeaderUnit.position(corner, Dimension.ENERGY));
-        if (t >= 0 && s >= 0) {
-            return t < s ? MatrixOptions.Orientation.DELAYS_DOWN : MatrixOptions.Orientation.DELAYS_ACROSS;
-        }
-        boolean spectrum = spectral.dimension() == Dimension.LENGTH ? TaMatrixReader.looksLikeWavelengthsNm(scaledToNm(axis, spectral))
-                : looksLikePhotonEnergiesEv(axis, spectral);
-        boolean delays = TaMatrixReader.looksLikeDelays(axis);
-        if (spectrum && !delays) {
-            return MatrixOptions.Orientation.DELAYS_DOWN;
-        }
-        if (delays && !spectrum) {
-            return MatrixOptions.Orientation.DELAYS_ACROSS;
-        }
-        throw new InputException(in.here(0), null, InputProblem.WRONG_UNIT, "cannot tell whether the first row holds wavelengths or delays "
-                + "(name both in the corner cell, e.g. 'delay (ps) \\ wavelength (nm)', or say transpose)");
-    }
-
-    private static double[] scaledToNm(double[] axis, Unit lengthUnit) {
-        double[] nm = new double[axis.length];
-        for (int i = 0; i < axis.length; i++) {
-            nm[i] = lengthUnit.toSi(axis[i]) / 1e-9;
-        }
-        return nm;
-    }
-
-    /** Probe photons of a broadband TA experiment lie between the mid-infrared and the near ultraviolet. */
-    private static boolean looksLikePhotonEnergiesEv(double[] axis, Unit energyUnit) {
-        double min = Double.POSITIVE_INFINITY;
-        double max = Double.NEGATIVE_INFINITY;
-        for (double v : axis) {
-            double ev = energyUnit.toSi(v) / PhysicalConstants.ELECTRONVOLT_J;
-            min = Math.min(min, ev);
-            max = Math.max(max, ev);
-        }
-        return min >= 0.05 && max <= 8 && max / min < 10;
-    }
-
-    private static DeltaAMap delaysDown(DelimitedLineReader in, double[] axis, int[] headerStarts, Axis a, Signal signal) {
+    private static DeltaAMap delaysDown(DelimitedLineReader in, double[] axis, int[] headerStarts, Axis a, MapCorner.Signal signal) {
         int n = axis.length;
         double[] lambdaM = spectralAxis(axis, a, headerStarts);
         boolean reversed = n > 1 && lambdaM[1] < lambdaM[0];
@@ -223,7 +176,7 @@ public final class DeltaAMapReader {
         return new DeltaAMap(ascending(lambdaM, reversed), delays.toArray(), values.toArray());
     }
 
-    private static DeltaAMap delaysAcross(DelimitedLineReader in, double[] axis, int[] headerStarts, Axis a, Signal signal) {
+    private static DeltaAMap delaysAcross(DelimitedLineReader in, double[] axis, int[] headerStarts, Axis a, MapCorner.Signal signal) {
         int nt = axis.length;
         double[] delaysS = new double[nt];
         GrowableDoubles check = new GrowableDoubles(nt);

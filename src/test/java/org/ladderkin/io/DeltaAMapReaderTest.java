@@ -124,6 +124,17 @@ class DeltaAMapReaderTest {
     }
 
     @Test
+    void aSeriesSharesOneWavelengthAxisOrIsRefusedAtTheMapThatDiffers() throws IOException {
+        Path a = write("a.csv", DOWN);
+        Path b = write("b.csv", ACROSS);
+        Path c = write("c.csv", "# fluence 3\ndelay (ps),500,521,540\n0,1,2,3\n1,1,2,3\n");
+        assertThat(DeltaAMapReader.readAll(java.util.List.of(a, b), PS)).hasSize(2);
+        assertThatThrownBy(() -> DeltaAMapReader.readAll(java.util.List.of(a, b, c), PS))
+                .satisfies(input(InputProblem.MISMATCH, c + ":2", "wavelengths"))
+                .hasMessageContaining("wavelength 2 is 521 nm here but 520 nm in " + a);
+    }
+
+    @Test
     void aBroadbandMapOf1024WavelengthsBy300DelaysStreamsIntoFlatArrays() throws IOException {
         int nw = 1024;
         int nt = 300;

@@ -5,7 +5,8 @@ import java.util.Arrays;
 /**
  * One ΔA(λ, t) map in OD: wavelengths ascending, delays ascending, values row by row (one spectrum per delay) in one
  * flat array so a map of 1024 × 300 cells is one array of doubles, not 300 objects. A missing cell is NaN and stays
- * in place; {@link #missing(int, int)} is the mask, so a window or a fit sees the same grid the file had.
+ * in place; {@link #missing(int, int)} is the mask, so a window or a fit sees the same grid the file had. The arrays
+ * are shared, not copied (a series of broadband maps is large): treat them as read-only; windows make new ones.
  *
  * @param wavelengthsM probe wavelengths (m), strictly increasing
  * @param delaysS      pump–probe delays (s), strictly increasing
