@@ -162,6 +162,47 @@ class FreeSpectraTest {
     }
 
     @Test
+    void aWavelengthWithMissingCellsIsSolvedOnTheRowsItHas() {
+        double[] lambda = wavelengths(4);
+        double[] d = delays(20, 300e-12);
+        double[][] truth = spectra(lambda, 2);
+        Random noise = new Random(3);
+        double[][] pop = twoStatePopulations(1.5, d, 30e-12);
+        double[] values = map(lambda, d, pop, truth, noise, 3e-4).deltaAOd().clone();
+        values[2 * 4 + 1] = Double.NaN;
+        values[15 * 4 + 1] = Double.NaN;
+        SpectraSolution s = FreeSpectra.solve(pop, values, 4, TWO);
+
+        // the same wavelength as its own problem, the two rows taken out by hand
+        double[][] kept = new double[18][];
+        double[] column = new double[18];
+        int r = 0;
+        for (int t = 0; t < 20; t++) {
+            if (t != 2 && t != 15) {
+                kept[r] = pop[t];
+                column[r++] = values[t * 4 + 1];
+            }
+        }
+        SpectraSolution alone = FreeSpectra.solve(kept, column, 1, TWO);
+        for (int k = 0; k < 2; k++) {
+            assertThat(s.spectraOd()[k][1]).isCloseTo(alone.spectraOd()[k][0], within(1e-12));
+            assertThat(s.standardErrorsOd()[k][1]).isCloseTo(alone.standardErrorsOd()[k][0], within(1e-12));
+        }
+        assertThat(s.residualSumsOfSquares()[1]).isCloseTo(alone.residualSumOfSquares(), within(1e-15));
+        assertThat(s.residualSumOfSquares()).isGreaterThan(alone.residualSumOfSquares());
+        // a wavelength missing a cell is not solved with the shared factorisation: its neighbours keep all 20 rows
+        assertThat(s.spectraOd()[0][1]).isNotEqualTo(FreeSpectra.solve(pop, fill(values), 4, TWO).spectraOd()[0][1]);
+    }
+
+    private static double[] fill(double[] values) {
+        double[] out = values.clone();
+        for (int i = 0; i < out.length; i++) {
+            out[i] = Double.isNaN(out[i]) ? 0 : out[i];
+        }
+        return out;
+    }
+
+    @Test
     void theProjectedObjectiveOverTau2AgreesWithAJointLevenbergMarquardtFit() {
         double[] lambda = wavelengths(6);
         double[] d = delays(25, 400e-12);
