@@ -73,7 +73,7 @@ class ArchitectureTest {
         // beam measurement (knife edge, camera second moments, caustic) stands alone: it needs no profile or pulse.
         INSIDE.put("excite", Map.of("", List.of(), "beam", List.of()));
         // photon-counting likelihood fits build on the fit room's parameters and estimates; nothing there uses them.
-        INSIDE.put("fit", Map.of("", List.of(), "counting", List.of("")));
+        INSIDE.put("fit", Map.of("", List.of(), "counting", List.of(""), "map", List.of("")));
     }
 
     /** Single classes a sub-package may use against its room's order; key is the using package, value the classes. */
