@@ -72,7 +72,7 @@ final class PlanCommand implements Callable<Integer> {
         printSettings(plan, out);
         List<WhatIf> variants = whatIfs.stream().map(w -> WhatIf.of(inputs, w, WhatIfArgument.parse(w))).toList();
         for (var v : variants) {
-            out.println(String.format(java.util.Locale.ROOT, "What if %s: rate %s, residual %.3g, charged %.3g, worst risk %s",
+            out.println(String.format(java.util.Locale.ROOT, "What if %s: rate %s, excited or charged %.3g, charged %.3g, worst risk %s",
                     v.label(), fmt(v.plan().chosenRate().repetitionRateHz(), Dimension.FREQUENCY), v.plan().chosenRate().residual(),
                     v.plan().chosenRate().charged(), v.plan().risks().stream().map(r -> r.verdict())
                             .reduce(org.ladderkin.observe.Verdict.PASS, org.ladderkin.observe.Verdict::worst)));
@@ -98,7 +98,7 @@ final class PlanCommand implements Callable<Integer> {
         out.println("  pump        " + fmt(w.wavelengthM(), Dimension.LENGTH) + "  (" + String.join("; ", w.reasons()) + ")");
         var r = plan.chosenRate();
         out.println("  rate        " + fmt(r.repetitionRateHz(), Dimension.FREQUENCY) + "  (picker ÷" + r.division() + ")");
-        out.println(String.format(java.util.Locale.ROOT, "  at the top  ⟨N⟩ = %.4g (%s): residual %.3g, charged %.3g, "
+        out.println(String.format(java.util.Locale.ROOT, "  at the top  ⟨N⟩ = %.4g (%s): excited or charged %.3g, charged %.3g, "
                         + "steady rise %.3g K", r.nAvgProbeWeighted(), fmt(r.pulseEnergyJ(), Dimension.ENERGY), r.residual(),
                 r.charged(), r.steadyRiseK()));
         out.println("              " + plan.rateChoice());

@@ -127,8 +127,8 @@ public final class PlanOutputs {
             o.put("repetitionRateHz", r.repetitionRateHz());
             o.put("nAvgProbeWeighted", r.nAvgProbeWeighted());
             o.put("pulseEnergyNj", r.pulseEnergyJ() * 1e9);
-            o.put("residualExcitation", r.residual());
-            o.put("chargedFraction", r.charged());
+            o.put("excitedOrChargedFractionAtNextPulse", r.residual());
+            o.put("chargedFractionAtNextPulse", r.charged());
             o.put("steadyRiseK", Double.isFinite(r.steadyRiseK()) ? r.steadyRiseK() : null);
             o.put("verdict", r.verdict().name());
         }
