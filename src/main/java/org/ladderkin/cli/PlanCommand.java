@@ -101,6 +101,11 @@ final class PlanCommand implements Callable<Integer> {
         out.println(String.format(java.util.Locale.ROOT, "  at the top  ⟨N⟩ = %.4g (%s): excited or charged %.3g, charged %.3g, "
                         + "steady rise %.3g K", r.nAvgProbeWeighted(), fmt(r.pulseEnergyJ(), Dimension.ENERGY), r.residual(),
                 r.charged(), r.steadyRiseK()));
+        var h = plan.heat();
+        out.println(String.format(java.util.Locale.ROOT, "  heat        averaged (⟨N⟩ = %.3g): %.3g K per pulse, one dot jumps %.3g K; "
+                        + "hottest dots (pump axis, front face, ⟨N⟩ = %.3g): %.3g K per pulse, one dot jumps %.3g K; highest "
+                        + "rise %.3g K", r.nAvgProbeWeighted(), h.perPulseRiseK(), h.dotJumpK(), h.hottest().nAvg(),
+                h.hottest().perPulseRiseK(), h.hottest().dotJumpK(), h.peakRiseK()));
         out.println("              " + plan.rateChoice());
         out.println("  series      ⟨N⟩ probe-averaged ± relative (largest source) → pulse energy (attenuation)");
         for (var f : plan.fluences()) {

@@ -141,6 +141,13 @@ public final class PlanOutputs {
         heat.put("steadyRiseK", Double.isFinite(plan.heat().steadyRiseK()) ? plan.heat().steadyRiseK() : null);
         heat.put("perPulseRiseK", Double.isFinite(plan.heat().perPulseRiseK()) ? plan.heat().perPulseRiseK() : null);
         heat.put("dotJumpK", plan.heat().dotJumpK());
+        // the hottest dots (pump axis, front face) beside the probe- and depth-averaged numbers above
+        ObjectNode hot = heat.putObject("hottest");
+        hot.put("nAvg", plan.heat().hottest().nAvg());
+        hot.put("heatFraction", plan.heat().hottest().heatFraction());
+        hot.put("perPulseRiseK", Double.isFinite(plan.heat().hottest().perPulseRiseK()) ? plan.heat().hottest().perPulseRiseK() : null);
+        hot.put("dotJumpK", plan.heat().hottest().dotJumpK());
+        heat.put("peakRiseK", Double.isFinite(plan.heat().peakRiseK()) ? plan.heat().peakRiseK() : null);
         heat.put("model", plan.heat().model());
         Predictions pr = plan.predictions();
         ObjectNode train = root.putObject("pulseTrainAtHighestFluence");

@@ -151,8 +151,12 @@ public final class PlanReport {
                 List.of("share of absorbed energy left as heat", num(h.heatFraction())),
                 List.of("heating power in the excited volume (W)", num(h.heatPowerW())),
                 List.of("steady-state rise on the beam axis (K)", num(h.steadyRiseK())),
-                List.of("rise of the excited volume per pulse (K)", num(h.perPulseRiseK())),
-                List.of("lattice temperature jump of one dot (K)", num(h.dotJumpK())),
+                List.of("rise of the excited volume per pulse, probe- and depth-averaged (K)", num(h.perPulseRiseK())),
+                List.of("lattice temperature jump of one dot, probe- and depth-averaged (K)", num(h.dotJumpK())),
+                List.of("⟨N⟩ of the hottest dots (pump axis, front face)", num(h.hottest().nAvg())),
+                List.of("rise per pulse at the hottest dots (K)", num(h.hottest().perPulseRiseK())),
+                List.of("lattice temperature jump of a hottest dot (K)", num(h.hottest().dotJumpK())),
+                List.of("highest rise: steady + hottest pulse (K), judged in the risks", num(h.peakRiseK())),
                 List.of("conduction model", h.model())));
         page.heading(2, "Model and assumptions");
         var m = plan.model();

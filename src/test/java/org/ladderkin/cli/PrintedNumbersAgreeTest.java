@@ -66,7 +66,7 @@ class PrintedNumbersAgreeTest {
         JsonNode train = json.get("pulseTrainAtHighestFluence");
         assertThat(train.get("nAvgProbeWeighted").asDouble()).isEqualTo(topN);
         assertThat(train.get("buildUpPulses").asInt()).isGreaterThanOrEqualTo(train.get("pulsesToSteadyState").asInt());
-        assertThat(risk(json, "steady-state heating").get("value").asDouble()).isEqualTo(heat.get("steadyRiseK").asDouble());
+        assertThat(risk(json, org.ladderkin.plan.HeatBudget.RISK_NAME).get("value").asDouble()).isEqualTo(heat.get("peakRiseK").asDouble());
         assertThat(risk(json, "photocharging").get("value").asDouble()).isEqualTo(chosenRate.get("chargedFractionAtNextPulse").asDouble());
         assertThat(risk(json, "residual excitation at the next pulse").get("value").asDouble())
                 .isEqualTo(chosenRate.get("excitedOrChargedFractionAtNextPulse").asDouble());
@@ -238,7 +238,11 @@ class PrintedNumbersAgreeTest {
         printedOrNull(rows.get(2).get(1), heat.get("steadyRiseK"), "steady rise");
         printedOrNull(rows.get(3).get(1), heat.get("perPulseRiseK"), "per-pulse rise");
         printed(rows.get(4).get(1), heat.get("dotJumpK").asDouble(), "dot jump");
-        assertThat(rows.get(5).get(1)).isEqualTo(heat.get("model").asText());
+        printed(rows.get(5).get(1), heat.at("/hottest/nAvg").asDouble(), "hottest ⟨N⟩");
+        printedOrNull(rows.get(6).get(1), heat.at("/hottest/perPulseRiseK"), "hottest per-pulse rise");
+        printed(rows.get(7).get(1), heat.at("/hottest/dotJumpK").asDouble(), "hottest dot jump");
+        printedOrNull(rows.get(8).get(1), heat.get("peakRiseK"), "highest rise");
+        assertThat(rows.get(9).get(1)).isEqualTo(heat.get("model").asText());
 
         rows = h.table("Model and assumptions");
         JsonNode model = json.get("model");
