@@ -50,7 +50,7 @@ final class PlanCommand implements Callable<Integer> {
     Path outDir;
 
     @Option(names = "--what-if", paramLabel = "CHANGE", description = {"also plan with one input changed and compare "
-            + "(repeatable): refresh=static|stirred|flowing:<flow>:<cell volume>, rate=<frequency>"})
+            + "(repeatable): refresh=static|stirred|flowing:<flow>:<cell volume>[:<cross-section>], rate=<frequency>"})
     List<String> whatIfs = new ArrayList<>();
 
     @Option(names = "--archive", arity = "0..1", fallbackValue = "", paramLabel = "FILE|JDBC-URL",

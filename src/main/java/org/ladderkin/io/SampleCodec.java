@@ -172,7 +172,8 @@ public final class SampleCodec {
         } else if (mode.equals("flowing")) {
             double flow = n.field("flowRate").positive(Dimension.VOLUMETRIC_FLOW, null);
             double volume = n.field("cellVolume").positive(Dimension.VOLUME, null);
-            r = Refresh.flowing(flow, volume);
+            double area = n.optional("cellCrossSection").map(a -> a.positive(Dimension.AREA, null)).orElse(Double.NaN);
+            r = Refresh.flowing(flow, volume, area);
         } else {
             r = mode.equals("static") ? Refresh.stationary() : Refresh.stirred();
         }

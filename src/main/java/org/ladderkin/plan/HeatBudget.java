@@ -121,6 +121,20 @@ public record HeatBudget(double heatFraction, double heatPowerW, double steadyRi
                     Double.POSITIVE_INFINITY, "film on fused silica, conduction into the substrate", hot);
         }
         double rise = Heating.steadyRiseLiquidK(power, radius, s.spec().pathLengthM(), WALL_DISTANCE_M, medium);
+        org.ladderkin.sample.Refresh refresh = s.spec().refresh();
+        if (refresh.mode() == org.ladderkin.sample.Refresh.Mode.FLOWING) {
+            double speed = refresh.flowSpeedMPerS(s.spec().pathLengthM());
+            double flowRise = Heating.flowRiseK(power, radius, s.spec().pathLengthM(), speed, medium);
+            // flow and conduction each remove heat; either estimate ignores the other path, so the smaller one bounds
+            if (flowRise < rise) {
+                return new HeatBudget(fraction, power, flowRise, perPulse, dotJump, medium.boilingPointK(),
+                        String.format(java.util.Locale.ROOT, "flowing liquid: a parcel crosses the beam at %.3g mm/s "
+                                + "(flow / cell cross-section) and leaves with 4P/(π·w·L·v·ρc)", speed * 1e3), hot);
+            }
+            return new HeatBudget(fraction, power, rise, perPulse, dotJump, medium.boilingPointK(), String.format(
+                    java.util.Locale.ROOT, "flowing liquid, but slower (%.3g mm/s) than radial conduction to a wall 5 mm "
+                            + "away removes the heat: conduction bounds the rise", speed * 1e3), hot);
+        }
         return new HeatBudget(fraction, power, rise, perPulse, dotJump, medium.boilingPointK(),
                 "liquid, radial conduction to a wall 5 mm away", hot);
     }

@@ -150,13 +150,13 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
         double refreshS = switch (refresh.mode()) {
             case STATIC -> Double.POSITIVE_INFINITY;
             case STIRRED -> DEFAULT_STIRRED_REFRESH_S;
-            case FLOWING -> refresh.exchangeTimeS();
+            case FLOWING -> refresh.flowRenewalS(pumpDiameterM, sample.spec().pathLengthM());
             case TRANSLATED -> refresh.translationRefreshS(pumpDiameterM);
         };
         bases.add("refresh: " + switch (refresh.mode()) {
             case STATIC -> "static sample, no exchange";
             case STIRRED -> "stirred, excited volume renewed in ~0.1 s (common practice, no source)";
-            case FLOWING -> "flowing, cell volume / flow rate";
+            case FLOWING -> flowingBasis(refresh, pumpDiameterM, sample.spec().pathLengthM());
             case TRANSLATED -> String.format(java.util.Locale.ROOT, "translated, pump 1/e² diameter / speed = %.3g mm / "
                     + "%.3g mm/s", pumpDiameterM * 1e3, refresh.speedMPerS() * 1e3);
         });
@@ -169,6 +169,17 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
         }
         return new ModelAssumptions(tau1, qy, tau2, auger, rad, trionNeg, trionPos, pIon, neut, refreshS, cooling, bases,
                 o.processes());
+    }
+
+    /** How a flowing cell's refresh time was found, with the default cross-section named when it was used. */
+    private static String flowingBasis(Refresh refresh, double pumpDiameterM, double pathLengthM) {
+        double area = refresh.flowCrossSectionM2(pathLengthM);
+        return String.format(java.util.Locale.ROOT, "flowing, pump 1/e² diameter / flow speed = %.3g mm / %.3g mm/s (flow "
+                + "%.3g mL/min through a cross-section of %.3g mm²%s)", pumpDiameterM * 1e3,
+                refresh.flowSpeedMPerS(pathLengthM) * 1e3, refresh.flowRateM3PerS() * 6e7, area * 1e6,
+                Double.isNaN(refresh.crossSectionM2()) ? String.format(java.util.Locale.ROOT, ": path length %.3g mm × "
+                        + "%.3g mm, a flow cuvette's channel width when 'cellCrossSection' is not given (common practice, "
+                        + "no source)", pathLengthM * 1e3, Refresh.DEFAULT_FLOW_CELL_WIDTH_M * 1e3) : ", as given");
     }
 
     /** The ladder model: neutral and negative dots, no hot-exciton resolution (instantaneous cooling). */
