@@ -51,6 +51,8 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
     public static final double DEFAULT_NEUTRALISATION_S = 10;
     /** Default time for a magnetic stirrer to renew the excited volume (common practice, no source). */
     public static final double DEFAULT_STIRRED_REFRESH_S = 0.1;
+    /** Where the trion relation 1/τ₂ = 2/τ_X− + 2/τ_X+ comes from. */
+    static final String TRION_RELATION = "Park, Bae, Pietryga, Klimov, ACS Nano 8, 7288 (2014), from memory";
     /** Default intraband cooling time: sub-picosecond (Klimov & McBranch, Phys. Rev. Lett. 80, 4028 (1998)). */
     public static final double DEFAULT_COOLING_S = 0.5e-12;
 
@@ -128,17 +130,18 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
         RadiativeScaling rad = o.radiativeScaling() != null ? o.radiativeScaling() : RadiativeScaling.STATISTICAL;
         bases.add("radiative scaling " + rad.key() + (o.radiativeScaling() != null ? ": plan"
                 : ": default, N² (Rajadell, Climente, Planelles, Bertoni, J. Phys. Chem. C 113, 11268 (2009))"));
-        // with equal trion rates 1/τ₂ = 2/τ_X− + 2/τ_X+ gives τ_X = 4τ₂ (Park et al., Phys. Rev. Lett. 2014, from memory)
+        // with equal trion rates 1/τ₂ = 2/τ_X− + 2/τ_X+ gives τ_X = 4τ₂ (TRION_RELATION)
         boolean trionKnown = m.trionLifetimeS().known();
         double trionNeg = pick(o.tauTrionNegativeS(), trionKnown ? m.trionLifetimeS().value() : 4 * tau2,
                 "negative-trion lifetime", "plan", trionKnown ? "material library: " + m.trionLifetimeS().source()
-                        : "4·τ₂, equal trion rates in 1/τ₂ = 2/τ_X− + 2/τ_X+ (Park et al., Phys. Rev. Lett. 2014, from memory)",
+                        : "4·τ₂, equal trion rates in 1/τ₂ = 2/τ_X− + 2/τ_X+ (" + TRION_RELATION + ")",
                 bases);
-        // 1/τ_XX = 2/τ_X− + 2/τ_X+ (Park, Bae, Padilha, Pietryga, Klimov, Phys. Rev. Lett. 2014, from memory)
+        // 1/τ_XX = 2/τ_X− + 2/τ_X+: title, authors and year of TRION_RELATION seen in a stored copy of the paper (it was
+        // credited to Phys. Rev. Lett. here before); volume and page from memory
         double posRate = (1 / tau2 - 2 / trionNeg) / 2;
         double trionPosDerived = posRate > 0 ? 1 / posRate : trionNeg;
         double trionPos = pick(o.tauTrionPositiveS(), trionPosDerived, "positive-trion lifetime", "plan",
-                posRate > 0 ? "from 1/τ₂ = 2/τ_X− + 2/τ_X+ (Park et al., Phys. Rev. Lett. 2014, from memory)"
+                posRate > 0 ? "from 1/τ₂ = 2/τ_X− + 2/τ_X+ (" + TRION_RELATION + ")"
                         : "taken equal to the negative trion (the trion relation gave no positive rate)", bases);
         double pIon = pick(o.ionisationProbability(), DEFAULT_IONISATION, "Auger ionisation probability", "plan",
                 "default order of magnitude (from memory)", bases);
