@@ -84,7 +84,7 @@ class FlowingCellRefreshTest {
                 .contains("path length 1.00 mm × 10.0 mm").contains("common practice, no source");
     }
 
-    private static Path flowing(Path dir, String fields) throws Exception {
+    static Path flowing(Path dir, String fields) throws Exception {
         String demo = Files.readString(DEMO);
         String changed = demo.replace("\"refresh\": { \"mode\": \"stirred\" }", "\"refresh\": { \"mode\": \"flowing\", "
                 + fields + " }");
