@@ -50,7 +50,7 @@ final class PlanCommand implements Callable<Integer> {
     Path outDir;
 
     @Option(names = "--what-if", paramLabel = "CHANGE", description = {"also plan with one input changed and compare "
-            + "(repeatable): refresh=static|stirred|flowing:<flow>:<cell volume>, rate=<frequency>"})
+            + "(repeatable): refresh=static|stirred|flowing:<flow>:<cell volume>[:<cross-section>], rate=<frequency>"})
     List<String> whatIfs = new ArrayList<>();
 
     @Option(names = "--archive", arity = "0..1", fallbackValue = "", paramLabel = "FILE|JDBC-URL",
@@ -72,7 +72,7 @@ final class PlanCommand implements Callable<Integer> {
         printSettings(plan, out);
         List<WhatIf> variants = whatIfs.stream().map(w -> WhatIf.of(inputs, w, WhatIfArgument.parse(w))).toList();
         for (var v : variants) {
-            out.println(String.format(java.util.Locale.ROOT, "What if %s: rate %s, residual %.3g, charged %.3g, worst risk %s",
+            out.println(String.format(java.util.Locale.ROOT, "What if %s: rate %s, excited or charged %.3g, charged %.3g, worst risk %s",
                     v.label(), fmt(v.plan().chosenRate().repetitionRateHz(), Dimension.FREQUENCY), v.plan().chosenRate().residual(),
                     v.plan().chosenRate().charged(), v.plan().risks().stream().map(r -> r.verdict())
                             .reduce(org.ladderkin.observe.Verdict.PASS, org.ladderkin.observe.Verdict::worst)));
@@ -98,9 +98,14 @@ final class PlanCommand implements Callable<Integer> {
         out.println("  pump        " + fmt(w.wavelengthM(), Dimension.LENGTH) + "  (" + String.join("; ", w.reasons()) + ")");
         var r = plan.chosenRate();
         out.println("  rate        " + fmt(r.repetitionRateHz(), Dimension.FREQUENCY) + "  (picker ÷" + r.division() + ")");
-        out.println(String.format(java.util.Locale.ROOT, "  at the top  ⟨N⟩ = %.4g (%s): residual %.3g, charged %.3g, "
+        out.println(String.format(java.util.Locale.ROOT, "  at the top  ⟨N⟩ = %.4g (%s): excited or charged %.3g, charged %.3g, "
                         + "steady rise %.3g K", r.nAvgProbeWeighted(), fmt(r.pulseEnergyJ(), Dimension.ENERGY), r.residual(),
                 r.charged(), r.steadyRiseK()));
+        var h = plan.heat();
+        out.println(String.format(java.util.Locale.ROOT, "  heat        averaged (⟨N⟩ = %.3g): %.3g K per pulse, one dot jumps %.3g K; "
+                        + "hottest dots (pump axis, front face, ⟨N⟩ = %.3g): %.3g K per pulse, one dot jumps %.3g K; highest "
+                        + "rise %.3g K", r.nAvgProbeWeighted(), h.perPulseRiseK(), h.dotJumpK(), h.hottest().nAvg(),
+                h.hottest().perPulseRiseK(), h.hottest().dotJumpK(), h.peakRiseK()));
         out.println("              " + plan.rateChoice());
         out.println("  series      ⟨N⟩ probe-averaged ± relative (largest source) → pulse energy (attenuation)");
         for (var f : plan.fluences()) {

@@ -256,8 +256,11 @@ final class SimulateCommand implements Callable<Integer> {
                 SteadyState ss = states.get(i);
                 if (ss != null) {
                     g.writeObjectFieldStart("steadyState");
-                    g.writeNumberField("residualExcitedFractionAtNextPulse", ss.residualExcitedFraction());
+                    // one name per quantity, each defined once in docs/physics.md §10
+                    g.writeNumberField("excitedFractionAtNextPulse", ss.residualExcitedFraction());
                     g.writeNumberField("chargedFractionAtNextPulse", ss.chargedFraction());
+                    g.writeNumberField("excitedOrChargedFractionAtNextPulse", ss.beforePulse().expectation(
+                            org.ladderkin.kinetics.Observables.excitedOrCharged(kinetics.space())));
                     g.writeNumberField("secondEigenvalueModulus", ss.secondEigenvalueModulus());
                     g.writeNumberField("pulsesToWithinOnePercent", ss.pulsesToOnePercent());
                     g.writeEndObject();

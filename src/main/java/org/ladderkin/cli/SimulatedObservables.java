@@ -99,8 +99,12 @@ final class SimulatedObservables {
                     require(in.photonEnergyJ(), "--pump", "temperature");
                     require(in.firstExcitonJ(), "--first-exciton (or --material with --diameter)", "temperature");
                     require(in.dotHeatCapacityJPerK(), "--material with --diameter", "temperature");
-                    out.add(new Column("dot_temperature_rise_k@N=" + nLabel, traces.dotTemperatureRiseK(pulse,
-                            in.photonEnergyJ(), in.firstExcitonJ(), in.dotHeatCapacityJPerK())));
+                    try {
+                        out.add(new Column("dot_temperature_rise_k@N=" + nLabel, traces.dotTemperatureRiseK(pulse,
+                                in.photonEnergyJ(), in.firstExcitonJ(), in.dotHeatCapacityJPerK())));
+                    } catch (IllegalArgumentException e) {
+                        throw new IllegalArgumentException("--pump: " + e.getMessage(), e);
+                    }
                 }
                 case "spectrum" -> {
                     require(in.firstExcitonJ(), "--first-exciton (or --material with --diameter)", "spectrum");

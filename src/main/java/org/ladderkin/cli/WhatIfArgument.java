@@ -27,7 +27,7 @@ final class WhatIfArgument {
             case "refresh" -> new WhatIfChange.RefreshChange(refresh(value));
             case "rate" -> new WhatIfChange.RepetitionRateChange(Quantity.parseSi(value, Dimension.FREQUENCY));
             default -> throw new IllegalArgumentException(String.format(Locale.ROOT,
-                    "unknown what-if '%s' (known: refresh=static|stirred|flowing:<flow>:<cell volume>, rate=<frequency>)", key));
+                    "unknown what-if '%s' (known: refresh=static|stirred|flowing:<flow>:<cell volume>[:<cross-section>], rate=<frequency>)", key));
         };
     }
 
@@ -37,12 +37,13 @@ final class WhatIfArgument {
             case "static" -> Refresh.stationary();
             case "stirred" -> Refresh.stirred();
             case "flowing" -> {
-                if (parts.length != 3) {
-                    throw new IllegalArgumentException("what-if refresh=flowing needs flow rate and cell volume, e.g. "
-                            + "refresh=flowing:5 mL/min:0.5 mL");
+                if (parts.length != 3 && parts.length != 4) {
+                    throw new IllegalArgumentException("what-if refresh=flowing needs flow rate and cell volume, and "
+                            + "optionally the cell's cross-section, e.g. refresh=flowing:5 mL/min:0.5 mL:10 mm2");
                 }
                 yield Refresh.flowing(Quantity.parseSi(parts[1], Dimension.VOLUMETRIC_FLOW),
-                        Quantity.parseSi(parts[2], Dimension.VOLUME));
+                        Quantity.parseSi(parts[2], Dimension.VOLUME),
+                        parts.length == 4 ? Quantity.parseSi(parts[3], Dimension.AREA) : Double.NaN);
             }
             default -> throw new IllegalArgumentException("what-if refresh must be static, stirred or flowing, was '"
                     + parts[0] + "'");

@@ -162,13 +162,7 @@ public final class MaterialCodec {
             wavelength = n.field("wavelength").positive(Dimension.LENGTH, null);
         }
         String which = n.oneOf("extinction", "crossSection");
-        double coefficientM2;
         boolean asExtinction = which.equals("extinction");
-        if (asExtinction) {
-            coefficientM2 = AbsorptionLaw.crossSectionM2(n.field("extinction").positive(Dimension.MOLAR_EXTINCTION, null));
-        } else {
-            coefficientM2 = n.field("crossSection").positive(Dimension.AREA, null);
-        }
         AbsorptionLaw.Length per = switch (n.field("per").choice("diameter", "radius", "edge")) {
             case "diameter" -> AbsorptionLaw.Length.DIAMETER;
             case "radius" -> AbsorptionLaw.Length.RADIUS;
@@ -180,6 +174,9 @@ public final class MaterialCodec {
             throw unitNode.error(InputProblem.WRONG_UNIT, "expected a length unit (" + Units.accepted(Dimension.LENGTH) + ")");
         }
         double exponent = n.field("exponent").number();
+        double coefficientM2 = asExtinction
+                ? AbsorptionLaw.crossSectionM2(n.field("extinction").positive(Dimension.MOLAR_EXTINCTION, null))
+                : crossSectionAtUnitM2(n.field("crossSection"), unit.toSi(1), exponent);
         String source = n.field("source").string();
         Sourced uncertainty = n.optional("relativeUncertainty").map(MaterialCodec::fraction).orElse(AbsorptionLaw.DEFAULT_UNCERTAINTY);
         n.finish();
@@ -188,6 +185,39 @@ public final class MaterialCodec {
         } catch (IllegalArgumentException e) {
             throw n.error(InputProblem.INVALID_VALUE, e.getMessage());
         }
+    }
+
+    /** A number and a length unit raised to −1: "5.501e5 cm⁻¹" (or cm^-1). */
+    private static final java.util.regex.Pattern INVERSE_LENGTH = java.util.regex.Pattern.compile("(\\S+)\\s+(\\S+?)(?:⁻¹|\\^-1)");
+
+    /**
+     * The law's σ₁, the cross-section of a dot with x = one length unit (m²). A published σ = C·x³ with x in a length
+     * unit has C in area per length³, an inverse length ("5.501e5 cm⁻¹"): σ₁ = C·(1 unit)³. An area is σ₁ itself.
+     */
+    private static double crossSectionAtUnitM2(Node c, double lengthUnitM, double exponent) {
+        java.util.regex.Matcher m = INVERSE_LENGTH.matcher(c.string().strip());
+        if (!m.matches()) {
+            return c.positive(Dimension.AREA, null);
+        }
+        Unit per = Units.find(m.group(2));
+        if (per == null || per.dimension() != Dimension.LENGTH) {
+            throw c.error(InputProblem.UNKNOWN_UNIT, "expected an area such as \"2e-15 cm²\" or, with \"exponent\": 3, "
+                    + "an inverse length such as \"5.501e5 cm⁻¹\"");
+        }
+        if (exponent != 3) {
+            throw c.error(InputProblem.WRONG_UNIT, "an inverse length is σ per length³: it needs \"exponent\": 3, found "
+                    + exponent + " (or give σ of a dot one length unit in size, an area)");
+        }
+        double value;
+        try {
+            value = Double.parseDouble(m.group(1));
+        } catch (NumberFormatException e) {
+            throw c.error(InputProblem.BAD_NUMBER, "'" + m.group(1) + "' is not a number");
+        }
+        if (!(value > 0) || Double.isInfinite(value)) {
+            throw c.error(InputProblem.OUT_OF_RANGE, "must be > 0, was " + m.group(1));
+        }
+        return value / per.toSi(1) * lengthUnitM * lengthUnitM * lengthUnitM;
     }
 
     /** {"value": 0.15, "source": "..."}: a relative uncertainty, a fraction in (0, 10]. */

@@ -127,8 +127,8 @@ public final class PlanOutputs {
             o.put("repetitionRateHz", r.repetitionRateHz());
             o.put("nAvgProbeWeighted", r.nAvgProbeWeighted());
             o.put("pulseEnergyNj", r.pulseEnergyJ() * 1e9);
-            o.put("residualExcitation", r.residual());
-            o.put("chargedFraction", r.charged());
+            o.put("excitedOrChargedFractionAtNextPulse", r.residual());
+            o.put("chargedFractionAtNextPulse", r.charged());
             o.put("steadyRiseK", Double.isFinite(r.steadyRiseK()) ? r.steadyRiseK() : null);
             o.put("verdict", r.verdict().name());
         }
@@ -141,6 +141,13 @@ public final class PlanOutputs {
         heat.put("steadyRiseK", Double.isFinite(plan.heat().steadyRiseK()) ? plan.heat().steadyRiseK() : null);
         heat.put("perPulseRiseK", Double.isFinite(plan.heat().perPulseRiseK()) ? plan.heat().perPulseRiseK() : null);
         heat.put("dotJumpK", plan.heat().dotJumpK());
+        // the hottest dots (pump axis, front face) beside the probe- and depth-averaged numbers above
+        ObjectNode hot = heat.putObject("hottest");
+        hot.put("nAvg", plan.heat().hottest().nAvg());
+        hot.put("heatFraction", plan.heat().hottest().heatFraction());
+        hot.put("perPulseRiseK", Double.isFinite(plan.heat().hottest().perPulseRiseK()) ? plan.heat().hottest().perPulseRiseK() : null);
+        hot.put("dotJumpK", plan.heat().hottest().dotJumpK());
+        heat.put("peakRiseK", Double.isFinite(plan.heat().peakRiseK()) ? plan.heat().peakRiseK() : null);
         heat.put("model", plan.heat().model());
         Predictions pr = plan.predictions();
         ObjectNode train = root.putObject("pulseTrainAtHighestFluence");

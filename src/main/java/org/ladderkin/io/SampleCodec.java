@@ -151,6 +151,22 @@ public final class SampleCodec {
         }
     }
 
+    /**
+     * Refuses a pump photon below the sample's first exciton, at the offending wavelength: it makes no exciton of the
+     * ladder and would leave negative heat (docs/physics.md, "Heating": energy conservation).
+     */
+    public static void requireAboveGap(Node pumpWavelengths, Sample sample) {
+        double gapJ = sample.firstExcitonEnergyJ();
+        for (Node w : Double.isNaN(gapJ) ? java.util.List.<Node>of() : pumpWavelengths.items(1)) {
+            try {
+                org.ladderkin.observe.Heating.heatPerAbsorbedPhotonJ(org.ladderkin.units.Photon.energyJ(
+                        w.positive(Dimension.LENGTH, null)), 1, gapJ);
+            } catch (IllegalArgumentException e) {
+                throw w.error(InputProblem.OUT_OF_RANGE, e.getMessage());
+            }
+        }
+    }
+
     private static Refresh refresh(Node n) {
         String mode = n.field("mode").choice("static", "stirred", "flowing", "translated");
         Refresh r;
@@ -159,7 +175,8 @@ public final class SampleCodec {
         } else if (mode.equals("flowing")) {
             double flow = n.field("flowRate").positive(Dimension.VOLUMETRIC_FLOW, null);
             double volume = n.field("cellVolume").positive(Dimension.VOLUME, null);
-            r = Refresh.flowing(flow, volume);
+            double area = n.optional("cellCrossSection").map(a -> a.positive(Dimension.AREA, null)).orElse(Double.NaN);
+            r = Refresh.flowing(flow, volume, area);
         } else {
             r = mode.equals("static") ? Refresh.stationary() : Refresh.stirred();
         }

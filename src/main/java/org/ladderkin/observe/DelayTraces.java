@@ -49,8 +49,9 @@ public final class DelayTraces {
 
     /**
      * Lattice temperature rise of one dot since the pulse (K), before heat leaves the dot: prompt cooling deposits
-     * (photons·ħω − added excitons·E₁S), and every non-radiative recombination since the pulse deposits E₁S; the
-     * recombinations are the drop in the mean exciton number minus the photons emitted (exact, from the generator).
+     * ħω − m·E₁S per photon that made m excitons (refused when negative: {@link Heating#heatPerAbsorbedPhotonJ}), and
+     * every non-radiative recombination since the pulse deposits E₁S; the recombinations are the drop in the mean
+     * exciton number minus the photons emitted (exact, from the generator).
      *
      * @param pulse                the pulse that made {@code after} (its photons, and excitons per photon)
      * @param photonEnergyJ        pump photon energy ħω (J)
@@ -59,8 +60,15 @@ public final class DelayTraces {
      */
     public double[] dotTemperatureRiseK(PulseExcitation pulse, double photonEnergyJ, double firstExcitonJ,
                                         double dotHeatCapacityJPerK) {
-        double photons = pulse instanceof PulseExcitation.Multiplication m ? m.meanPhotons() : pulse.meanExcitons();
-        double prompt = photons * photonEnergyJ - pulse.meanExcitons() * firstExcitonJ;
+        double prompt;
+        if (pulse instanceof PulseExcitation.Multiplication m && m.eta() > 0) {
+            // a share η of the photons makes two excitons, the rest one: each share left its own non-negative heat
+            prompt = m.meanPhotons() * ((1 - m.eta()) * Heating.heatPerAbsorbedPhotonJ(photonEnergyJ, 1, firstExcitonJ)
+                    + m.eta() * Heating.heatPerAbsorbedPhotonJ(photonEnergyJ, 2, firstExcitonJ));
+        } else {
+            double photons = pulse instanceof PulseExcitation.Multiplication m ? m.meanPhotons() : pulse.meanExcitons();
+            prompt = photons * Heating.heatPerAbsorbedPhotonJ(photonEnergyJ, 1, firstExcitonJ);
+        }
         double[] excitons = new double[kin.space().size()];
         for (int s = 0; s < excitons.length; s++) {
             excitons[s] = kin.space().excitons(s);

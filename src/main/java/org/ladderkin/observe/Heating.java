@@ -28,6 +28,41 @@ public final class Heating {
     }
 
     /**
+     * Heat one absorbed photon leaves once the {@code excitonsPerPhoton} excitons it made have cooled to the band edge:
+     * ħω − m·E₁S. A photon below m·E₁S cannot make m excitons, so that input is refused rather than turned into
+     * negative heat (docs/physics.md, "Heating": energy conservation).
+     *
+     * @param excitonsPerPhoton excitons made by one photon: 1, or 2 and more with carrier multiplication
+     * @param firstExcitonJ     first-exciton (band-edge) energy E₁S (J)
+     */
+    public static double heatPerAbsorbedPhotonJ(double photonEnergyJ, int excitonsPerPhoton, double firstExcitonJ) {
+        ThermalMedium.positive(photonEnergyJ, "photon energy", "J");
+        ThermalMedium.positive(firstExcitonJ, "first-exciton energy", "J");
+        if (excitonsPerPhoton < 1) {
+            throw new IllegalArgumentException("excitons per photon must be >= 1, was " + excitonsPerPhoton);
+        }
+        double ratio = photonEnergyJ / firstExcitonJ;
+        // a relative 1e-12 keeps ħω = 2·E₁S, typed in eV, on the allowed side of its own threshold
+        if (ratio < excitonsPerPhoton * (1 - 1e-12)) {
+            double ev = org.ladderkin.units.PhysicalConstants.ELECTRONVOLT_J;
+            throw new IllegalArgumentException(excitonsPerPhoton == 1
+                    ? "energy conservation: the pump photon (" + short4(photonEnergyJ / ev) + " eV) is below the first "
+                    + "exciton (" + short4(firstExcitonJ / ev) + " eV), ħω = " + short4(ratio) + "·E₁S: it makes no "
+                    + "band-edge exciton of this model (allowed: ħω ≥ E₁S)"
+                    : "energy conservation: " + excitonsPerPhoton + " excitons per photon need ħω ≥ " + excitonsPerPhoton
+                    + "·E₁S = " + short4(excitonsPerPhoton * firstExcitonJ / ev) + " eV, the pump has "
+                    + short4(photonEnergyJ / ev) + " eV (ħω = " + short4(ratio) + "·E₁S): carrier multiplication is "
+                    + "impossible at this pump (allowed: ħω ≥ " + excitonsPerPhoton + "·E₁S, or no multiplication)");
+        }
+        return Math.max(0, photonEnergyJ - excitonsPerPhoton * firstExcitonJ);
+    }
+
+    /** Four significant digits without trailing zeros, for messages. */
+    private static String short4(double x) {
+        return new java.math.BigDecimal(x).round(new java.math.MathContext(4)).stripTrailingZeros().toPlainString();
+    }
+
+    /**
      * Temperature jump of one dot's lattice right after the energy has turned into heat, before any reaches the
      * surroundings: ΔT = Q / (ρ·c·V).
      *

@@ -57,6 +57,8 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
     public static final double DEFAULT_NEUTRALISATION_S = 10;
     /** Default time for a magnetic stirrer to renew the excited volume (common practice, no source). */
     public static final double DEFAULT_STIRRED_REFRESH_S = 0.1;
+    /** Where the trion relation 1/τ₂ = 2/τ_X− + 2/τ_X+ comes from. */
+    static final String TRION_RELATION = "Park, Bae, Pietryga, Klimov, ACS Nano 8, 7288 (2014), from memory";
     /** Default intraband cooling time: sub-picosecond (Klimov & McBranch, Phys. Rev. Lett. 80, 4028 (1998)). */
     public static final double DEFAULT_COOLING_S = 0.5e-12;
 
@@ -158,17 +160,18 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
         RadiativeScaling rad = o.radiativeScaling() != null ? o.radiativeScaling() : RadiativeScaling.STATISTICAL;
         bases.add("radiative scaling " + rad.key() + (o.radiativeScaling() != null ? ": plan"
                 : ": default, N² (Rajadell, Climente, Planelles, Bertoni, J. Phys. Chem. C 113, 11268 (2009))"));
-        // with equal trion rates 1/τ₂ = 2/τ_X− + 2/τ_X+ gives τ_X = 4τ₂ (Park et al., Phys. Rev. Lett. 2014, from memory)
+        // with equal trion rates 1/τ₂ = 2/τ_X− + 2/τ_X+ gives τ_X = 4τ₂ (TRION_RELATION)
         boolean trionKnown = m.trionLifetimeS().known();
         double trionNeg = pick(o.tauTrionNegativeS(), trionKnown ? m.trionLifetimeS().value() : 4 * tau2,
                 "negative-trion lifetime", "plan", trionKnown ? "material library: " + m.trionLifetimeS().source()
-                        : "4·τ₂, equal trion rates in 1/τ₂ = 2/τ_X− + 2/τ_X+ (Park et al., Phys. Rev. Lett. 2014, from memory)",
+                        : "4·τ₂, equal trion rates in 1/τ₂ = 2/τ_X− + 2/τ_X+ (" + TRION_RELATION + ")",
                 bases);
-        // 1/τ_XX = 2/τ_X− + 2/τ_X+ (Park, Bae, Padilha, Pietryga, Klimov, Phys. Rev. Lett. 2014, from memory)
+        // 1/τ_XX = 2/τ_X− + 2/τ_X+: title, authors and year of TRION_RELATION seen in a stored copy of the paper (it was
+        // credited to Phys. Rev. Lett. here before); volume and page from memory
         double posRate = (1 / tau2 - 2 / trionNeg) / 2;
         double trionPosDerived = posRate > 0 ? 1 / posRate : trionNeg;
         double trionPos = pick(o.tauTrionPositiveS(), trionPosDerived, "positive-trion lifetime", "plan",
-                posRate > 0 ? "from 1/τ₂ = 2/τ_X− + 2/τ_X+ (Park et al., Phys. Rev. Lett. 2014, from memory)"
+                posRate > 0 ? "from 1/τ₂ = 2/τ_X− + 2/τ_X+ (" + TRION_RELATION + ")"
                         : "taken equal to the negative trion (the trion relation gave no positive rate)", bases);
         double pIon = pick(o.ionisationProbability(), DEFAULT_IONISATION, "Auger ionisation probability", "plan",
                 "default order of magnitude (from memory)", bases);
@@ -180,13 +183,13 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
         double refreshS = switch (refresh.mode()) {
             case STATIC -> Double.POSITIVE_INFINITY;
             case STIRRED -> DEFAULT_STIRRED_REFRESH_S;
-            case FLOWING -> refresh.exchangeTimeS();
+            case FLOWING -> refresh.flowRenewalS(pumpDiameterM, sample.spec().pathLengthM());
             case TRANSLATED -> refresh.translationRefreshS(pumpDiameterM);
         };
         bases.add("refresh: " + switch (refresh.mode()) {
             case STATIC -> "static sample, no exchange";
             case STIRRED -> "stirred, excited volume renewed in ~0.1 s (common practice, no source)";
-            case FLOWING -> "flowing, cell volume / flow rate";
+            case FLOWING -> flowingBasis(refresh, pumpDiameterM, sample.spec().pathLengthM());
             case TRANSLATED -> String.format(java.util.Locale.ROOT, "translated, pump 1/e² diameter / speed = %.3g mm / "
                     + "%.3g mm/s", pumpDiameterM * 1e3, refresh.speedMPerS() * 1e3);
         });
@@ -201,6 +204,17 @@ public record ModelAssumptions(double tauSingleExcitonS, double plQuantumYield, 
         return new ModelAssumptions(tau1, qy, tau2, auger, rad, trionNeg, trionPos, pIon, neut, refreshS, cooling, bases,
                 o.processes(), shell.map(CoreShell::biexcitonShiftJ).orElse(Double.NaN),
                 shell.map(CoreShell::lineWidthJ).orElse(Double.NaN));
+    }
+
+    /** How a flowing cell's refresh time was found, with the default cross-section named when it was used. */
+    private static String flowingBasis(Refresh refresh, double pumpDiameterM, double pathLengthM) {
+        double area = refresh.flowCrossSectionM2(pathLengthM);
+        return String.format(java.util.Locale.ROOT, "flowing, pump 1/e² diameter / flow speed = %.3g mm / %.3g mm/s (flow "
+                + "%.3g mL/min through a cross-section of %.3g mm²%s)", pumpDiameterM * 1e3,
+                refresh.flowSpeedMPerS(pathLengthM) * 1e3, refresh.flowRateM3PerS() * 6e7, area * 1e6,
+                Double.isNaN(refresh.crossSectionM2()) ? String.format(java.util.Locale.ROOT, ": path length %.3g mm × "
+                        + "%.3g mm, a flow cuvette's channel width when 'cellCrossSection' is not given (common practice, "
+                        + "no source)", pathLengthM * 1e3, Refresh.DEFAULT_FLOW_CELL_WIDTH_M * 1e3) : ", as given");
     }
 
     /** The ladder model: neutral and negative dots, no hot-exciton resolution (instantaneous cooling). */

@@ -17,7 +17,6 @@ import org.ladderkin.kinetics.train.PeriodicSteadyState;
 import org.ladderkin.kinetics.train.PulseExcitation;
 import org.ladderkin.kinetics.train.SteadyState;
 import org.ladderkin.observe.EarlyLate;
-import org.ladderkin.observe.Heating;
 import org.ladderkin.observe.PulseTrainRisks;
 import org.ladderkin.observe.Risk;
 import org.ladderkin.observe.TimeWindows;
@@ -201,8 +200,7 @@ public final class Planner {
                 Quantity.formatBest(top.pulse().energyJ(), Dimension.ENERGY, 4),
                 Quantity.formatBest(chosenRate.repetitionRateHz(), Dimension.FREQUENCY, 3));
         List<Risk> risks = new ArrayList<>();
-        risks.add(evaluatedAt(Heating.risk("steady-state heating", heat.steadyRiseK(), SAMPLE_TEMPERATURE_K,
-                in.limits().maxTemperatureRiseK(), heat.boilingPointK()), at));
+        risks.add(evaluatedAt(heat.risk(SAMPLE_TEMPERATURE_K, in.limits().maxTemperatureRiseK()), at));
         Risk charging = evaluatedAt(PulseTrainRisks.chargingRisk(chosenRate.charged(), in.limits().maxChargedFraction()), at);
         if (sample.spec().matrix().map(m -> m.kind() == org.ladderkin.sample.Matrix.Kind.FILM).orElse(false)) {
             charging = FilmTranslation.advise(charging, km, top(nSeries), period, in.limits().maxChargedFraction(),

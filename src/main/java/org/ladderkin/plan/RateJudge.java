@@ -45,18 +45,26 @@ final class RateJudge {
             Verdict v = Verdict.against(residual, lim.maxResidualExcitation(), 1)
                     .worst(Verdict.against(ss.chargedFraction(), lim.maxChargedFraction(), 1))
                     .worst(Double.isNaN(heat.steadyRiseK()) ? Verdict.WARN
-                            : Verdict.against(heat.steadyRiseK(), lim.maxTemperatureRiseK(), 1));
+                            : Verdict.against(heat.peakRiseK(), lim.maxTemperatureRiseK(), 1));
             out[i] = new RateOption(d, rate, n, energy, residual, ss.chargedFraction(), heat, v);
         });
         return List.of(out);
     }
 
     static HeatBudget heatAt(KineticModel km, Excitation ex, double n, double period) {
+        // the hottest dots sit on the pump axis at the front face: their own ⟨N⟩, and their own (lower) PL share
+        double nHot = ex.nAvgPeak();
+        return HeatBudget.of(ex, emittedPerAbsorbed(km, n, period), n, emittedPerAbsorbed(km, nHot, period));
+    }
+
+    private static double emittedPerAbsorbed(KineticModel km, double n, double period) {
+        if (!(n > 0)) {
+            return 0;
+        }
         PulseExcitation pulse = new PulseExcitation.Poisson(n);
         LadderKinetics kin = LadderKinetics.forPulses(km, pulse);
         SteadyState ss = kin.steadyState(pulse, period, false);
-        double emitted = Photoluminescence.emittedPerPulse(kin, ss.afterPulse(), period);
-        return HeatBudget.of(ex, n > 0 ? emitted / n : 0, n);
+        return Photoluminescence.emittedPerPulse(kin, ss.afterPulse(), period) / n;
     }
 
     static String hz(RateOption r) {

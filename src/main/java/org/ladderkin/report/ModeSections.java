@@ -127,7 +127,9 @@ public final class ModeSections {
                     used.add(b);
                 }
             }
-            if (b.startsWith("refresh: stirred") || b.startsWith("shell")) {
+            // a flowing cell's refresh rests on a default only when its cross-section was not given
+            if (b.startsWith("refresh: stirred") || b.startsWith("shell")
+                    || b.startsWith("refresh: flowing") && b.contains("no source")) {
                 used.add(b);
             }
         }

@@ -147,7 +147,7 @@ public final class PlanReport {
                 + "design is scored at, then again at the designed series' top; the rate used is the fastest that passes "
                 + "there, never faster than the rate the design was scored at, and only if that is slower is the design "
                 + "searched once more at it.");
-        page.table(List.of("division", "rate", "residual at next pulse", "charged", "steady rise (K)", "verdict"),
+        page.table(List.of("division", "rate", "excited or charged at next pulse", "charged at next pulse", "steady rise (K)", "verdict"),
                 plan.rates().stream().map(r -> List.of("÷" + r.division(), q(r.repetitionRateHz(), Dimension.FREQUENCY),
                         num(r.residual()), num(r.charged()), num(r.steadyRiseK()), r.verdict().name())).toList());
         page.heading(2, "Heating at " + top + ", " + q(plan.chosenRate().repetitionRateHz(), Dimension.FREQUENCY));
@@ -156,8 +156,12 @@ public final class PlanReport {
                 List.of("share of absorbed energy left as heat", num(h.heatFraction())),
                 List.of("heating power in the excited volume (W)", num(h.heatPowerW())),
                 List.of("steady-state rise on the beam axis (K)", num(h.steadyRiseK())),
-                List.of("rise of the excited volume per pulse (K)", num(h.perPulseRiseK())),
-                List.of("lattice temperature jump of one dot (K)", num(h.dotJumpK())),
+                List.of("rise of the excited volume per pulse, probe- and depth-averaged (K)", num(h.perPulseRiseK())),
+                List.of("lattice temperature jump of one dot, probe- and depth-averaged (K)", num(h.dotJumpK())),
+                List.of("⟨N⟩ of the hottest dots (pump axis, front face)", num(h.hottest().nAvg())),
+                List.of("rise per pulse at the hottest dots (K)", num(h.hottest().perPulseRiseK())),
+                List.of("lattice temperature jump of a hottest dot (K)", num(h.hottest().dotJumpK())),
+                List.of("highest rise: steady + hottest pulse (K), judged in the risks", num(h.peakRiseK())),
                 List.of("conduction model", h.model())));
         page.heading(2, "Model and assumptions");
         var m = plan.model();
@@ -194,8 +198,8 @@ public final class PlanReport {
         List<String> lines = new ArrayList<>();
         lines.add(String.format(Locale.ROOT, "Pump at %s (%.3f eV): %s.", q(w.wavelengthM(), Dimension.LENGTH),
                 w.photonEnergyJ() / PhysicalConstants.ELECTRONVOLT_J, String.join("; ", w.reasons())));
-        lines.add(String.format(Locale.ROOT, "Repetition rate %s (pulse picker ÷%d): the fastest offered that keeps residual "
-                        + "excitation (%.3g), charging (%.3g) and heating (%.3g K) within the limits at %s%s.",
+        lines.add(String.format(Locale.ROOT, "Repetition rate %s (pulse picker ÷%d): the fastest offered that keeps the dots "
+                        + "excited or charged at the next pulse (%.3g), charging (%.3g) and heating (%.3g K) within the limits at %s%s.",
                 q(r.repetitionRateHz(), Dimension.FREQUENCY), r.division(), r.residual(), r.charged(), r.steadyRiseK(),
                 highest(plan), r.verdict() == Verdict.FAIL ? " — NONE does; this is the slowest available" : ""));
         for (DelayPlan d : plan.delayPlans()) {
@@ -317,7 +321,7 @@ public final class PlanReport {
             rows.add(whatIfRow(w.label(), w.plan()));
         }
         page.paragraph("Each variant's residual, charging and heating are at its own series' highest ⟨N⟩.");
-        page.table(List.of("variant", "rate", "at ⟨N⟩", "residual", "charged", "steady rise (K)", "τ₂ rel. error", "worst risk"),
+        page.table(List.of("variant", "rate", "at ⟨N⟩", "excited or charged at next pulse", "charged", "steady rise (K)", "τ₂ rel. error", "worst risk"),
                 rows);
     }
 

@@ -66,12 +66,12 @@ class PrintedNumbersAgreeTest {
         JsonNode train = json.get("pulseTrainAtHighestFluence");
         assertThat(train.get("nAvgProbeWeighted").asDouble()).isEqualTo(topN);
         assertThat(train.get("buildUpPulses").asInt()).isGreaterThanOrEqualTo(train.get("pulsesToSteadyState").asInt());
-        assertThat(risk(json, "steady-state heating").get("value").asDouble()).isEqualTo(heat.get("steadyRiseK").asDouble());
-        assertThat(risk(json, "photocharging").get("value").asDouble()).isEqualTo(chosenRate.get("chargedFraction").asDouble());
+        assertThat(risk(json, org.ladderkin.plan.HeatBudget.RISK_NAME).get("value").asDouble()).isEqualTo(heat.get("peakRiseK").asDouble());
+        assertThat(risk(json, "photocharging").get("value").asDouble()).isEqualTo(chosenRate.get("chargedFractionAtNextPulse").asDouble());
         assertThat(risk(json, "residual excitation at the next pulse").get("value").asDouble())
-                .isEqualTo(chosenRate.get("residualExcitation").asDouble());
+                .isEqualTo(chosenRate.get("excitedOrChargedFractionAtNextPulse").asDouble());
         // the build-up runs past the stated pulses to steady state, so it ends at the steady state's charged fraction
-        double steadyCharged = chosenRate.get("chargedFraction").asDouble();
+        double steadyCharged = chosenRate.get("chargedFractionAtNextPulse").asDouble();
         assertThat(train.get("chargedBeforeLastPulse").asDouble()).isCloseTo(steadyCharged,
                 org.assertj.core.data.Offset.offset(0.02 * steadyCharged + 1e-9));
 
@@ -89,12 +89,12 @@ class PrintedNumbersAgreeTest {
         String atTop = "the series' highest ⟨N⟩ = " + NUM + " \\(" + NUM + " ([a-zµ]?J)\\)";
 
         Matcher m = find(h.text, "Repetition rate " + NUM + " ([kMG]?Hz) \\(pulse picker ÷([0-9]+)\\): the fastest offered that "
-                + "keeps residual excitation \\(" + NUM + "\\), charging \\(" + NUM + "\\) and heating \\(" + NUM
+                + "keeps the dots excited or charged at the next pulse \\(" + NUM + "\\), charging \\(" + NUM + "\\) and heating \\(" + NUM
                 + " K\\) within the limits at " + atTop);
         quantity(m.group(1) + " " + m.group(2), Dimension.FREQUENCY, json.at("/settings/repetitionRateHz").asDouble(), "rate");
         assertThat(Integer.parseInt(m.group(3))).isEqualTo(json.at("/settings/pulsePickerDivision").asInt());
-        printed(m.group(4), rate.get("residualExcitation").asDouble(), "settings residual");
-        printed(m.group(5), rate.get("chargedFraction").asDouble(), "settings charging");
+        printed(m.group(4), rate.get("excitedOrChargedFractionAtNextPulse").asDouble(), "settings residual");
+        printed(m.group(5), rate.get("chargedFractionAtNextPulse").asDouble(), "settings charging");
         printed(m.group(6), rate.get("steadyRiseK").asDouble(), "settings heating");
         printed(m.group(6), json.at("/heatingAtHighestFluence/steadyRiseK").asDouble(), "settings heating vs heating table");
         printed(m.group(7), topN, "settings ⟨N⟩");
@@ -218,8 +218,8 @@ class PrintedNumbersAgreeTest {
             JsonNode r = rates.get(i);
             assertThat(rows.get(i).get(0)).isEqualTo("÷" + r.get("division").asInt());
             quantity(rows.get(i).get(1), Dimension.FREQUENCY, r.get("repetitionRateHz").asDouble(), "rate");
-            printed(rows.get(i).get(2), r.get("residualExcitation").asDouble(), "rate residual");
-            printed(rows.get(i).get(3), r.get("chargedFraction").asDouble(), "rate charged");
+            printed(rows.get(i).get(2), r.get("excitedOrChargedFractionAtNextPulse").asDouble(), "rate residual");
+            printed(rows.get(i).get(3), r.get("chargedFractionAtNextPulse").asDouble(), "rate charged");
             printedOrNull(rows.get(i).get(4), r.get("steadyRiseK"), "rate rise");
             assertThat(rows.get(i).get(5)).isEqualTo(r.get("verdict").asText());
         }
@@ -238,7 +238,11 @@ class PrintedNumbersAgreeTest {
         printedOrNull(rows.get(2).get(1), heat.get("steadyRiseK"), "steady rise");
         printedOrNull(rows.get(3).get(1), heat.get("perPulseRiseK"), "per-pulse rise");
         printed(rows.get(4).get(1), heat.get("dotJumpK").asDouble(), "dot jump");
-        assertThat(rows.get(5).get(1)).isEqualTo(heat.get("model").asText());
+        printed(rows.get(5).get(1), heat.at("/hottest/nAvg").asDouble(), "hottest ⟨N⟩");
+        printedOrNull(rows.get(6).get(1), heat.at("/hottest/perPulseRiseK"), "hottest per-pulse rise");
+        printed(rows.get(7).get(1), heat.at("/hottest/dotJumpK").asDouble(), "hottest dot jump");
+        printedOrNull(rows.get(8).get(1), heat.get("peakRiseK"), "highest rise");
+        assertThat(rows.get(9).get(1)).isEqualTo(heat.get("model").asText());
 
         rows = h.table("Model and assumptions");
         JsonNode model = json.get("model");
@@ -297,12 +301,12 @@ class PrintedNumbersAgreeTest {
         Matcher m = find(text, "\n  rate +" + NUM + " ([kMG]?Hz) +\\(picker ÷([0-9]+)\\)");
         quantity(m.group(1) + " " + m.group(2), Dimension.FREQUENCY, json.at("/settings/repetitionRateHz").asDouble(), "text rate");
         assertThat(Integer.parseInt(m.group(3))).isEqualTo(json.at("/settings/pulsePickerDivision").asInt());
-        m = find(text, "\n  at the top +⟨N⟩ = " + NUM + " \\(" + NUM + " ([a-zµ]?J)\\): residual " + NUM + ", charged " + NUM
+        m = find(text, "\n  at the top +⟨N⟩ = " + NUM + " \\(" + NUM + " ([a-zµ]?J)\\): excited or charged " + NUM + ", charged " + NUM
                 + ", steady rise " + NUM + " K");
         printed(m.group(1), topN, "text ⟨N⟩");
         quantity(m.group(2) + " " + m.group(3), Dimension.ENERGY, topEnergyJ, "text energy");
-        printed(m.group(4), rate.get("residualExcitation").asDouble(), "text residual");
-        printed(m.group(5), rate.get("chargedFraction").asDouble(), "text charged");
+        printed(m.group(4), rate.get("excitedOrChargedFractionAtNextPulse").asDouble(), "text residual");
+        printed(m.group(5), rate.get("chargedFractionAtNextPulse").asDouble(), "text charged");
         printed(m.group(6), json.at("/heatingAtHighestFluence/steadyRiseK").asDouble(), "text rise");
         assertThat(text).contains(json.at("/settings/rateChoice").asText());
 
@@ -433,11 +437,11 @@ class PrintedNumbersAgreeTest {
                 }
                 case "residual excitation at the next pulse" -> {
                     topOf(label, topN);
-                    printed(value, rate.get("residualExcitation").asDouble(), "window residual");
+                    printed(value, rate.get("excitedOrChargedFractionAtNextPulse").asDouble(), "window residual");
                 }
                 case "steady-state charged fraction" -> {
                     topOf(label, topN);
-                    printed(value, rate.get("chargedFraction").asDouble(), "window charged");
+                    printed(value, rate.get("chargedFractionAtNextPulse").asDouble(), "window charged");
                     seen[6] = true;
                 }
                 case "pulses to steady state" -> {

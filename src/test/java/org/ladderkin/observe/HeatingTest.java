@@ -103,4 +103,21 @@ class HeatingTest {
         assertThatThrownBy(() -> Heating.dotTemperatureJumpK(1e-19, 0, 5810, 258)).hasMessageContaining("dot diameter");
         assertThatThrownBy(() -> Heating.steadyRiseLiquidK(0.01, 1e-4, 1e-3, 1e-5, TOLUENE)).hasMessageContaining("wall distance");
     }
+    @Test
+    void heatPerPhotonIsTheExcessOverTheExcitonsItMadeAndNeverNegative() {
+        double ev = PhysicalConstants.ELECTRONVOLT_J;
+        assertThat(Heating.heatPerAbsorbedPhotonJ(3.1 * ev, 1, 2.0 * ev) / ev).as("one exciton from 3.1 eV (eV)")
+                .isCloseTo(1.1, org.assertj.core.data.Offset.offset(1e-12));
+        assertThat(Heating.heatPerAbsorbedPhotonJ(5.0 * ev, 2, 2.0 * ev) / ev).as("two excitons from 5.0 eV (eV)")
+                .isCloseTo(1.0, org.assertj.core.data.Offset.offset(1e-12));
+        assertThat(Heating.heatPerAbsorbedPhotonJ(0.6 * 6 * ev, 3, 1.2 * ev)).as("three excitons at exactly 3·E₁S")
+                .isBetween(0.0, 1e-30);
+        assertThatThrownBy(() -> Heating.heatPerAbsorbedPhotonJ(3.6 * ev, 2, 2.0 * ev))
+                .as("two excitons from 1.8·E₁S").hasMessageContaining("2 excitons per photon need ħω ≥ 2·E₁S")
+                .hasMessageContaining("ħω = 1.8·E₁S");
+        assertThatThrownBy(() -> Heating.heatPerAbsorbedPhotonJ(5.0 * ev, 3, 2.0 * ev))
+                .as("three excitons need 3·E₁S").hasMessageContaining("3 excitons per photon need ħω ≥ 3·E₁S");
+        assertThatThrownBy(() -> Heating.heatPerAbsorbedPhotonJ(1.9 * ev, 1, 2.0 * ev))
+                .as("a sub-gap photon").hasMessageContaining("below the first exciton");
+    }
 }

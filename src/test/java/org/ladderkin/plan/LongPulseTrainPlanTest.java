@@ -34,6 +34,6 @@ class LongPulseTrainPlanTest {
         double steady = p.chosenRate().charged();
         assertThat(charged[charged.length - 1]).isBetween(0.95 * steady, steady + 1e-9);
         assertThat(p.risks().stream().filter(r -> r.verdict() == Verdict.FAIL).map(Risk::name))
-                .contains("steady-state heating", "photocharging", "residual excitation at the next pulse");
+                .contains(HeatBudget.RISK_NAME, "photocharging", "residual excitation at the next pulse");
     }
 }
