@@ -82,11 +82,16 @@ public record HeatBudget(double heatFraction, double heatPowerW, double steadyRi
         double diameter = s.material().shape() == org.ladderkin.material.Shape.CUBE ? Math.cbrt(6 / Math.PI) * s.sizeM() : s.sizeM();
         double density = s.material().densityKgPerM3().value();
         double specificHeat = s.material().specificHeatJPerKgK().value();
-        double dotJump = Heating.dotTemperatureJumpK(heatPerDot, diameter, density, specificHeat);
+        // a shell takes up the heat with its core: the whole dot's heat capacity when the sample has one
+        double shellCapacity = org.ladderkin.sample.CoreShell.of(s).map(org.ladderkin.sample.CoreShell::heatCapacityJPerK)
+                .filter(c -> Double.isFinite(c) && c > 0).orElse(Double.NaN);
+        double dotJump = Double.isNaN(shellCapacity) ? Heating.dotTemperatureJumpK(heatPerDot, diameter, density, specificHeat)
+                : heatPerDot / shellCapacity;
         double nHot = ex.nAvgPeak();
         double fractionHot = heatFraction(photonJ, emissionJ, emittedPerAbsorbedHottest);
         double heatPerHotDot = nHot * photonJ * fractionHot;
-        double hotJump = Heating.dotTemperatureJumpK(heatPerHotDot, diameter, density, specificHeat);
+        double hotJump = Double.isNaN(shellCapacity) ? Heating.dotTemperatureJumpK(heatPerHotDot, diameter, density, specificHeat)
+                : heatPerHotDot / shellCapacity;
         Matrix matrix = s.spec().matrix().orElse(null);
         if (matrix == null) {
             return new HeatBudget(fraction, power, Double.NaN, Double.NaN, dotJump, Double.POSITIVE_INFINITY,
