@@ -105,7 +105,7 @@ final class ErrorReporter implements CommandLine.IExecutionExceptionHandler {
         for (ArgSpec a : given(parseResult)) {
             for (String v : a.originalStringValues()) {
                 // the whole value, the key of a KEY=VALUE, or one item of a list
-                List<String> parts = new ArrayList<>(List.of(v, v.split("=", 2)[0]));
+                List<String> parts = new ArrayList<>(List.of(v, v.trim(), v.split("=", 2)[0]));
                 parts.addAll(List.of(v.split(",")));
                 for (String part : parts) {
                     if (!part.isEmpty() && message.contains("'" + part + "'")) {

@@ -122,6 +122,28 @@ class FuzzRegressionTest {
     }
 
     @Test
+    void aSidecarPumpOf1e308NanometresIsLocated() throws IOException {
+        Path sidecar = copy("fh-cdse-ta-series.traces.json",
+                demo("fh-cdse-ta-series.traces.json").replace("\"515 nm\"", "\"1.7976931348623157E308 nm\""));
+        Path traces = PLANS.resolve("fh-cdse-ta-series.csv");
+        assertThatThrownBy(() -> org.ladderkin.io.TraceSidecarCodec.apply(sidecar,
+                org.ladderkin.io.TraceTableReader.read(traces, traces.toString(), org.ladderkin.io.TableOptions.defaults())))
+                .isInstanceOfSatisfying(InputException.class, e -> {
+                    assertThat(e.key()).isEqualTo(InputProblem.OUT_OF_RANGE);
+                    assertThat(e.field()).isEqualTo("pump");
+                    assertThat(e.getMessage()).startsWith(sidecar + ":3:").contains("between 10 nm and 100 µm");
+                });
+    }
+
+    /** A knife-edge scan cut short left the edge fit with a singular covariance, which escaped as an internal error. */
+    @Test
+    void aTruncatedKnifeEdgeScanIsAnInputErrorNotAnInternalOne() throws IOException {
+        byte[] whole = Files.readAllBytes(PLANS.resolve("fh-pump-knife-edge.csv"));
+        Path cut = Files.write(dir.resolve("fh-pump-knife-edge.csv"), java.util.Arrays.copyOf(whole, 532));
+        oneBadInputLine(FuzzCase.run(List.of("beam", cut.toString(), "--quiet")), "ladderkin: " + cut + ":");
+    }
+
+    @Test
     void aBadFlagValueNamesItsOption() {
         String err = oneBadInputLine(FuzzCase.run(List.of("simulate", "--tau-rad", "20ns", "--tau-auger2", "\u001b[31m", "--n-avg", "1",
                 "--quiet")), "ladderkin: option '--tau-auger2': ");
