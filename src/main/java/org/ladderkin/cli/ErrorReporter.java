@@ -38,7 +38,9 @@ final class ErrorReporter implements CommandLine.IExecutionExceptionHandler {
         }
         if (ex instanceof QuantityFormatException q) {
             String option = optionHolding(parseResult, q.text(), true);
-            err.println("ladderkin: " + (option == null ? "" : option + ": ") + oneLine(q.getMessage()));
+            String message = String.valueOf(q.getMessage());
+            boolean named = option != null && message.contains(option.substring("option '".length(), option.length() - 1));
+            err.println("ladderkin: " + (option == null || named ? "" : option + ": ") + oneLine(message));
             return ExitCodes.BAD_INPUT;
         }
         if (ex instanceof SampleException s && s.part() == SampleException.Part.CROSS_SECTION && optionGiven(parseResult, "--pump")) {
@@ -109,7 +111,7 @@ final class ErrorReporter implements CommandLine.IExecutionExceptionHandler {
                 parts.addAll(List.of(v.split(",")));
                 for (String part : parts) {
                     if (!part.isEmpty() && message.contains("'" + part + "'")) {
-                        return name(a);
+                        return nameUnlessNamed(a, message);
                     }
                 }
             }
@@ -119,6 +121,14 @@ final class ErrorReporter implements CommandLine.IExecutionExceptionHandler {
 
     private static boolean optionGiven(CommandLine.ParseResult parseResult, String name) {
         return parseResult != null && given(parseResult).stream().anyMatch(a -> a instanceof OptionSpec o && List.of(o.names()).contains(name));
+    }
+
+    /** "option '--x'" for {@code a}, or null when the message already names it (as "--x: …" or "unknown --x …"). */
+    private static String nameUnlessNamed(ArgSpec a, String message) {
+        if (a instanceof OptionSpec o && List.of(o.names()).stream().anyMatch(message::contains)) {
+            return null;
+        }
+        return name(a);
     }
 
     private static String name(ArgSpec a) {
