@@ -29,9 +29,23 @@ final class UsageErrorReporter implements CommandLine.IParameterExceptionHandler
             problem = (option ? "unknown option '" : command ? "unknown command '" : "unexpected argument '") + word + "'"
                     + (close.isEmpty() ? "" : "; did you mean " + String.join(" or ", close.stream().map(c -> "'" + c + "'").toList()) + "?");
         }
-        cmd.getErr().println(name + ": " + problem + " (see '" + name + " --help')");
+        cmd.getErr().println(name + ": " + ErrorReporter.oneLine(withoutJavaNames(problem)) + " (see '" + name + " --help')");
         cmd.getErr().flush();
         return ExitCodes.USAGE;
+    }
+
+    /**
+     * picocli ends a value it could not convert with the Java exception behind it ("(java.nio.file.InvalidPathException:
+     * Nul character not allowed…)"); the user needs the reason, not the class.
+     */
+    static String withoutJavaNames(String problem) {
+        String p = problem.replace(" to interface java.nio.file.Path ", " to a path ");
+        int open = p.indexOf("(java.");
+        if (open < 0) {
+            return p;
+        }
+        int colon = p.indexOf(": ", open);
+        return colon < 0 ? p : p.substring(0, open + 1) + p.substring(colon + 2);
     }
 
     /** The candidates within a typo or two of {@code word} (more allowed for longer words), closest first. */

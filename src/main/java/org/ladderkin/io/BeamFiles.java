@@ -142,6 +142,10 @@ public final class BeamFiles {
                 out.add(new KnifeEdge(displayName, s.label(), s.axis(), Double.isNaN(zM) ? s.zM() : zM, KnifeEdgeFit.of(s.scan())));
             } catch (BeamException e) {
                 throw located(s.header(), s.label(), e);
+            } catch (org.hipparchus.exception.MathRuntimeException e) {
+                // the fit's covariance is singular on a scan with too few distinct points across the edge
+                throw new InputException(s.header(), s.label(), InputProblem.INVALID_VALUE, "the scan cannot be fitted ("
+                        + e.getMessage() + "): scan across the whole beam with several points on the edge", e);
             }
         }
         return out;

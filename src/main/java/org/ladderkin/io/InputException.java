@@ -63,6 +63,23 @@ public final class InputException extends RuntimeException {
             b.append("field '").append(shown).append("': ");
         }
         // the user's text may hold anything: control characters are written as escapes so the message stays one line
-        return Excerpt.escaped(b.append(detail).toString());
+        return Excerpt.escaped(b.append(shortened(detail)).toString());
+    }
+
+    /** Longest problem text shown whole; beyond it the middle goes, keeping the start and the "(allowed)" end. */
+    static final int MAX_DETAIL_SHOWN = 600;
+
+    /**
+     * A reader that quotes the user's value without {@link Excerpt} (a header cell, a line) would otherwise put
+     * megabytes into one message.
+     */
+    private static String shortened(String detail) {
+        if (detail.length() <= MAX_DETAIL_SHOWN) {
+            return detail;
+        }
+        int head = MAX_DETAIL_SHOWN * 2 / 3;
+        int tail = MAX_DETAIL_SHOWN - head;
+        return detail.substring(0, head) + "… (" + (detail.length() - head - tail) + " characters left out) …"
+                + detail.substring(detail.length() - tail);
     }
 }

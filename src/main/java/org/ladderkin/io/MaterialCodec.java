@@ -71,7 +71,7 @@ public final class MaterialCodec {
     /** {"value": "5.81 g/cm³", "source": "..."}; a null or absent value is unknown. */
     static Sourced sourced(Node n, Dimension dimension, boolean positive) {
         String source = n.field("source").string();
-        Optional<Node> v = n.optional("value");
+        Optional<Node> v = value(n);
         n.finish();
         if (v.isEmpty()) {
             return Sourced.unknown(source);
@@ -83,7 +83,7 @@ public final class MaterialCodec {
     /** {"value": 191.38, "source": "..."} with the value a bare number in the unit the field name documents. */
     static Sourced sourcedNumber(Node n, double toSi) {
         String source = n.field("source").string();
-        Optional<Node> v = n.optional("value");
+        Optional<Node> v = value(n);
         n.finish();
         if (v.isEmpty()) {
             return Sourced.unknown(source);
@@ -93,6 +93,17 @@ public final class MaterialCodec {
             throw v.get().error(InputProblem.OUT_OF_RANGE, "must be > 0, was " + x);
         }
         return source(n, x * toSi, source);
+    }
+
+    /**
+     * The "value" of a sourced entry: null means unknown, but the field itself must be there, so a value deleted by
+     * accident is reported here instead of surfacing later as a material that lacks it.
+     */
+    private static Optional<Node> value(Node n) {
+        if (n.kind() == Node.Kind.OBJECT && !n.json().has("value")) {
+            n.field("value");
+        }
+        return n.optional("value");
     }
 
     private static Sourced source(Node n, double si, String source) {

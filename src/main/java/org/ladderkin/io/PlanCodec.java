@@ -89,6 +89,7 @@ public final class PlanCodec {
         goalsNode.finish();
         Limits limits = limits(root.field("limits"));
         ModelAssumptions.Overrides overrides = root.optional("model").map(PlanCodec::model).orElse(ModelAssumptions.Overrides.NONE);
+        PlanSampleChecks.check(root, sample, laser.pumpWavelengthsM(), overrides);
         root.finish();
         return new PlanInputs(title, lab, sample, laser, instruments, goals, cmEnergies, limits, overrides);
     }
@@ -182,7 +183,7 @@ public final class PlanCodec {
         if (file.string().isBlank()) {
             throw file.error(InputProblem.MISSING_VALUE, "expected the path of a knife-edge table or a camera frame");
         }
-        Path p = SampleCodec.baseDir(Path.of(file.location().file())).resolve(file.string());
+        Path p = file.path(SampleCodec.baseDir(Path.of(file.location().file())));
         if (!java.nio.file.Files.isRegularFile(p)) {
             throw file.error(InputProblem.NOT_FOUND, "beam file not found: " + p + " (relative paths start at the plan file's folder)");
         }
@@ -266,7 +267,7 @@ public final class PlanCodec {
         if (file.string().isBlank()) {
             throw file.error(InputProblem.MISSING_VALUE, "expected the path of an IRF table such as \"fh-ta-irf.csv\"");
         }
-        Path p = SampleCodec.baseDir(Path.of(file.location().file())).resolve(file.string());
+        Path p = file.path(SampleCodec.baseDir(Path.of(file.location().file())));
         if (!java.nio.file.Files.isRegularFile(p)) {
             throw file.error(InputProblem.NOT_FOUND, "IRF file not found: " + p + " (relative paths start at the plan file's folder)");
         }

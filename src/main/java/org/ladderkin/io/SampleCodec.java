@@ -110,7 +110,7 @@ public final class SampleCodec {
         }
         Refresh refresh = refresh(n.field("refresh"));
         Optional<AbsorptionSpectrum> spectrum = n.optional("absorptionSpectrum").map(s -> {
-            Path p = baseDir.resolve(s.string());
+            Path p = s.path(baseDir);
             if (!java.nio.file.Files.isRegularFile(p)) {
                 throw s.error(InputProblem.NOT_FOUND, "spectrum file not found: " + p + " (relative paths start at the sample file's folder)");
             }

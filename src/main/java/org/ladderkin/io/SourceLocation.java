@@ -26,9 +26,11 @@ public record SourceLocation(String file, int line, int column) {
     /** {@code FILE:LINE:COLUMN}, {@code FILE:LINE} or {@code FILE}, depending on what is known. */
     @Override
     public String toString() {
+        // an empty path given on the command line still needs something to point at
+        String shown = file.isEmpty() ? "''" : file;
         if (line == 0) {
-            return file;
+            return shown;
         }
-        return column == 0 ? file + ":" + line : file + ":" + line + ":" + column;
+        return column == 0 ? shown + ":" + line : shown + ":" + line + ":" + column;
     }
 }

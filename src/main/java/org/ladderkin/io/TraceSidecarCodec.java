@@ -141,11 +141,13 @@ public final class TraceSidecarCodec {
         if (!(q.si() > 0)) {
             throw n.error(InputProblem.OUT_OF_RANGE, "must be > 0, was " + q.format());
         }
-        if (q.dimension() == Dimension.LENGTH) {
-            return OptionalDouble.of(Photon.energyJ(q.si()));
-        }
-        if (q.dimension() == Dimension.ENERGY) {
-            return OptionalDouble.of(q.si());
+        if (q.dimension() == Dimension.LENGTH || q.dimension() == Dimension.ENERGY) {
+            double j = q.dimension() == Dimension.LENGTH ? Photon.energyJ(q.si()) : q.si();
+            // a pump outside any optical range is a typo, and 1e308 nm would be a photon of 0 J
+            if (!(j >= Photon.energyJ(100e-6) && j <= Photon.energyJ(10e-9))) {
+                throw n.error(InputProblem.OUT_OF_RANGE, "a pump photon lies between 10 nm and 100 µm (0.0124 to 124 eV), was " + q.format());
+            }
+            return OptionalDouble.of(j);
         }
         throw n.error(InputProblem.WRONG_UNIT, "'" + text + "' is neither a wavelength nor a photon energy (write e.g. \"400 nm\" or \"3.1 eV\")");
     }

@@ -268,6 +268,19 @@ public final class Node {
         return text;
     }
 
+    /**
+     * This string as a path under {@code base}; a string the file system cannot name (a NUL character) is this field's
+     * error, not the file system's unlocated one.
+     */
+    public java.nio.file.Path path(java.nio.file.Path base) {
+        String s = string();
+        try {
+            return base.resolve(s);
+        } catch (java.nio.file.InvalidPathException e) {
+            throw error(InputProblem.INVALID_VALUE, "'" + Excerpt.of(s) + "' is not a usable path: " + e.getReason());
+        }
+    }
+
     public boolean bool() {
         requireKind(Kind.BOOLEAN, "true or false");
         return json.booleanValue();
