@@ -316,7 +316,7 @@ final class FitCommand implements Callable<Integer> {
             if (fluences != null) {
                 throw new IllegalArgumentException("give either --traces-json or --fluences, not both");
             }
-            return TraceSidecarCodec.apply(sidecar, data);
+            return TraceSidecarCodec.applyForFit(sidecar, data);
         }
         if (fluences == null) {
             if (data.traces().stream().allMatch(t -> t.metadata().excitation().isPresent())) {

@@ -102,7 +102,7 @@ final class RefreshedRunOptions {
             if (fluences != null) {
                 throw new IllegalArgumentException("give either --refreshed-traces-json or --refreshed-fluences, not both");
             }
-            return TraceSidecarCodec.apply(sidecar, data);
+            return TraceSidecarCodec.applyForFit(sidecar, data);
         }
         if (fluences == null) {
             if (data.traces().stream().allMatch(t -> t.metadata().excitation().isPresent())) {

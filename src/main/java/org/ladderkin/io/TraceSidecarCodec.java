@@ -45,8 +45,21 @@ public final class TraceSidecarCodec {
         return apply(JsonTree.read(sidecar, sidecar.toString()), data);
     }
 
+    /**
+     * Reads {@code sidecar} for a fit: every trace must end up with an excitation, and one without is refused at its entry
+     * (or at {@code traces} when no entry describes it). The desktop planner uses {@link #apply(Path, Dataset)}, where
+     * excitations can still be typed after loading.
+     */
+    public static Dataset applyForFit(Path sidecar, Dataset data) {
+        return apply(JsonTree.read(sidecar, sidecar.toString()), data, true);
+    }
+
     /** Applies a parsed sidecar to {@code data}. */
     public static Dataset apply(Node root, Dataset data) {
+        return apply(root, data, false);
+    }
+
+    private static Dataset apply(Node root, Dataset data, boolean everyTraceExcited) {
         root.schema(SCHEMA, VERSION);
         OptionalDouble pump = root.optional("pump").map(TraceSidecarCodec::photonEnergyJ).orElse(OptionalDouble.empty());
         Node tracesNode = root.field("traces");
@@ -83,8 +96,19 @@ public final class TraceSidecarCodec {
             }
             OptionalDouble ownPump = e.optional("pump").map(TraceSidecarCodec::photonEnergyJ).orElse(pump);
             Optional<Excitation> excitation = excitation(e, ownPump);
+            if (everyTraceExcited && excitation.isEmpty() && data.traces().get(index).metadata().excitation().isEmpty()) {
+                throw e.error(InputProblem.MISSING_FIELD, "trace '" + labels.get(index) + "' has no excitation (give one of "
+                        + "pulseEnergy, meanOccupancy, photonFluence, energyFluence)");
+            }
             e.finish();
             result.set(index, result.get(index).with(excitation, ownPump));
+        }
+        if (everyTraceExcited) {
+            for (int i = 0; i < result.size(); i++) {
+                if (result.get(i).excitation().isEmpty()) {
+                    throw tracesNode.error(InputProblem.MISSING_FIELD, "no entry gives trace '" + labels.get(i) + "' its excitation");
+                }
+            }
         }
         return data.withMetadata(result);
     }

@@ -112,7 +112,7 @@ class FuzzRegressionTest {
         assertThatThrownBy(() -> PlanCodec.read(plan)).isInstanceOfSatisfying(InputException.class, e -> {
             assertThat(e.key()).isEqualTo(InputProblem.OUT_OF_RANGE);
             assertThat(e.field()).isEqualTo("laser.pumpWavelengths[2]");
-            assertThat(e.getMessage()).startsWith(plan + ":16:").contains("red side of the first-exciton peak");
+            assertThat(e.getMessage()).startsWith(plan + ":16:").contains("below the first exciton");
         });
 
         String err = oneBadInputLine(FuzzCase.run(List.of("excite", "--material", "PbSe", "--first-peak", "1450nm", "--concentration", "1uM",

@@ -45,6 +45,29 @@ class TraceSidecarCodecTest {
     }
 
     @Test
+    void forAFitEveryTraceNeedsItsExcitationAndOneWithoutIsRefusedAtItsEntry(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+            throws Exception {
+        java.nio.file.Path noValue = dir.resolve("a.traces.json");
+        java.nio.file.Files.writeString(noValue, "{\"schema\":\"ladderkin.traces/1\",\"traces\":[{\"label\":\"low\"},"
+                + "{\"label\":\"high\",\"pulseEnergy\":\"1 nJ\"}]}");
+        assertThatThrownBy(() -> TraceSidecarCodec.applyForFit(noValue, DATA)).satisfies(t -> {
+            InputException e = (InputException) t;
+            assertThat(e.key()).isEqualTo(InputProblem.MISSING_FIELD);
+            assertThat(e.field()).isEqualTo("traces[0]");
+            assertThat(e.getMessage()).startsWith(noValue + ":1:").contains("trace 'low' has no excitation").doesNotContain("\n");
+        });
+        java.nio.file.Path missingEntry = dir.resolve("b.traces.json");
+        java.nio.file.Files.writeString(missingEntry, "{\"schema\":\"ladderkin.traces/1\",\"traces\":[{\"label\":\"high\",\"pulseEnergy\":\"1 nJ\"}]}");
+        assertThatThrownBy(() -> TraceSidecarCodec.applyForFit(missingEntry, DATA)).satisfies(t -> {
+            InputException e = (InputException) t;
+            assertThat(e.field()).isEqualTo("traces");
+            assertThat(e.getMessage()).contains("no entry gives trace 'low' its excitation");
+        });
+        // the desktop planner may load the same sidecar and have the excitation typed afterwards
+        assertThat(TraceSidecarCodec.apply(noValue, DATA).traces().get(0).metadata().excitation()).isEmpty();
+    }
+
+    @Test
     void rejections() {
         assertThatThrownBy(() -> apply("{\"schema\":\"ladderkin.traces/1\",\"traces\":[{\"pulseEnergy\":\"1 nJ\"}]}"))
                 .satisfies(input(InputProblem.MISMATCH, "side.json:1:41", "traces"));
