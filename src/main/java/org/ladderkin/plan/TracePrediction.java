@@ -18,7 +18,9 @@ import org.ladderkin.observe.TimeWindows;
  * pulse's width where it matters ({@link DotRun}): the fluence series is stated as ⟨N⟩ of the mean size, a member of
  * volume ratio v sees v·⟨N⟩ and Auger rates 1/v times the mean size's. Each member gets one ladder and one factorised
  * delay grid, reused for every fluence. The node count is chosen on the strongest fluence's bleach and PL (the most
- * nonlinear signals of the series).
+ * nonlinear signals of the series) with the pulse taken as instantaneous: the pulse width changes the signals, not
+ * how smoothly they depend on size, and a finite pulse costs a hundred matrix exponentials per member. The pulse
+ * train's build-up and its pulses to steady state are those of instantaneous pulses.
  */
 final class TracePrediction {
 
@@ -40,7 +42,7 @@ final class TracePrediction {
         double[] elTimes = {windows.earlyS(), windows.lateS()};
         double top = nSeries[nSeries.length - 1];
         SizeEnsemble ensemble = SizeEnsemble.converged(sizeDispersion, e -> e.average(i -> {
-            Member m = new Member(e.modelAt(km, i), e.volumeRatio(i), top, pump);
+            Member m = new Member(e.modelAt(km, i), e.volumeRatio(i), top, PumpPulse.INSTANT);
             DotRun.After a = m.run.after(m.pulse(top), period);
             return new double[][] {m.run.observe(a, m.bleachRow, taDelays)[0], m.run.observe(a, m.plRow, plDelays)[0]};
         }));
