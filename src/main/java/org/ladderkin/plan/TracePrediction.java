@@ -106,8 +106,9 @@ final class TracePrediction {
                 : Double.isNaN(finiteFrom) ? String.format(Locale.ROOT, "instantaneous pulses: the %.3g fs pulse is short"
                         + " against every populated process (FWHM × rate ≤ %.2g) and off resonance", pump.fwhmS() * 1e15,
                         PumpPulse.SHORT)
-                : String.format(Locale.ROOT, "finite-pulse propagation (%.3g fs, with stimulated emission at the band edge)"
-                        + " from ⟨N⟩ = %.3g of the mean size: %s", pump.fwhmS() * 1e15, finiteFrom, why);
+                : String.format(Locale.ROOT, "finite-pulse propagation (%.3g fs%s) from ⟨N⟩ = %.3g of the mean size: %s",
+                        pump.fwhmS() * 1e15, pump.resonant() ? ", band-edge absorption with stimulated emission" : "",
+                        finiteFrom, why);
         return new Predictions(taDelays, dA, plDelays, List.of(pl), points, occupancy, residual, charged, pulses,
                 sizeDispersion, ensemble.nodes(), treatment);
     }
