@@ -12,6 +12,7 @@ import org.ladderkin.io.NumberText;
 import org.ladderkin.kinetics.KineticModel;
 import org.ladderkin.kinetics.LadderKinetics;
 import org.ladderkin.kinetics.Populations;
+import org.ladderkin.kinetics.ensemble.PumpPulse;
 import org.ladderkin.kinetics.train.PulseExcitation;
 import org.ladderkin.kinetics.train.SteadyState;
 import org.ladderkin.observe.DelayTraces;
@@ -91,6 +92,16 @@ final class SimulateCommand implements Callable<Integer> {
             description = "red shift of the 1S line in a dot holding a cold exciton (spectrum)")
     String biexcitonShift;
 
+    @Option(names = "--dispersion", paramLabel = "FRACTION", defaultValue = "0",
+            description = "relative size dispersion σ_d/d̄, e.g. 10%%: average over the sizes (σ and ⟨N⟩ ∝ V, Auger rates ∝ 1/V);"
+                    + " --n-avg is the mean size's")
+    String dispersion;
+
+    @Option(names = "--pulse-width", paramLabel = "TIME",
+            description = "pump FWHM, e.g. 150fs: the pulse is propagated through its width when it is not short against"
+                    + " the fastest populated process, or when --pump is within --line-width of --first-exciton")
+    String pulseWidth;
+
     @Mixin
     ModelOptions modelOptions;
 
@@ -137,8 +148,26 @@ final class SimulateCommand implements Callable<Integer> {
             states.add(ss);
             labels.add(nAvg.get(i).trim());
         }
-        List<List<SimulatedObservables.Column>> columns = SimulatedObservables.columnsForAll(observables, labels,
-                kinetics, pulses, afters, delaysS, extra);
+        List<List<SimulatedObservables.Column>> columns;
+        PumpPulse pump = pump(extra);
+        double width = Quantity.parseSi(dispersion, Dimension.DIMENSIONLESS);
+        if (!(width >= 0 && width < 0.5)) {
+            throw new IllegalArgumentException("--dispersion must be at least 0 and below 50 %, was " + dispersion);
+        }
+        if (width == 0 && pump.fwhmS() == 0) {
+            columns = SimulatedObservables.columnsForAll(observables, labels, kinetics, pulses, afters, delaysS, extra);
+        } else {
+            EnsembleSimulation.Result r = EnsembleSimulation.run(model, pulses, labels, periodS, delaysS, observables, extra,
+                    width, pump, convergence);
+            columns = r.columns();
+            states = r.states();
+            PrintWriter err = spec.commandLine().getErr();
+            if (!quiet.on()) {
+                err.printf(java.util.Locale.ROOT, "note: size dispersion %.3g %% (%d quadrature nodes); %s%n", 100 * width,
+                        r.nodes(), r.pulseNote());
+                err.flush();
+            }
+        }
         PrintWriter out = quiet.data();
         if (format.equals("csv")) {
             writeCsv(out, delaysS, columns);
@@ -147,6 +176,17 @@ final class SimulateCommand implements Callable<Integer> {
         }
         out.flush();
         return ExitCodes.OK;
+    }
+
+    /** The pump as the kinetics see it; resonant when --pump lies within --line-width of --first-exciton. */
+    private PumpPulse pump(SimulatedObservables.Inputs in) {
+        if (pulseWidth == null) {
+            return PumpPulse.INSTANT;
+        }
+        double fwhm = positive(pulseWidth, Dimension.TIME, "--pulse-width");
+        boolean resonant = !Double.isNaN(in.photonEnergyJ()) && !Double.isNaN(in.firstExcitonJ())
+                && Math.abs(in.photonEnergyJ() - in.firstExcitonJ()) <= in.lineFwhmJ();
+        return new PumpPulse(fwhm, resonant);
     }
 
     private SimulatedObservables.Inputs extraInputs() {

@@ -153,6 +153,10 @@ public final class PlanOutputs {
         ObjectNode train = root.putObject("pulseTrainAtHighestFluence");
         train.put("nAvgProbeWeighted", plan.highestFluence().nProbeAveraged());
         train.put("pulsesToSteadyState", pr.pulsesToSteadyState());
+        ObjectNode used = root.putObject("predictionModel");
+        used.put("sizeDispersion", pr.sizeDispersion());
+        used.put("sizeQuadratureNodes", pr.sizeNodes());
+        used.put("pulse", pr.pulseTreatment());
         double[] charged = pr.buildUpCharged();
         double[] excited = pr.buildUpResidual();
         train.put("buildUpPulses", charged.length);

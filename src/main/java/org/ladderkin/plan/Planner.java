@@ -12,11 +12,7 @@ import org.ladderkin.excite.OccupancyUncertainty;
 import org.ladderkin.excite.Pulse;
 import org.ladderkin.excite.RelativeBudget;
 import org.ladderkin.kinetics.KineticModel;
-import org.ladderkin.kinetics.LadderKinetics;
-import org.ladderkin.kinetics.train.PeriodicSteadyState;
-import org.ladderkin.kinetics.train.PulseExcitation;
-import org.ladderkin.kinetics.train.SteadyState;
-import org.ladderkin.observe.EarlyLate;
+
 import org.ladderkin.observe.PulseTrainRisks;
 import org.ladderkin.observe.Risk;
 import org.ladderkin.observe.TimeWindows;
@@ -193,7 +189,8 @@ public final class Planner {
         double[] taDelays = delayPlans.stream().filter(d -> d.instrument().kind() == Instrument.Kind.TRANSIENT_ABSORPTION)
                 .findFirst().map(d -> java.util.Arrays.stream(d.delaysS()).filter(t -> t > 0).toArray())
                 .filter(t -> t.length >= 2).orElseGet(() -> TimeWindows.logSpaced(firstDelay, lastDelay, 60));
-        Predictions predictions = predict(km, nSeries, period, taDelays, bandEdgeOd, model);
+        Predictions predictions = TracePrediction.predict(km, nSeries, period, taDelays, bandEdgeOd, model,
+                sample.spec().sizeDispersion(), TracePrediction.pump(sample, laser.pulseFwhmS(), chosen.photonEnergyJ()));
 
         progress.step(5, totalSteps, "delay plans and risks");
         String at = String.format(Locale.ROOT, "at the series' highest ⟨N⟩ = %.3g (%s) and %s", top(nSeries),
@@ -337,46 +334,6 @@ public final class Planner {
         LaserSetup l = in.laser();
         return new DesignSearch.Errors(l.pumpFluctuationOrDefault(), l.driftPerHourOrDefault(), scale, stated,
                 crossSectionRel(in, ex), ta.timeZeroUncertaintyOrDefault(), ta.irfFwhmS(), ta.irfWidthRelOrDefault(), ta.measuredIrf());
-    }
-
-    private static Predictions predict(KineticModel km, double[] nSeries, double period, double[] taDelays,
-                                       double bandEdgeOd, ModelAssumptions model) {
-        PulseExcitation strongest = new PulseExcitation.Poisson(nSeries[nSeries.length - 1]);
-        double[] plDelays = TimeWindows.logSpaced(1e-12, Math.min(period, 20 * model.tauSingleExcitonS()), 120);
-        TimeWindows.EarlyLate windows = TimeWindows.earlyLate(model.coolingS(), model.tauBiexcitonS(), model.tauSingleExcitonS());
-        int k = nSeries.length;
-        double[][] dA = new double[k][];
-        double[][] pl = new double[k][];
-        double[][] occupancy = new double[k][];
-        EarlyLate.Point[] el = new EarlyLate.Point[k];
-        LadderKinetics kin = LadderKinetics.forPulses(km, strongest);
-        // one ladder and one factorised grid per delay set, reused for every fluence
-        var taGrid = kin.propagator().onGrid(taDelays);
-        var plGrid = kin.propagator().onGrid(plDelays);
-        var elGrid = kin.propagator().onGrid(new double[] {windows.earlyS(), windows.lateS()});
-        double[][] bleachRow = {kin.bleachObservable()};
-        double[][] plRow = {kin.photoluminescenceObservable()};
-        for (int i = 0; i < k; i++) {
-            PulseExcitation pulse = new PulseExcitation.Poisson(nSeries[i]);
-            SteadyState ss = kin.steadyState(pulse, period, false);
-            double[] after = ss.afterPulse().probabilities();
-            double[] bleach = taGrid.observe(bleachRow, after)[0];
-            dA[i] = new double[bleach.length];
-            for (int m = 0; m < bleach.length; m++) {
-                dA[i][m] = -bandEdgeOd * bleach[m];
-            }
-            pl[i] = plGrid.observe(plRow, after)[0];
-            occupancy[i] = ss.afterPulse().excitonDistribution();
-            double[] two = elGrid.observe(bleachRow, after)[0];
-            el[i] = new EarlyLate.Point(nSeries[i], two[0], two[1]);
-        }
-        PeriodicSteadyState train = kin.pulseTrain(strongest, period);
-        int pulses = PeriodicSteadyState.pulsesToOnePercent(train.secondEigenvalueModulus());
-        // a fifth past the stated pulses to steady state, so the chart shows the plateau the text quotes
-        int shown = Math.min(MAX_BUILD_UP_PULSES, Math.max(10, (int) Math.ceil(1.2 * pulses)));
-        PulseTrainRisks.BuildUp buildUp = PulseTrainRisks.buildUp(kin, strongest, period, shown);
-        return new Predictions(taDelays, List.of(dA), plDelays, List.of(pl), List.of(el), List.of(occupancy),
-                buildUp.excitedOrCharged(), buildUp.charged(), pulses);
     }
 
     private static DelayPlan delayPlan(Instrument inst, ModelAssumptions model, DesignSearch.Result design, int fluenceCount,

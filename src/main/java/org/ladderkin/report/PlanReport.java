@@ -128,6 +128,9 @@ public final class PlanReport {
                 + "for every fluence of the series; residual excitation from earlier pulses included. The pulse-train "
                 + "build-up is at %s: it takes %d pulses to come within 1 %% of the steady state; %d pulses are drawn.", top,
                 plan.predictions().pulsesToSteadyState(), plan.predictions().buildUpCharged().length));
+        page.paragraph(String.format(Locale.ROOT, "Averaged over a size dispersion of %.3g %% (%d quadrature nodes; ⟨N⟩ is "
+                + "the mean size's). Pump: %s.", 100 * plan.predictions().sizeDispersion(), plan.predictions().sizeNodes(),
+                plan.predictions().pulseTreatment()));
         page.charts(charts(plan), 520, 340);
         designSection(page, plan);
         multiplicationSection(page, plan);

@@ -58,10 +58,23 @@ class PlannerDemoTest {
         double a0 = in.sample().absorbanceAt(in.sample().firstExcitonWavelengthM());
         Predictions p = plan.predictions();
         int last = plan.fluences().size() - 1;
-        PulseExcitation top = new PulseExcitation.Poisson(plan.fluences().get(last).nProbeAveraged());
-        LadderKinetics kin = LadderKinetics.forPulses(km, top);
-        SteadyState ss = kin.steadyState(top, period, false);
-        double[] bleach = kin.trace(ss.afterPulse(), p.delaysS()).bleach();
+        // averaged over the sample's size dispersion, with the pump's width where the plan says it matters
+        double dispersion = in.sample().spec().sizeDispersion();
+        assertThat(p.sizeDispersion()).isEqualTo(dispersion);
+        org.ladderkin.kinetics.ensemble.SizeEnsemble sizes = org.ladderkin.kinetics.ensemble.SizeEnsemble.of(dispersion,
+                p.sizeNodes());
+        var pump = TracePrediction.pump(in.sample(), in.laser().pulseFwhmS(), w.photonEnergyJ());
+        double nTopSeries = plan.fluences().get(last).nProbeAveraged();
+        double[] bleach = new double[p.delaysS().length];
+        for (int i = 0; i < sizes.size(); i++) {
+            PulseExcitation top = new PulseExcitation.Poisson(sizes.volumeRatio(i) * nTopSeries);
+            var run = new org.ladderkin.kinetics.ensemble.DotRun(sizes.modelAt(km, i), top, pump);
+            double[] b = run.observe(run.after(top, period), new double[][] {run.kinetics().bleachObservable()},
+                    p.delaysS())[0];
+            for (int m = 0; m < b.length; m++) {
+                bleach[m] += sizes.weight(i) * b[m];
+            }
+        }
         for (int m = 0; m < bleach.length; m += 7) {
             assertThat(p.deltaAOd().get(last)[m]).isCloseTo(-a0 * bleach[m], org.assertj.core.data.Offset.offset(1e-12));
         }

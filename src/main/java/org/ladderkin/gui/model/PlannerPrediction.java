@@ -104,6 +104,11 @@ public final class PlannerPrediction implements PredictionSource {
                 p.inputs().limits().maxChargedFraction())));
         out.add(new Prediction.DerivedNumber("pulses to steady state" + atTop, String.valueOf(p.predictions().pulsesToSteadyState()),
                 "⌈ln 0.01 / ln|λ₂|⌉ with λ₂ the second eigenvalue of the one-period map"));
+        out.add(new Prediction.DerivedNumber("size dispersion averaged over", String.format(Locale.ROOT, "%.3g %% (%d nodes)",
+                100 * p.predictions().sizeDispersion(), p.predictions().sizeNodes()), "σ and ⟨N⟩ ∝ V, Auger rates ∝ 1/V; "
+                + "quadrature nodes raised until the traces change by less than 1e-6"));
+        out.add(new Prediction.DerivedNumber("pump pulse", p.predictions().pulseTreatment(), "finite width when FWHM × "
+                + "fastest populated rate > 0.01 or the pump is within a line width of E₁S"));
         return List.copyOf(out);
     }
 

@@ -1,21 +1,29 @@
 package org.ladderkin.kinetics.train;
 
 import org.ladderkin.kinetics.propagate.StiffSystem;
+import org.ladderkin.kinetics.state.Charge;
 import org.ladderkin.kinetics.state.LadderSpace;
 
 /**
- * A Gaussian pump pulse of finite width as a time-dependent generator dp/dt = (Q + φ(t)·A)·p for the implicit
- * integrator. φ(t) is the photon flux (photons m⁻² s⁻¹), a Gaussian centred at t = 0 with the given FWHM and
- * integral equal to the photon fluence j; A moves a dot from (c, N, h) to (c, N+1, h+1 when hot excitons are
- * resolved) at cross-section σ_N. With band-edge pumping σ_N = σ·max(0, 1 − N/g) (absorption bleaches as the
- * g-fold level fills), otherwise σ_N = σ. A dot at Nmax absorbs no more (truncation, as for instantaneous pulses,
- * chosen so that this matters less than the Nmax tail).
+ * A Gaussian pump pulse of finite width as a time-dependent generator dp/dt = (Q + φ(t)·A)·p. φ(t) is the photon flux
+ * (photons m⁻² s⁻¹), a Gaussian centred at t = 0 with the given FWHM and integral equal to the photon fluence j; A is
+ * the absorption generator per unit flux.
+ * <p>
+ * Pumped far above the gap (g = 0 here) a dot absorbs at σ whatever it holds and the new exciton starts hot (when hot
+ * excitons are resolved). Pumped at the band edge (g ≥ 1) the light drives the 1S transition both ways: with band-edge
+ * filling f = min(n_e, g)/g (n_e the cold excitons, plus one for a negative dot's extra electron, as the bleach counts
+ * them) a dot absorbs at σ·(1 − f) into a cold exciton and is stimulated to emit at σ·f, losing a cold exciton. The
+ * net absorption σ·(1 − 2f) vanishes at f = 1/2, the transparency of the gain criterion, so a resonant pump drives the
+ * level towards half filling (a binomial(g, ½) balance) and never past it on average. A dot at Nmax absorbs no more
+ * (truncation, as for instantaneous pulses).
  */
 public final class FinitePulseSystem implements StiffSystem {
 
     private final double[][] q;
     private final int[] absorbTo;
     private final double[] absorbCrossSectionM2;
+    private final int[] emitTo;
+    private final double[] emitCrossSectionM2;
     private final double fluencePhotonsPerM2;
     private final double sigmaS;
 
@@ -23,7 +31,7 @@ public final class FinitePulseSystem implements StiffSystem {
      * @param space ladder
      * @param generator between-pulse generator Q (1/s), copied
      * @param crossSectionM2 σ (m²)
-     * @param bandEdgeDegeneracy g, or 0 for non-resonant pumping (σ_N = σ)
+     * @param bandEdgeDegeneracy g for a resonant (band-edge) pump, or 0 for a pump far above the gap
      * @param fluencePhotonsPerM2 photon fluence j of the pulse (photons/m²)
      * @param fwhmS pulse FWHM (s)
      */
@@ -40,11 +48,27 @@ public final class FinitePulseSystem implements StiffSystem {
         }
         absorbTo = new int[n];
         absorbCrossSectionM2 = new double[n];
+        emitTo = new int[n];
+        emitCrossSectionM2 = new double[n];
+        boolean resonant = bandEdgeDegeneracy > 0;
         for (int s = 0; s < n; s++) {
             int nx = space.excitons(s);
-            absorbTo[s] = space.index(space.charge(s), nx + 1, space.hot(s) + (space.hotResolved() ? 1 : 0));
-            double factor = bandEdgeDegeneracy == 0 ? 1 : Math.max(0, 1 - nx / (double) bandEdgeDegeneracy);
-            absorbCrossSectionM2[s] = absorbTo[s] < 0 ? 0 : crossSectionM2 * factor;
+            int hot = space.hot(s);
+            emitTo[s] = -1;
+            if (!resonant) {
+                absorbTo[s] = space.index(space.charge(s), nx + 1, hot + (space.hotResolved() ? 1 : 0));
+                absorbCrossSectionM2[s] = absorbTo[s] < 0 ? 0 : crossSectionM2;
+                continue;
+            }
+            int cold = space.cold(s);
+            int electrons = cold + (space.charge(s) == Charge.NEGATIVE ? 1 : 0);
+            double f = Math.min(electrons, bandEdgeDegeneracy) / (double) bandEdgeDegeneracy;
+            absorbTo[s] = space.index(space.charge(s), nx + 1, hot);
+            absorbCrossSectionM2[s] = absorbTo[s] < 0 ? 0 : crossSectionM2 * (1 - f);
+            if (cold > 0) {
+                emitTo[s] = space.index(space.charge(s), nx - 1, hot);
+                emitCrossSectionM2[s] = crossSectionM2 * f;
+            }
         }
         this.fluencePhotonsPerM2 = fluencePhotonsPerM2;
         this.sigmaS = fwhmS / (2 * Math.sqrt(2 * Math.log(2)));
@@ -54,6 +78,32 @@ public final class FinitePulseSystem implements StiffSystem {
     public double photonFlux(double tS) {
         double x = tS / sigmaS;
         return fluencePhotonsPerM2 / (Math.sqrt(2 * Math.PI) * sigmaS) * Math.exp(-0.5 * x * x);
+    }
+
+    /** The between-pulse generator Q (a copy). */
+    public double[][] generator() {
+        double[][] c = new double[q.length][];
+        for (int i = 0; i < q.length; i++) {
+            c[i] = q[i].clone();
+        }
+        return c;
+    }
+
+    /** The absorption generator A per unit photon flux (m²): absorption and stimulated emission, columns sum to 0. */
+    public double[][] absorption() {
+        int n = q.length;
+        double[][] a = new double[n][n];
+        for (int s = 0; s < n; s++) {
+            if (absorbCrossSectionM2[s] != 0) {
+                a[s][s] -= absorbCrossSectionM2[s];
+                a[absorbTo[s]][s] += absorbCrossSectionM2[s];
+            }
+            if (emitTo[s] >= 0 && emitCrossSectionM2[s] != 0) {
+                a[s][s] -= emitCrossSectionM2[s];
+                a[emitTo[s]][s] += emitCrossSectionM2[s];
+            }
+        }
+        return a;
     }
 
     @Override
@@ -68,7 +118,7 @@ public final class FinitePulseSystem implements StiffSystem {
         for (int i = 0; i < n; i++) {
             double s = 0;
             double[] qi = q[i];
-            for (int j = i; j < n; j++) {
+            for (int j = 0; j < n; j++) {
                 s += qi[j] * y[j];
             }
             dydt[i] = s;
@@ -78,6 +128,11 @@ public final class FinitePulseSystem implements StiffSystem {
             if (r != 0) {
                 dydt[s] -= r;
                 dydt[absorbTo[s]] += r;
+            }
+            if (emitTo[s] >= 0) {
+                double e = phi * emitCrossSectionM2[s] * y[s];
+                dydt[s] -= e;
+                dydt[emitTo[s]] += e;
             }
         }
     }
@@ -93,6 +148,11 @@ public final class FinitePulseSystem implements StiffSystem {
             if (r != 0) {
                 dfdy[s][s] -= r;
                 dfdy[absorbTo[s]][s] += r;
+            }
+            if (emitTo[s] >= 0) {
+                double e = phi * emitCrossSectionM2[s];
+                dfdy[s][s] -= e;
+                dfdy[emitTo[s]][s] += e;
             }
         }
     }
