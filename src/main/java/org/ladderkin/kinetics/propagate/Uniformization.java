@@ -86,6 +86,11 @@ final class Uniformization {
         return n;
     }
 
+    /** Stored entries of P: the multiply-adds of one step. */
+    int nonZeros() {
+        return rowStart[n];
+    }
+
     /** out = P·in (distinct arrays). */
     void step(double[] in, double[] out) {
         for (int i = 0; i < n; i++) {
