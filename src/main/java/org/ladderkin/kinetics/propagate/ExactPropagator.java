@@ -128,6 +128,7 @@ public final class ExactPropagator implements Propagator {
         double[][] vt = new double[n][];
         double[][] bt = new double[n][];
         for (int j = 0; j < n; j++) {
+            WorkBound.stopIfInterrupted();
             double[] vj = new double[j + 1];
             double[] bj = new double[j + 1];
             vj[j] = 1;
@@ -583,6 +584,7 @@ public final class ExactPropagator implements Propagator {
                 walks[c] = cacheable(clusters.get(c), nt) ? new ClusterWalk(clusters.get(c)) : null;
             }
             for (int j = 0; j < nt; j++) {
+                WorkBound.stopIfInterrupted();
                 double t = timesS[j];
                 int a = 0;
                 while (a < singleLambda.length && singleLambda[a] * t >= UNDERFLOW) {
@@ -676,6 +678,7 @@ public final class ExactPropagator implements Propagator {
             double[][][] clusterE = new double[clusters.size()][][];
             double[] y = new double[n];
             for (int j = 0; j < nt; j++) {
+                WorkBound.stopIfInterrupted();
                 double[] f = singleFactor[j];
                 int a = active[j];
                 for (int c = 0; c < clusterE.length; c++) {

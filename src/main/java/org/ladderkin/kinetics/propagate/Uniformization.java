@@ -124,6 +124,9 @@ final class Uniformization {
                 }
             }
             if (k < win.last()) {
+                if ((k & 1023) == 0) {
+                    WorkBound.stopIfInterrupted();
+                }
                 step(v, next);
                 double[] swap = v;
                 v = next;

@@ -45,6 +45,16 @@ public final class WorkBound {
         }
     }
 
+    /**
+     * Stops the step when its thread has been interrupted (a desktop prediction past its time limit, a cancelled fit):
+     * the heavy loops of the engine call this once per column, time or batch of steps, which is cheap beside them.
+     */
+    public static void stopIfInterrupted() {
+        if (Thread.currentThread().isInterrupted()) {
+            throw new java.util.concurrent.CancellationException("engine step interrupted");
+        }
+    }
+
     /** 3.1e10 style. */
     public static String sci(double x) {
         return String.format(Locale.ROOT, "%.1e", x).replace("e+0", "e").replace("e+", "e");
