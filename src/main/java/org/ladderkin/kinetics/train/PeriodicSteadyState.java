@@ -59,6 +59,24 @@ public final class PeriodicSteadyState {
         double[] p;
         try {
             p = DenseLinear.solve(a, b);
+            // iterative refinement with the residual summed exactly (to twice the working precision): when the slow
+            // mode of M is within 1e-9 of 1 the solve's rounding is amplified along it (a residual of 6e-13 became
+            // 6e-7 in populations); each pass divides the error by about that amplification times 1e-16
+            for (int pass = 0; pass < REFINEMENTS; pass++) {
+                double[] r = new double[n];
+                boolean zero = true;
+                for (int i = 0; i < n; i++) {
+                    r[i] = exactDotMinus(a[i], p, b[i]);
+                    zero &= r[i] == 0;
+                }
+                if (zero) {
+                    break;
+                }
+                double[] d = DenseLinear.solve(a, r);
+                for (int i = 0; i < n; i++) {
+                    p[i] -= d[i];
+                }
+            }
         } catch (ArithmeticException e) {
             throw new IllegalArgumentException("the pulse train has no unique steady state (some states never return to the"
                     + " ground state: add neutralisation or sample refresh)", e);
@@ -71,6 +89,40 @@ public final class PeriodicSteadyState {
         }
         PopulationGuard.check(space, p, 0, "(periodic steady state, just before a pulse)");
         return p;
+    }
+
+    /** Passes of iterative refinement after the direct solve. */
+    private static final int REFINEMENTS = 2;
+
+    /**
+     * Σ a_j·x_j − c with each product split exactly by a fused multiply-add and the sum kept as a value and its
+     * rounding error (Ogita, Rump &amp; Oishi, "Accurate sum and dot product", SIAM J. Sci. Comput. 26, 1955 (2005),
+     * Algorithm Dot2): as accurate as if computed in twice the working precision.
+     */
+    static double exactDotMinus(double[] a, double[] x, double c) {
+        double s = -c;
+        double err = 0;
+        for (int j = 0; j < a.length; j++) {
+            double prod = a[j] * x[j];
+            double prodErr = Math.fma(a[j], x[j], -prod);
+            double t = s + prod;
+            double z = t - s;
+            err += (s - (t - z)) + (prod - z) + prodErr;
+            s = t;
+        }
+        return s + err;
+    }
+
+    /**
+     * max_i |(M·p)_i − p_i| for a distribution p, with every sum as in {@link #exactDotMinus}: the fixed point's
+     * residual, free of the rounding of its own evaluation.
+     */
+    public double residual(double[] p) {
+        double worst = 0;
+        for (int i = 0; i < map.length; i++) {
+            worst = Math.max(worst, Math.abs(exactDotMinus(map[i], p, p[i])));
+        }
+        return worst;
     }
 
     /**
