@@ -351,6 +351,9 @@ public final class Planner {
         double[][] pl = new double[k][];
         double[][] occupancy = new double[k][];
         EarlyLate.Point[] el = new EarlyLate.Point[k];
+        // the work bound of the whole series, refused in one line before anything is built (docs/physics.md §9)
+        LadderKinetics.checkWork(km, taDelays.length + plDelays.length + 2, true, false,
+                java.util.Arrays.stream(nSeries).mapToObj(PulseExcitation.Poisson::new).toArray(PulseExcitation[]::new));
         LadderKinetics kin = LadderKinetics.forPulses(km, strongest);
         // one ladder and one factorised grid per delay set, reused for every fluence
         var taGrid = kin.propagator().onGrid(taDelays);
