@@ -55,8 +55,11 @@ public final class WorkBound {
         }
     }
 
-    /** 3.1e10 style. */
+    /** 3.1e10 style, three significant digits at most (so an estimate just above the bound never reads as equal). */
     public static String sci(double x) {
-        return String.format(Locale.ROOT, "%.1e", x).replace("e+0", "e").replace("e+", "e");
+        String t = String.format(Locale.ROOT, "%.2e", x);
+        int e = t.indexOf('e');
+        String mantissa = t.substring(0, e).replaceAll("0+$", "").replaceAll("\\.$", ".0");
+        return mantissa + t.substring(e).replace("e+0", "e").replace("e+", "e").replace("e-0", "e-");
     }
 }
