@@ -51,7 +51,7 @@ public final class WorkBound {
      */
     public static void stopIfInterrupted() {
         if (Thread.currentThread().isInterrupted()) {
-            throw new java.util.concurrent.CancellationException("engine step interrupted");
+            throw new java.util.concurrent.CancellationException("cancelled: the engine step's thread was interrupted");
         }
     }
 
