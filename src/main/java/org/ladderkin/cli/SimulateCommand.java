@@ -13,6 +13,7 @@ import org.ladderkin.kinetics.KineticModel;
 import org.ladderkin.kinetics.LadderKinetics;
 import org.ladderkin.kinetics.Populations;
 import org.ladderkin.kinetics.ensemble.PumpPulse;
+import org.ladderkin.kinetics.propagate.WorkBound;
 import org.ladderkin.kinetics.train.PulseExcitation;
 import org.ladderkin.kinetics.train.SteadyState;
 import org.ladderkin.observe.DelayTraces;
@@ -129,13 +130,22 @@ final class SimulateCommand implements Callable<Integer> {
             }
             pulses.add(eta == null ? new PulseExcitation.Poisson(mean) : new PulseExcitation.Multiplication(mean, eta));
         }
+        // |λ₂| and pulses-to-1 % cost a dense eigen-decomposition per ⟨N⟩ and only the JSON output prints them
+        boolean convergence = format.equals("json");
+        double work = LadderKinetics.checkWork(model, delaysS.length, !Double.isNaN(periodS), convergence,
+                pulses.toArray(PulseExcitation[]::new));
+        if (work > WorkBound.WARN_OPERATIONS && !quiet.on()) {
+            spec.commandLine().getErr().println("ladderkin: note: about " + WorkBound.sci(work) + " operations (--n-avg, --delays, --rep-rate);"
+                    + " this may take a while");
+        }
         LadderKinetics kinetics = LadderKinetics.forPulses(model, pulses.toArray(PulseExcitation[]::new));
+        // the grid's own bound (it depends on how the rates crowd) is checked before the steady states are solved;
+        // the modal grid is kept by the propagator, so the traces below reuse it
+        kinetics.propagator().onGrid(delaysS);
         List<SteadyState> states = new ArrayList<>();
         List<Populations> afters = new ArrayList<>();
         List<String> labels = new ArrayList<>();
         SimulatedObservables.Inputs extra = extraInputs();
-        // |λ₂| and pulses-to-1 % cost a dense eigen-decomposition per ⟨N⟩ and only the JSON output prints them
-        boolean convergence = format.equals("json");
         for (int i = 0; i < pulses.size(); i++) {
             PulseExcitation p = pulses.get(i);
             SteadyState ss = null;
@@ -303,6 +313,7 @@ final class SimulateCommand implements Callable<Integer> {
                             org.ladderkin.kinetics.Observables.excitedOrCharged(kinetics.space())));
                     g.writeNumberField("secondEigenvalueModulus", ss.secondEigenvalueModulus());
                     g.writeNumberField("pulsesToWithinOnePercent", ss.pulsesToOnePercent());
+                    g.writeNumberField("timeToWithinOnePercentS", ss.timeToOnePercentS());
                     g.writeEndObject();
                 }
                 g.writeObjectFieldStart("columns");

@@ -30,7 +30,9 @@ final class PropagatorChoice {
             if (settle.isPresent()) {
                 int[] cold = coldStates(space);
                 SettlingPropagator p = SettlingPropagator.of(q, cold, settle.getAsDouble());
-                if (p.stepsToSettle() <= STEP_LIMIT) {
+                // Λ·t_s, not the window: a slow cooling beside fast Auger puts it beyond an int (3e9 for a 10 ns
+                // cooling with 5 ps Auger), where only the modal path can go
+                if (p.settleStepsEstimate() <= STEP_LIMIT) {
                     return p;
                 }
             }

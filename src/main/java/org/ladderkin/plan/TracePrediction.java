@@ -41,6 +41,10 @@ final class TracePrediction {
         TimeWindows.EarlyLate windows = TimeWindows.earlyLate(model.coolingS(), model.tauBiexcitonS(), model.tauSingleExcitonS());
         double[] elTimes = {windows.earlyS(), windows.lateS()};
         double top = nSeries[nSeries.length - 1];
+        // the work bound of the whole series, refused in one line before anything is built (docs/physics.md §9)
+        org.ladderkin.kinetics.LadderKinetics.checkWork(km, taDelays.length + plDelays.length + 2, true, false,
+                java.util.Arrays.stream(nSeries).mapToObj(org.ladderkin.kinetics.train.PulseExcitation.Poisson::new)
+                        .toArray(org.ladderkin.kinetics.train.PulseExcitation[]::new));
         SizeEnsemble ensemble = SizeEnsemble.converged(sizeDispersion, e -> e.average(i -> {
             Member m = new Member(e.modelAt(km, i), e.volumeRatio(i), top, PumpPulse.INSTANT);
             DotRun.After a = m.run.after(m.pulse(top), period);

@@ -101,6 +101,9 @@ public final class ExactPropagator implements Propagator {
                 }
             }
         }
+        // each try is two triangular back-substitutions, about n³/3 multiply-adds, and up to all δ may be tried
+        WorkBound.require(DELTAS.length * Math.pow(n, 3) / 3, "the modal decomposition of " + n + " states",
+                "a lower ⟨N⟩ or a smaller model (fewer charges, no cooling)");
         ExactPropagator best = null;
         for (double d : DELTAS) {
             if (d < startDelta) {
@@ -120,34 +123,55 @@ public final class ExactPropagator implements Propagator {
         int[] cl = clusterLabels(q, delta);
         double[][] v = new double[n][n];
         double[][] b = new double[n][n];
+        // column j of V and B is built from earlier columns; vt and bt hold them as rows (vt[j][k] = V[k][j]) so the
+        // inner sums run along contiguous memory (a 1081-state ladder: minutes by columns, seconds by rows)
+        double[][] vt = new double[n][];
+        double[][] bt = new double[n][];
         for (int j = 0; j < n; j++) {
-            v[j][j] = 1;
-            b[j][j] = q[j][j];
+            WorkBound.stopIfInterrupted();
+            double[] vj = new double[j + 1];
+            double[] bj = new double[j + 1];
+            vj[j] = 1;
+            bj[j] = q[j][j];
             for (int i = j - 1; i >= 0; i--) {
                 double rhs = 0;
+                double[] vi = v[i];
                 for (int k = i + 1; k < j; k++) {
-                    rhs += v[i][k] * b[k][j];
+                    rhs += vi[k] * bj[k];
                 }
+                double[] qi = q[i];
                 for (int k = i + 1; k <= j; k++) {
-                    rhs -= q[i][k] * v[k][j];
+                    rhs -= qi[k] * vj[k];
                 }
                 if (cl[i] != cl[j]) {
                     // rhs is exactly 0 when j cannot reach i; then no division (the eigenvalues may even be equal)
-                    v[i][j] = rhs == 0 ? 0 : rhs / (q[i][i] - q[j][j]);
+                    vj[i] = rhs == 0 ? 0 : rhs / (q[i][i] - q[j][j]);
                 } else {
-                    b[i][j] = -rhs;
+                    bj[i] = -rhs;
                 }
+            }
+            vt[j] = vj;
+            bt[j] = bj;
+            for (int i = 0; i <= j; i++) {
+                v[i][j] = vj[i];
+                b[i][j] = bj[i];
             }
         }
         double[][] w = new double[n][n];
+        // W = V⁻¹ by rows of its transpose as well: W[i][j] = −Σ_k V[i][k]·W[k][j], column j of W from below
         for (int j = 0; j < n; j++) {
-            w[j][j] = 1;
+            double[] wj = new double[j + 1];
+            wj[j] = 1;
             for (int i = j - 1; i >= 0; i--) {
                 double s = 0;
+                double[] vi = v[i];
                 for (int k = i + 1; k <= j; k++) {
-                    s -= v[i][k] * w[k][j];
+                    s -= vi[k] * wj[k];
                 }
-                w[i][j] = s;
+                wj[i] = s;
+            }
+            for (int i = 0; i <= j; i++) {
+                w[i][j] = wj[i];
             }
         }
         double growth = normInf(v) * normInf(w);
@@ -475,6 +499,48 @@ public final class ExactPropagator implements Propagator {
         return out;
     }
 
+    /**
+     * Estimated multiply-adds to prepare the given times: per time, one exponential per mode and each cluster's block
+     * exponential (divided differences for small blocks; a Padé exponential, about 10·m³ with its squarings, for a
+     * block of m > {@value ClusterExponential#MAX_SIZE} states), skipped where the cluster has underflowed.
+     */
+    public double operationsFor(double[] timesS) {
+        double total = 0;
+        for (double t : timesS) {
+            total += singleIndex.length;
+            for (Cluster c : clusters) {
+                if (c.muPerS * t >= UNDERFLOW) {
+                    int m = c.members.length;
+                    total += c.exact != null ? (double) m * m * (1 << m) : padeOperations(c, t);
+                }
+            }
+        }
+        return total;
+    }
+
+    /**
+     * A Padé exponential of an upper-triangular m-block at time t: six products for the degree-13 approximant and one
+     * per squaring (each m³/6 over the triangle), and the final solve (m³/3).
+     */
+    private static double padeOperations(Cluster c, double tS) {
+        double m = c.members.length;
+        double norm = 0;
+        for (int j = 0; j < c.members.length; j++) {
+            double col = 0;
+            for (double[] row : c.block) {
+                col += Math.abs(row[j]);
+            }
+            norm = Math.max(norm, col);
+        }
+        double squarings = Math.max(0, Math.ceil(Math.log(norm * tS / 5.37) / Math.log(2)));
+        return (6 + squarings) * m * m * m / 6 + m * m * m / 3;
+    }
+
+    /** States in the largest cluster (1 when every mode is separate). */
+    public int largestCluster() {
+        return clusters.stream().mapToInt(c -> c.members.length).max().orElse(1);
+    }
+
     /** Precomputes the mode factors at the given times (s, each ≥ 0) for cheap repeated traces. */
     @Override
     public Grid onGrid(double[] timesS) {
@@ -485,6 +551,9 @@ public final class ExactPropagator implements Propagator {
         for (double t : timesS) {
             requireTime(t);
         }
+        WorkBound.require(operationsFor(timesS), "the delay grid (" + timesS.length + " delays on " + n
+                + " states whose rates crowd into a block of " + largestCluster() + ")",
+                "fewer delays (short delays cost most), a lower ⟨N⟩ or rates that are less alike");
         Grid grid = new Grid(timesS.clone());
         lastGrid = grid;
         return grid;
@@ -515,6 +584,7 @@ public final class ExactPropagator implements Propagator {
                 walks[c] = cacheable(clusters.get(c), nt) ? new ClusterWalk(clusters.get(c)) : null;
             }
             for (int j = 0; j < nt; j++) {
+                WorkBound.stopIfInterrupted();
                 double t = timesS[j];
                 int a = 0;
                 while (a < singleLambda.length && singleLambda[a] * t >= UNDERFLOW) {
@@ -608,6 +678,7 @@ public final class ExactPropagator implements Propagator {
             double[][][] clusterE = new double[clusters.size()][][];
             double[] y = new double[n];
             for (int j = 0; j < nt; j++) {
+                WorkBound.stopIfInterrupted();
                 double[] f = singleFactor[j];
                 int a = active[j];
                 for (int c = 0; c < clusterE.length; c++) {

@@ -172,6 +172,7 @@ public final class PadeExponential {
      * {@link #multiply}, which only adds zeros besides, so the result is the same to the bit.
      */
     private static double[][] product(double[][] a, double[][] b, boolean upper) {
+        WorkBound.stopIfInterrupted();
         if (!upper) {
             return multiply(a, b);
         }

@@ -81,6 +81,20 @@ public final class SettlingPropagator implements Propagator {
         return forward.window(settleTimeS).last();
     }
 
+    /**
+     * The steps to settle, or Λ·t_s (the Poisson mean of the settle window) where the window itself would refuse a
+     * mean beyond an int.
+     */
+    public double settleStepsEstimate() {
+        double m = forward.rateBoundPerS() * settleTimeS;
+        return m <= Integer.MAX_VALUE / 4.0 ? stepsToSettle() : m;
+    }
+
+    /** Estimated multiply-adds of one trace from one start (the uniformization up to t_s). */
+    public double operationsPerStart() {
+        return settleStepsEstimate() * forward.nonZeros();
+    }
+
     public double settleTimeS() {
         return settleTimeS;
     }
@@ -165,6 +179,10 @@ public final class SettlingPropagator implements Propagator {
             }
             return out;
         }
+        WorkBound.require(settled.length * operationsPerStart() + (double) n * settled.length * settled.length,
+                "the one-period propagator of " + n + " states (" + settled.length + " settled, about "
+                        + WorkBound.sci(settleStepsEstimate()) + " uniformization steps to settle)",
+                "a lower ⟨N⟩ or a faster cooling");
         double[][] rows = settleRows();
         double[][] m = late.matrix(tS - settleTimeS);
         for (int a = 0; a < settled.length; a++) {

@@ -86,6 +86,11 @@ final class Uniformization {
         return n;
     }
 
+    /** Stored entries of P: the multiply-adds of one step. */
+    int nonZeros() {
+        return rowStart[n];
+    }
+
     /** out = P·in (distinct arrays). */
     void step(double[] in, double[] out) {
         for (int i = 0; i < n; i++) {
@@ -119,6 +124,9 @@ final class Uniformization {
                 }
             }
             if (k < win.last()) {
+                if ((k & 1023) == 0) {
+                    WorkBound.stopIfInterrupted();
+                }
                 step(v, next);
                 double[] swap = v;
                 v = next;

@@ -7,9 +7,13 @@ import org.ladderkin.kinetics.state.LadderSpace;
 
 /**
  * Auger recombination N → N−1. Neutral dots: k_A(N) = k_A,2·g(N) (g(2) = 1), unless a measured rate for that N
- * replaces the scaling law (e.g. a triexciton lifetime τ₃ measured separately). Charged dots: the trion rate of their
- * charge times g(N+1), i.e. the excess carrier counts like the missing half of one more exciton, so a trion (N = 1)
- * decays at exactly the trion rate; neutral overrides do not touch them. A fraction
+ * replaces the scaling law (e.g. a triexciton lifetime τ₃ measured separately). Charged dots under the statistical
+ * (carrier-triplet) law: the triplets are counted, the same counting that gives the neutral N²(N−1)/4 and
+ * 1/τ₂ = 2/τ_X⁻ + 2/τ_X⁺. A dot X⁻ with N excitons holds N+1 electrons and N holes, so C(N+1,2)·N electron-electron-hole
+ * triplets decay at the negative-trion rate k₋ each and (N+1)·C(N,2) hole-hole-electron triplets at k₊:
+ * k(X⁻, N) = C(N+1,2)·N·k₋ + (N+1)·C(N,2)·k₊, and X⁺ with the charges swapped (a trion, N = 1, decays at exactly its
+ * rate; equal trion rates give 9k at N = 2 and 30k at N = 3). Under the other laws, which count no carriers, a charged
+ * dot decays at its trion rate times g(N+1). Neutral overrides do not touch charged dots. A fraction
  * {@link AugerIonisation#probability()} of neutral Auger events ionises the dot instead (see {@link AugerIonisation});
  * it is dropped when that charge is not in the ladder.
  *
@@ -77,9 +81,24 @@ public record AugerRecombination(double biexcitonRatePerS, ExcitonScaling scalin
         int n = space.excitons(state);
         return switch (space.charge(state)) {
             case NEUTRAL -> neutralRatesPerS.containsKey(n) ? neutralRatesPerS.get(n) : biexcitonRatePerS * scaling.factor(n);
-            case NEGATIVE -> n == 0 ? 0 : negativeTrionRatePerS * scaling.factor(n + 1);
-            case POSITIVE -> n == 0 ? 0 : positiveTrionRatePerS * scaling.factor(n + 1);
+            case NEGATIVE -> charged(n, negativeTrionRatePerS, positiveTrionRatePerS);
+            case POSITIVE -> charged(n, positiveTrionRatePerS, negativeTrionRatePerS);
         };
+    }
+
+    /**
+     * A dot with N excitons and one extra carrier: {@code sameRatePerS} is the trion rate of its own charge (triplets
+     * with two carriers of the extra carrier's kind), {@code otherRatePerS} that of the opposite one.
+     */
+    private double charged(int n, double sameRatePerS, double otherRatePerS) {
+        if (n == 0) {
+            return 0;
+        }
+        if (scaling != AugerScaling.STATISTICAL) {
+            return sameRatePerS * scaling.factor(n + 1);
+        }
+        double majority = n + 1.0;
+        return majority * (majority - 1) / 2 * n * sameRatePerS + majority * n * (n - 1.0) / 2 * otherRatePerS;
     }
 
     @Override

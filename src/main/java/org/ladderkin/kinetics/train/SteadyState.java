@@ -10,8 +10,11 @@ import org.ladderkin.kinetics.Populations;
  * @param residualExcitedFraction fraction of dots still holding an exciton when the next pulse arrives
  * @param chargedFraction fraction of dots charged when the next pulse arrives
  * @param secondEigenvalueModulus |λ₂| of the one-period map (NaN if not computed)
- * @param pulsesToOnePercent pulses after which the slowest transient has fallen to 1 % (−1 if not computed)
+ * @param pulsesToOnePercent pulses after which the slowest transient of the states reachable from the ground state
+ *                           has fallen to 1 % (−1 if not computed)
+ * @param timeToOnePercentS those pulses times the period (s; NaN if not computed)
  */
 public record SteadyState(Populations beforePulse, Populations afterPulse, double residualExcitedFraction,
-                          double chargedFraction, double secondEigenvalueModulus, int pulsesToOnePercent) {
+                          double chargedFraction, double secondEigenvalueModulus, long pulsesToOnePercent,
+                          double timeToOnePercentS) {
 }
