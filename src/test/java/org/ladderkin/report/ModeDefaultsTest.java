@@ -26,7 +26,7 @@ class ModeDefaultsTest {
                 .contains("Auger ionisation probability: default order of magnitude (from memory)")
                 .contains("photocharge lifetime: default order of magnitude for solutions (from memory)")
                 .contains("refresh: stirred, excited volume renewed in ~0.1 s (common practice, no source)")
-                .contains("n-hexane heat capacity: density from memory")
+                .contains("n-hexane heat capacity: density 0.6549 g/cm³ at 298.15 K from the reference equation of state")
                 .doesNotContain("τ₁:").doesNotContain("PL quantum yield").doesNotContain("σ at")
                 .doesNotContain("sizing curve");
         String html = PlanReport.html(plan);
