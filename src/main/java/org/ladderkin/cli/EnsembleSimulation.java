@@ -58,7 +58,7 @@ final class EnsembleSimulation {
         double[] residual = new double[count];
         double[] charged = new double[count];
         double[] lambda2 = new double[count];
-        int[] toOnePercent = new int[count];
+        long[] toOnePercent = new long[count];
         SteadyState[] heaviest = new SteadyState[count];
         double heaviestWeight = -1;
         String note = "";
@@ -102,7 +102,7 @@ final class EnsembleSimulation {
                     }
                     if (w > heaviestWeight || heaviest[i] == null) {
                         heaviest[i] = new SteadyState(new Populations(run.kinetics().space(), a.before()),
-                                new Populations(run.kinetics().space(), a.after()), 0, 0, 0, 0);
+                                new Populations(run.kinetics().space(), a.after()), 0, 0, 0, 0, 0);
                     }
                 }
             }
@@ -117,7 +117,8 @@ final class EnsembleSimulation {
             }
             columns.add(perN);
             states.add(Double.isNaN(periodS) ? null : new SteadyState(heaviest[i].beforePulse(), heaviest[i].afterPulse(),
-                    residual[i], charged[i], convergence ? lambda2[i] : Double.NaN, convergence ? toOnePercent[i] : -1));
+                    residual[i], charged[i], convergence ? lambda2[i] : Double.NaN, convergence ? toOnePercent[i] : -1,
+                    convergence ? toOnePercent[i] * periodS : Double.NaN));
         }
         String pulseNote = pump.fwhmS() == 0 ? "instantaneous pulses (no --pulse-width)"
                 : note.isEmpty() ? String.format(Locale.ROOT, "instantaneous pulses: the %.3g fs pulse is short against"
