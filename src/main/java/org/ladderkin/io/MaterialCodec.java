@@ -70,7 +70,7 @@ public final class MaterialCodec {
 
     /** {"value": "5.81 g/cm³", "source": "..."}; a null or absent value is unknown. */
     static Sourced sourced(Node n, Dimension dimension, boolean positive) {
-        String source = n.field("source").string();
+        String source = source(n);
         Optional<Node> v = value(n);
         n.finish();
         if (v.isEmpty()) {
@@ -82,7 +82,7 @@ public final class MaterialCodec {
 
     /** {"value": 191.38, "source": "..."} with the value a bare number in the unit the field name documents. */
     static Sourced sourcedNumber(Node n, double toSi) {
-        String source = n.field("source").string();
+        String source = source(n);
         Optional<Node> v = value(n);
         n.finish();
         if (v.isEmpty()) {
@@ -106,6 +106,16 @@ public final class MaterialCodec {
         return n.optional("value");
     }
 
+    /** The "source" of a sourced entry, refused where it is read when blank: every library value names where it comes from. */
+    private static String source(Node n) {
+        Node s = n.field("source");
+        String text = s.string();
+        if (text.isBlank()) {
+            throw s.error(InputProblem.INVALID_VALUE, "a value needs its source (write \"from memory\" if it has none)");
+        }
+        return text;
+    }
+
     private static Sourced source(Node n, double si, String source) {
         try {
             return new Sourced(si, source);
@@ -116,7 +126,7 @@ public final class MaterialCodec {
 
     private static SizingCurve sizing(Node n, Sourced gap) {
         String form = n.field("form").choice("wavelength-polynomial", "reciprocal-quadratic");
-        String source = n.field("source").string();
+        String source = source(n);
         SizingCurve curve;
         try {
             if (form.equals("wavelength-polynomial")) {
@@ -188,7 +198,7 @@ public final class MaterialCodec {
         double coefficientM2 = asExtinction
                 ? AbsorptionLaw.crossSectionM2(n.field("extinction").positive(Dimension.MOLAR_EXTINCTION, null))
                 : crossSectionAtUnitM2(n.field("crossSection"), unit.toSi(1), exponent);
-        String source = n.field("source").string();
+        String source = source(n);
         Sourced uncertainty = n.optional("relativeUncertainty").map(MaterialCodec::fraction).orElse(AbsorptionLaw.DEFAULT_UNCERTAINTY);
         n.finish();
         try {
@@ -247,7 +257,7 @@ public final class MaterialCodec {
         double[] re = numbers(nNode, 1);
         Node kNode = n.field("k");
         double[] im = numbers(kNode, 1);
-        String source = n.field("source").string();
+        String source = source(n);
         Sourced uncertainty = fraction(n.field("relativeUncertainty"));
         n.finish();
         if (re.length != w.length) {

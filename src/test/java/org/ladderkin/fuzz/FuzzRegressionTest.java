@@ -69,6 +69,20 @@ class FuzzRegressionTest {
         });
     }
 
+    /** A value marked unknown with a blank source used to end in an untyped error (fuzz seed 20261204, material case 729). */
+    @Test
+    void aMaterialValueWithABlankSourceIsLocatedAtItsSource() throws IOException {
+        String text = Files.readString(InputKinds.HOME.resolve("models/materials/CsPbBr3.json"));
+        int at = text.indexOf("\"source\"", text.indexOf("\"augerVolumeConstantPsPerNm3\""));
+        int end = text.indexOf('\n', at);
+        Path f = Files.writeString(dir.resolve("CsPbBr3.json"), text.substring(0, at) + "\"source\": \"\"" + text.substring(end));
+        assertThatThrownBy(() -> MaterialCodec.read(f)).isInstanceOfSatisfying(InputException.class, e -> {
+            assertThat(e.key()).isEqualTo(InputProblem.INVALID_VALUE);
+            assertThat(e.field()).isEqualTo("augerVolumeConstantPsPerNm3.source");
+            assertThat(e.getMessage()).startsWith(f + ":").contains("needs its source");
+        });
+    }
+
     /** A lifetime the library marks unknown (null) is the plan's to give: said at the plan's field, naming the material file. */
     @Test
     void aMaterialWithoutASingleExcitonLifetimeIsLocatedInThePlan() throws IOException {
