@@ -68,7 +68,13 @@ final class PlanCommand implements Callable<Integer> {
         PlanInputs inputs = PlanCodec.read(planFile);
         PrintWriter out = quiet.summary();
         printSummary(inputs, out);
-        CampaignPlan plan = Planner.plan(inputs, quiet.on() ? Planner.Progress.NONE : new ProgressBar(spec.commandLine().getErr()));
+        CampaignPlan plan;
+        try {
+            plan = Planner.plan(inputs, quiet.on() ? Planner.Progress.NONE : new ProgressBar(spec.commandLine().getErr()));
+        } catch (IllegalArgumentException e) {
+            // a plan the engine refuses (an excitation out of reach, a work bound) is still the plan file's to change
+            throw new IllegalArgumentException(planFile + ": " + e.getMessage(), e);
+        }
         printSettings(plan, out);
         List<WhatIf> variants = whatIfs.stream().map(w -> WhatIf.of(inputs, w, WhatIfArgument.parse(w))).toList();
         for (var v : variants) {

@@ -112,7 +112,13 @@ final class SimulateCommand implements Callable<Integer> {
             throw new IllegalArgumentException("--format must be csv or json, was " + format);
         }
         KineticModel model = model();
-        double[] delaysS = DelayGrid.parse(delays);
+        double[] delaysS;
+        try {
+            delaysS = DelayGrid.parse(delays);
+        } catch (IllegalArgumentException e) {
+            // the grid is parsed here, not by a converter: name the option as every other bad flag value does
+            throw new IllegalArgumentException("option '--delays': " + e.getMessage(), e);
+        }
         double periodS = Double.NaN;
         if (repRate != null) {
             periodS = 1 / positive(repRate, Dimension.FREQUENCY, "--rep-rate");
