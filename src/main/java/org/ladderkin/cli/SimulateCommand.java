@@ -138,8 +138,15 @@ final class SimulateCommand implements Callable<Integer> {
         }
         // |λ₂| and pulses-to-1 % cost a dense eigen-decomposition per ⟨N⟩ and only the JSON output prints them
         boolean convergence = format.equals("json");
-        double work = LadderKinetics.checkWork(model, delaysS.length, !Double.isNaN(periodS), convergence,
-                pulses.toArray(PulseExcitation[]::new));
+        double work;
+        try {
+            work = LadderKinetics.checkWork(model, delaysS.length, !Double.isNaN(periodS), convergence,
+                    pulses.toArray(PulseExcitation[]::new));
+        } catch (org.ladderkin.kinetics.propagate.WorkLimitException e) {
+            // the options the estimate rests on, so the line says what to change
+            throw new IllegalArgumentException("--n-avg " + String.join(",", nAvg) + " with " + delaysS.length + " --delays: "
+                    + e.getMessage(), e);
+        }
         if (work > WorkBound.WARN_OPERATIONS && !quiet.on()) {
             spec.commandLine().getErr().println("ladderkin: note: about " + WorkBound.sci(work) + " operations (--n-avg, --delays, --rep-rate);"
                     + " this may take a while");

@@ -189,7 +189,12 @@ class FuzzTest {
         List<String> names = new ArrayList<>();
         for (String a : args) {
             if (a.startsWith("--")) {
-                names.add(a.split("=", 2)[0]);
+                String[] parts = a.split("=", 2);
+                names.add(parts[0]);
+                // --spectrum=FILE: an error naming FILE is located too
+                if (parts.length == 2 && !parts[1].isEmpty()) {
+                    names.add(fileName(parts[1]));
+                }
             } else if (a.isEmpty()) {
                 names.add("''");
             } else {
