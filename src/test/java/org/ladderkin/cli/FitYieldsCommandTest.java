@@ -15,7 +15,7 @@ import org.junit.jupiter.api.io.TempDir;
 /** {@code ladderkin fit-yields}: fit results in, the threshold law out as JSON, HTML and text; bad results located. */
 class FitYieldsCommandTest {
 
-    private static Path result(Path dir, String name, double photonEv, String eta, String se) throws Exception {
+    static Path result(Path dir, String name, double photonEv, String eta, String se) throws Exception {
         Path f = dir.resolve(name);
         Files.writeString(f, String.format(Locale.ROOT, """
                 {

@@ -139,4 +139,21 @@ class ReportInjectionTest {
             }
         }
     }
+
+    @Test
+    void resultFileNamesAreEscapedInTheYieldReport(@TempDir Path dir) throws Exception {
+        List<String> args = new ArrayList<>(List.of("fit-yields"));
+        double[] x = {2.0, 2.6, 3.0, 3.4, 3.8, 4.2};
+        for (int i = 0; i < x.length; i++) {
+            double eta = Math.max(0.001, (x[i] - 2.5) / 1.6 + (i % 2 == 0 ? 0.01 : -0.01));
+            args.add(FitYieldsCommandTest.result(dir, "r" + i + " " + TAG + ".json", 2 * x[i], Double.toString(eta), "0.03").toString());
+        }
+        Path out = dir.resolve("out");
+        args.addAll(List.of("--gap", "2eV", "--out", out.toString(), "--quiet"));
+        MainTest.Run run = MainTest.run(args.toArray(String[]::new));
+        assertThat(run.exit()).as(run.err()).isZero();
+        String html = Files.readString(out.resolve("fit-yields.html"));
+        assertInert(html, "fit-yields");
+        assertThat(html).contains("r0 " + escaped(TAG));
+    }
 }
