@@ -37,6 +37,22 @@ final class TracePrediction {
 
     static Predictions predict(KineticModel km, double[] nSeries, double period, double[] taDelays, double bandEdgeOd,
                                ModelAssumptions model, double sizeDispersion, PumpPulse pump) {
+        try {
+            return averaged(km, nSeries, period, taDelays, bandEdgeOd, model, sizeDispersion, pump);
+        } catch (org.ladderkin.kinetics.propagate.WorkLimitException e) {
+            if (sizeDispersion == 0) {
+                throw e;
+            }
+            // the largest dots of a wide distribution hold many times the mean ⟨N⟩: say so, or the line blames the delays
+            throw new IllegalArgumentException(String.format(java.util.Locale.ROOT, "at %.3g %% size dispersion the largest "
+                    + "dots of the average hold several times the mean ⟨N⟩ (%.3g at the top fluence) and the engine refuses "
+                    + "them; lower sizeDispersion or the highest fluence: %s", 100 * sizeDispersion,
+                    nSeries[nSeries.length - 1], e.getMessage()), e);
+        }
+    }
+
+    private static Predictions averaged(KineticModel km, double[] nSeries, double period, double[] taDelays,
+                                        double bandEdgeOd, ModelAssumptions model, double sizeDispersion, PumpPulse pump) {
         double[] plDelays = TimeWindows.logSpaced(1e-12, Math.min(period, 20 * model.tauSingleExcitonS()), 120);
         TimeWindows.EarlyLate windows = TimeWindows.earlyLate(model.coolingS(), model.tauBiexcitonS(), model.tauSingleExcitonS());
         double[] elTimes = {windows.earlyS(), windows.lateS()};
