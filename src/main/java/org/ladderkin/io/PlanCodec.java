@@ -64,7 +64,6 @@ public final class PlanCodec {
         String lab = root.optional("lab").map(Node::string).orElse("");
         Sample sample = sample(root.field("sample"), library);
         LaserSetup laser = laser(root.field("laser"));
-        SampleCodec.requireAboveGap(root.field("laser").field("pumpWavelengths"), sample);
         List<Instrument> instruments = root.field("instruments").items(1).stream().map(PlanCodec::instrument).toList();
         Node goalsNode = root.field("goals");
         Set<Goal> goals = EnumSet.noneOf(Goal.class);

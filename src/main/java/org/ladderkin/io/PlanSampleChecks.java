@@ -3,9 +3,10 @@ package org.ladderkin.io;
 import java.util.List;
 import org.ladderkin.io.json.Node;
 import org.ladderkin.material.Material;
+import org.ladderkin.observe.Heating;
 import org.ladderkin.plan.ModelAssumptions;
 import org.ladderkin.sample.Sample;
-import org.ladderkin.sample.SampleException;
+import org.ladderkin.units.Photon;
 
 /**
  * Checks that tie a plan's fields to its sample's material, made while the plan is read so each problem is reported
@@ -27,10 +28,15 @@ final class PlanSampleChecks {
             throw missing(root, material, m, "biexcitonLifetime", "an Auger volume constant ('augerVolumeConstantPsPerNm3')");
         }
         List<Node> pumps = root.field("laser").field("pumpWavelengths").items(1);
+        double gapJ = sample.firstExcitonEnergyJ();
         for (int i = 0; i < pumpWavelengthsM.size() && i < pumps.size(); i++) {
             try {
+                if (!Double.isNaN(gapJ)) {
+                    // energy conservation first: a sub-gap pump deposits no heat of its own and makes no exciton
+                    Heating.heatPerAbsorbedPhotonJ(Photon.energyJ(pumpWavelengthsM.get(i)), 1, gapJ);
+                }
                 sample.crossSectionAt(pumpWavelengthsM.get(i));
-            } catch (SampleException e) {
+            } catch (IllegalArgumentException e) { // SampleException included
                 throw pumps.get(i).error(InputProblem.OUT_OF_RANGE, e.getMessage());
             }
         }

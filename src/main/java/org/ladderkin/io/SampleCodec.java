@@ -151,21 +151,6 @@ public final class SampleCodec {
         }
     }
 
-    /**
-     * Refuses a pump photon below the sample's first exciton, at the offending wavelength: it makes no exciton of the
-     * ladder and would leave negative heat (docs/physics.md, "Heating": energy conservation).
-     */
-    public static void requireAboveGap(Node pumpWavelengths, Sample sample) {
-        double gapJ = sample.firstExcitonEnergyJ();
-        for (Node w : Double.isNaN(gapJ) ? java.util.List.<Node>of() : pumpWavelengths.items(1)) {
-            try {
-                org.ladderkin.observe.Heating.heatPerAbsorbedPhotonJ(org.ladderkin.units.Photon.energyJ(
-                        w.positive(Dimension.LENGTH, null)), 1, gapJ);
-            } catch (IllegalArgumentException e) {
-                throw w.error(InputProblem.OUT_OF_RANGE, e.getMessage());
-            }
-        }
-    }
 
     private static Refresh refresh(Node n) {
         String mode = n.field("mode").choice("static", "stirred", "flowing", "translated");
