@@ -79,38 +79,14 @@ public final class DeltaAMapReader {
     }
 
     private static DeltaAMap read(DelimitedLineReader in, MapOptions options, int[] headerLine) {
-        String header = in.nextContentLine();
-        if (header == null) {
-            throw new InputException(SourceLocation.of(in.file()), null, InputProblem.EMPTY,
-                    "no data (expected a ΔA map: first row one axis, first column the other)");
-        }
-        headerLine[0] = in.lineNumber();
-        in.detectDelimiter(header);
-        int width = in.count(header);
-        if (width < 2) {
-            throw new InputException(in.here(0), null, InputProblem.EMPTY, "the first row needs a corner cell and at least one axis value");
-        }
-        String[] cells = new String[width];
-        int[] starts = new int[width];
-        in.split(header, cells, starts);
-        String corner = TraceTableReader.unquote(cells[0]);
-        double[] axis = new double[width - 1];
-        for (int c = 1; c < width; c++) {
-            axis[c - 1] = in.number(cells[c], starts[c], "first row");
-            if (Double.isNaN(axis[c - 1])) {
-                throw new InputException(in.here(starts[c]), "first row", InputProblem.MISSING_VALUE, "missing axis value (every column needs one)");
-            }
-        }
+        MatrixHeader h = MatrixHeader.read(in, "a ΔA map");
+        headerLine[0] = h.line();
+        String corner = h.corner();
+        double[] axis = h.axis();
+        int[] starts = h.starts();
         Unit spectral = MapCorner.spectralUnit(corner, options);
         MatrixOptions.Orientation o = MapCorner.orientation(options, corner, axis, spectral, in);
-        Unit delayUnit = HeaderUnit.find(corner, Dimension.TIME);
-        if (delayUnit == null) {
-            delayUnit = options.defaultDelayUnit();
-        }
-        if (delayUnit == null) {
-            throw new InputException(in.here(starts[0]), "corner cell", InputProblem.WRONG_UNIT, "no time unit for the delays (write the corner as "
-                    + "'delay (ps) \\ wavelength (nm)' or give the delay unit)");
-        }
+        Unit delayUnit = h.delayUnit(in, options.defaultDelayUnit(), "give the delay unit");
         MapCorner.Signal signal = MapCorner.signal(corner, options.signal());
         Axis first = new Axis(in, in.lineNumber(), spectral, delayUnit);
         return o == MatrixOptions.Orientation.DELAYS_DOWN

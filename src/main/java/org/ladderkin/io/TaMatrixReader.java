@@ -41,36 +41,13 @@ public final class TaMatrixReader {
     }
 
     private static Trace read(DelimitedLineReader in, String label, MatrixOptions options) {
-        String header = in.nextContentLine();
-        if (header == null) {
-            throw new InputException(SourceLocation.of(in.file()), null, InputProblem.EMPTY, "no data (expected a TA matrix: first row one axis, first column the other)");
-        }
-        in.detectDelimiter(header);
-        int width = in.count(header);
-        if (width < 2) {
-            throw new InputException(in.here(0), null, InputProblem.EMPTY, "the first row needs a corner cell and at least one axis value");
-        }
-        String[] cells = new String[width];
-        int[] starts = new int[width];
-        in.split(header, cells, starts);
-        int headerLine = in.lineNumber();
-        String corner = TraceTableReader.unquote(cells[0]);
-        double[] axis = new double[width - 1];
-        for (int c = 1; c < width; c++) {
-            axis[c - 1] = in.number(cells[c], starts[c], "first row");
-            if (Double.isNaN(axis[c - 1])) {
-                throw new InputException(in.here(starts[c]), "first row", InputProblem.MISSING_VALUE, "missing axis value (every column needs one)");
-            }
-        }
+        MatrixHeader h = MatrixHeader.read(in, "a TA matrix");
+        int headerLine = h.line();
+        String corner = h.corner();
+        double[] axis = h.axis();
+        int[] starts = h.starts();
         MatrixOptions.Orientation o = orientation(options, corner, axis, in);
-        Unit delayUnit = HeaderUnit.find(corner, Dimension.TIME);
-        if (delayUnit == null) {
-            delayUnit = options.defaultDelayUnit();
-        }
-        if (delayUnit == null) {
-            throw new InputException(in.here(starts[0]), "corner cell", InputProblem.WRONG_UNIT, "no time unit for the delays (write the corner as "
-                    + "'delay (ps) \\ wavelength (nm)' or give --delay-unit)");
-        }
+        Unit delayUnit = h.delayUnit(in, options.defaultDelayUnit(), "give --delay-unit");
         Unit lambdaUnit = HeaderUnit.find(corner, Dimension.LENGTH);
         if (lambdaUnit == null) {
             lambdaUnit = options.defaultWavelengthUnit();
