@@ -8,6 +8,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.ladderkin.units.Rounded;
 import org.ladderkin.excite.beam.BeamPlane;
 import org.ladderkin.excite.beam.BeamRadius;
 import org.ladderkin.excite.beam.CausticFit;
@@ -203,12 +204,12 @@ final class BeamCommand implements Callable<Integer> {
                 out.println("  1/e² radius  " + pm(f.radius(), 1e6) + " µm (erf fit, " + f.points() + " points)");
                 out.println("  10–90 % rule " + (Double.isNaN(f.tenNinetyRadiusM()) ? "not crossed by the data"
                         : num(f.tenNinetyRadiusM() * 1e6) + " µm" + agreement(f)));
-                out.println("  centre       " + num(f.centreM() * 1e6) + " ± " + err(f.centreStdErrorM() * 1e6) + " µm");
+                out.println("  centre       " + Rounded.pm(f.centreM() * 1e6, f.centreStdErrorM() * 1e6) + " µm");
             } else if (m instanceof BeamFiles.Image im) {
                 SecondMoments s = im.moments();
                 out.println(im.file() + ": camera frame (second moments, ISO 11146-1" + where + ")");
-                out.println("  D4σx " + num(s.d4SigmaXM() * 1e6) + " ± " + err(s.d4SigmaXStdErrorM() * 1e6) + " µm, D4σy "
-                        + num(s.d4SigmaYM() * 1e6) + " ± " + err(s.d4SigmaYStdErrorM() * 1e6) + " µm, ellipticity "
+                out.println("  D4σx " + Rounded.pm(s.d4SigmaXM() * 1e6, s.d4SigmaXStdErrorM() * 1e6) + " µm, D4σy "
+                        + Rounded.pm(s.d4SigmaYM() * 1e6, s.d4SigmaYStdErrorM() * 1e6) + " µm, ellipticity "
                         + Numbers.sig(s.ellipticity(), 3) + ", angle " + Numbers.sig(s.angleDeg(), 3) + "°"
                         + (s.ellipticity() > SecondMoments.CIRCULAR ? " (round within ISO's 0.87: the angle means little)" : ""));
                 out.println("  1/e² radius  " + pm(s.radius(), 1e6) + " µm (√(wx·wy), wx = D4σx/2 for a Gaussian)");
@@ -228,12 +229,12 @@ final class BeamCommand implements Callable<Integer> {
         }
         for (var e : caustics.entrySet()) {
             CausticFit c = e.getValue();
-            out.println("Caustic (" + e.getKey() + ", " + c.points() + " planes): w0 = " + num(c.waistRadiusM() * 1e6) + " ± "
-                    + num(c.waistRadiusStdErrorM() * 1e6) + " µm at z0 = " + num(c.waistPositionM() * 1e3) + " ± "
-                    + num(c.waistPositionStdErrorM() * 1e3) + " mm, zR = " + num(c.rayleighRangeM() * 1e3) + " ± "
-                    + num(c.rayleighRangeStdErrorM() * 1e3) + " mm, "
+            out.println("Caustic (" + e.getKey() + ", " + c.points() + " planes): w0 = " + Rounded.pm(c.waistRadiusM() * 1e6,
+                    c.waistRadiusStdErrorM() * 1e6) + " µm at z0 = " + Rounded.pm(c.waistPositionM() * 1e3,
+                    c.waistPositionStdErrorM() * 1e3) + " mm, zR = " + Rounded.pm(c.rayleighRangeM() * 1e3,
+                    c.rayleighRangeStdErrorM() * 1e3) + " mm, "
                     + (Double.isNaN(c.mSquared()) ? "M² needs --wavelength"
-                            : "M² = " + Numbers.sig(c.mSquared(), 3) + " ± " + Numbers.sig(c.mSquaredStdError(), 2)));
+                            : "M² = " + Rounded.pm(c.mSquared(), c.mSquaredStdError())));
             out.println("  a sample within " + num(0.1 * c.rayleighRangeM() * 1e3) + " mm of z0 sees w within 0.5 % of w0");
             if (!c.isoSampling()) {
                 out.println("  note: ISO 11146-1 asks for " + CausticFit.ISO_PLANES + " or more planes, about half within zR of the"
@@ -250,12 +251,7 @@ final class BeamCommand implements Callable<Integer> {
     }
 
     private static String pm(BeamRadius r, double scale) {
-        return num(r.radiusM() * scale) + " ± " + err(r.stdErrorM() * scale);
-    }
-
-    /** A standard error: two significant digits are all it carries. */
-    private static String err(double v) {
-        return Numbers.sig(v, 2);
+        return Rounded.pm(r.radiusM() * scale, r.stdErrorM() * scale);
     }
 
     private static String num(double v) {

@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.ladderkin.units.Rounded;
 import org.ladderkin.fit.ThresholdLawFit;
 import org.ladderkin.fit.YieldSummary;
 import org.ladderkin.io.AtomicFiles;
@@ -90,11 +91,11 @@ final class FitYieldsCommand implements Callable<Integer> {
         } else {
             PrintWriter out = quiet.summary();
             out.println(String.format(Locale.ROOT, "Threshold law over %d photon energies (E_g = %.4g eV):", points.size(), gapEv));
-            out.println(String.format(Locale.ROOT, "  E_th / E_g   %.4g ± %.2g   (energy conservation: 2)",
-                    r.thresholdOverGap(), r.thresholdStdError()));
-            out.println(String.format(Locale.ROOT, "  ε_eh / E_g   %.4g ± %.2g   (energy conservation: 1)",
-                    r.pairEnergyOverGap(), r.pairEnergyStdError()));
-            out.println(String.format(Locale.ROOT, "  η_CM         %.4g ± %.2g", r.efficiency(), r.efficiencyStdError()));
+            out.println("  E_th / E_g   " + Rounded.pm(r.thresholdOverGap(), r.thresholdStdError())
+                    + "   (energy conservation: 2)");
+            out.println("  ε_eh / E_g   " + Rounded.pm(r.pairEnergyOverGap(), r.pairEnergyStdError())
+                    + "   (energy conservation: 1)");
+            out.println("  η_CM         " + Rounded.pm(r.efficiency(), r.efficiencyStdError()));
             out.println(String.format(Locale.ROOT, "  χ² %.3g over %d degrees of freedom", r.chiSquare(), r.degreesOfFreedom()));
             if (outDir != null) {
                 out.println("wrote " + outDir.resolve("fit-yields.html") + " and fit-yields.json");

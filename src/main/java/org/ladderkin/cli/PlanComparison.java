@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.ladderkin.units.Rounded;
 import org.ladderkin.fit.FitResult;
 import org.ladderkin.fit.LadderFit;
 import org.ladderkin.fit.ParameterEstimate;
@@ -25,14 +26,14 @@ record PlanComparison(List<List<String>> rows, ObjectNode json) {
         ObjectNode json = ResolvedJson.object();
         json.put("planFile", planFile.toString());
         r.find("tauAuger2S", -1).ifPresent(e -> {
-            rows.add(List.of("τ₂ (ps)", num(plan.model().tauBiexcitonS() * 1e12), num(e.value() * 1e12) + " ± " + num(e.stdError() * 1e12),
+            rows.add(List.of("τ₂ (ps)", num(plan.model().tauBiexcitonS() * 1e12), Rounded.pm(e.value() * 1e12, e.stdError() * 1e12),
                     "ratio fit/plan " + num(e.value() / plan.model().tauBiexcitonS())));
             json.put("tauAuger2PsPlanned", plan.model().tauBiexcitonS() * 1e12);
             json.put("tauAuger2PsFitted", e.value() * 1e12);
         });
         r.find("tauRadS", -1).ifPresent(e -> {
-            rows.add(List.of("τ₁ / τ_rad (ns)", num(plan.model().tauSingleExcitonS() * 1e9), num(e.value() * 1e9)
-                    + (e.fixed() ? " (fixed)" : " ± " + num(e.stdError() * 1e9)), "the plan's τ₁ includes non-radiative decay"));
+            rows.add(List.of("τ₁ / τ_rad (ns)", num(plan.model().tauSingleExcitonS() * 1e9), e.fixed()
+                    ? num(e.value() * 1e9) + " (fixed)" : Rounded.pm(e.value() * 1e9, e.stdError() * 1e9), "the plan's τ₁ includes non-radiative decay"));
             json.put("tauSingleNsPlanned", plan.model().tauSingleExcitonS() * 1e9);
         });
         if (plan.design() != null) {

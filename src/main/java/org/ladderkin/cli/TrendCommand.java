@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
+import org.ladderkin.units.Rounded;
 import org.ladderkin.archive.ArchiveException;
 import org.ladderkin.archive.ArchiveStore;
 import org.ladderkin.archive.FitQuery;
@@ -197,12 +198,12 @@ final class TrendCommand implements Callable<Integer> {
                 out.println(String.format(Locale.ROOT, "  %s: %d samples, too few for a line", m.material(), m.points().size()));
                 continue;
             }
-            out.println(String.format(Locale.ROOT, "  %s: %d samples, exponent %.3f ± %.3f, prefactor %.4g ± %.2g, intrinsic "
-                    + "scatter %.1f %%", m.material(), m.points().size(), f.exponent(), f.exponentStdError(), f.prefactor(),
-                    f.prefactorStdError(), 100 * f.scatterLn()));
+            out.println(String.format(Locale.ROOT, "  %s: %d samples, exponent %s, prefactor %s, intrinsic scatter %.1f %%",
+                    m.material(), m.points().size(), Rounded.pm(f.exponent(), f.exponentStdError()),
+                    Rounded.pm(f.prefactor(), f.prefactorStdError()), 100 * f.scatterLn()));
             if (m.augerVolumeConstant() != null) {
-                out.println(String.format(Locale.ROOT, "    τ₂/V = %.4g ± %.2g ps/nm³ (exponent held at 1)",
-                        m.augerVolumeConstant().prefactor(), m.augerVolumeConstant().prefactorStdError()));
+                out.println("    τ₂/V = " + Rounded.pm(m.augerVolumeConstant().prefactor(),
+                        m.augerVolumeConstant().prefactorStdError()) + " ps/nm³ (exponent held at 1)");
             }
             m.reference().ifPresent(r -> out.println(String.format(Locale.ROOT, "    library scaling: %.4g·x^%.3g (%s)",
                     r.prefactor(), r.exponent(), r.source())));

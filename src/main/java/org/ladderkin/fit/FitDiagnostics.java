@@ -3,6 +3,7 @@ package org.ladderkin.fit;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.ladderkin.units.Rounded;
 
 /**
  * Findings about the sample and the set-up read from a finished ladder fit, each with what to change: a model that
@@ -358,12 +359,12 @@ final class FitDiagnostics {
         if (a > MIN_EXCESS && a > SIGNIFICANCE * se) {
             double f = a / (1 + a);
             return new String[] {String.format(Locale.ROOT, "photocharging: the fast decay of the weakest traces does not "
-                    + "vanish as the fluence goes to zero (excess early/late ratio %.3f ± %.3f at zero fluence, from %d traces "
+                    + "vanish as the fluence goes to zero (excess early/late ratio %s at zero fluence, from %d traces "
                     + "at ⟨N⟩ ≤ %.0f): about %.0f%% of the dots are charged before each pulse and their trion decay is read "
                     + "as biexcitons, which raises σ and τ₂; stir or flow the sample (or lower the repetition rate) and "
-                    + "compare, or fit with a charging process", a, se, rows.size(), LOW_N, 100 * f), null};
+                    + "compare, or fit with a charging process", Rounded.pm(a, se), rows.size(), LOW_N, 100 * f), null};
         }
         return new String[] {null, String.format(Locale.ROOT, "photocharging: tested, none seen (excess early/late ratio "
-                + "%.3f ± %.3f at zero fluence from %d weak traces; 10%% charged dots would give about 0.11)", a, se, rows.size())};
+                + "%s at zero fluence from %d weak traces; 10%% charged dots would give about 0.11)", Rounded.pm(a, se), rows.size())};
     }
 }

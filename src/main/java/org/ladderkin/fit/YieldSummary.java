@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import org.ladderkin.units.Rounded;
 
 /**
  * What a fit that freed the multiplication yield reports beside it: the photon energy η belongs to, the early/late
@@ -101,14 +102,15 @@ public record YieldSummary(OptionalDouble photonEnergyJ, double eta, double etaS
         List<String> out = new ArrayList<>();
         String pump = photonEnergyJ.isPresent() ? String.format(Locale.ROOT, " at ħω = %.4g eV",
                 photonEnergyJ.getAsDouble() / org.ladderkin.units.PhysicalConstants.ELECTRONVOLT_J) : " (photon energy not given: --pump or the sidecar)";
-        out.add(String.format(Locale.ROOT, "  multiplication yield%s: full fit η = %.3g ± %.2g%s", pump, eta, etaStdError,
+        out.add(String.format(Locale.ROOT, "  multiplication yield%s: full fit η = %s%s", pump, Rounded.pm(eta, etaStdError),
                 staticRun.isPresent() ? " (from the refreshed run)" : ""));
         staticRun.ifPresent(s -> out.add(String.format(Locale.ROOT, "  static run%s alone: η = %.3g, charged fraction before "
                 + "a pulse %.3g (trions from earlier pulses; its η is not the yield)", Double.isNaN(s.periodS()) ? ""
                 : " at " + new java.math.BigDecimal(1e-6 / s.periodS()).round(new java.math.MathContext(3)).stripTrailingZeros()
                 .toPlainString() + " MHz", s.eta(), s.chargedFraction())));
-        earlyLate.ifPresent(e -> out.add(String.format(Locale.ROOT, "  early/late A/B → 1 + η = %.4g ± %.2g (η = %.3g; A at "
-                + "%.3g ps, B at %.3g ps, %d weakest traces)", e.limit(), e.limitStdError(), e.eta(), e.earlyS() * 1e12,
+        earlyLate.ifPresent(e -> out.add(String.format(Locale.ROOT, "  early/late A/B → 1 + η = %s (η = %s; A at "
+                + "%.3g ps, B at %.3g ps, %d weakest traces)", Rounded.pm(e.limit(), e.limitStdError()),
+                Rounded.value(e.eta(), e.limitStdError()), e.earlyS() * 1e12,
                 e.lateS() * 1e12, e.x().length)));
         if (!earlyLateNote.isEmpty()) {
             out.add("  " + earlyLateNote);

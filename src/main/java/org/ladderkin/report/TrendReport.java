@@ -3,6 +3,7 @@ package org.ladderkin.report;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.ladderkin.units.Rounded;
 import org.ladderkin.archive.PowerLawFit;
 import org.ladderkin.archive.Trend;
 import org.ladderkin.archive.TrendPoint;
@@ -117,7 +118,7 @@ public final class TrendReport {
     }
 
     private static String pm(double v, double e) {
-        return Double.isNaN(e) ? g(v) : g(v) + " ± " + String.format(Locale.ROOT, "%.2g", e);
+        return Double.isNaN(e) ? g(v) : Rounded.pm(v, e);
     }
 
     private static String g(double v) {

@@ -22,6 +22,7 @@ import javax.swing.JTable;
 import javax.swing.ListSelectionModel;
 import javax.swing.SwingWorker;
 import javax.swing.table.AbstractTableModel;
+import org.ladderkin.units.Rounded;
 import org.ladderkin.archive.ArchivedFit;
 import org.ladderkin.archive.FitParameter;
 import org.ladderkin.archive.Trend;
@@ -147,8 +148,8 @@ public final class SampleSeriesWindow extends JFrame {
         List<String> parts = new ArrayList<>();
         for (Trend.MaterialTrend m : t.materials()) {
             parts.add(m.fit() == null ? m.material() + ": " + m.points().size() + " samples"
-                    : String.format(Locale.ROOT, "%s: p = %.2f ± %.2f, scatter %.0f %%", m.material(), m.fit().exponent(),
-                    m.fit().exponentStdError(), 100 * m.fit().scatterLn()));
+                    : String.format(Locale.ROOT, "%s: p = %s, scatter %.0f %%", m.material(),
+                    Rounded.pm(m.fit().exponent(), m.fit().exponentStdError()), 100 * m.fit().scatterLn()));
         }
         return parts.isEmpty() ? "no fit gives " + t.y().parameterKey() : String.join("; ", parts);
     }
